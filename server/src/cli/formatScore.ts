@@ -1,0 +1,151 @@
+// Formatters for `rungs score`: one result type in, one string out (table, CSV, JSON).
+import type { Analysis, ItemAnalysis, Problem } from '../core/types';
+import { formatNumber } from '../core/pace';
+
+export interface ScoredFile {
+  file: string;
+  analysis: Analysis;
+  problems: Problem[];
+}
+
+const round = (n: number, d: number) => Number(n.toFixed(d));
+
+/** The documented JSON schema (README "JSON output"); lines and columns are 1-based. */
+export function scoreJson(s: ScoredFile): unknown {
+  const { analysis } = s;
+  const title = analysis.script.header.find((h) => h.key === 'title')?.value ?? null;
+  return {
+    file: s.file,
+    title,
+    paces: analysis.options.paces.map((p) => p.label),
+    baseline: analysis.options.baseline,
+    rungs: analysis.rungs.map((r) => ({
+      name: r.node.name,
+      line: r.node.line + 1,
+      paces: r.paces.map((p) => p.label),
+      median: r.median,
+      min: r.min,
+      max: r.max,
+      totalSeconds: Object.fromEntries(r.paces.map((p, i) => [p.label, round(r.totalSeconds[i], 2)])),
+      items: r.items.map((it) => itemJson(it)),
+    })),
+    problems: s.problems.map((p) => ({
+      line: p.line + 1,
+      column: p.character + 1,
+      endLine: p.endLine + 1,
+      endColumn: p.endCharacter + 1,
+      severity: p.severity,
+      rule: p.rule,
+      message: p.message,
+    })),
+  };
+}
+
+function itemJson(it: ItemAnalysis): unknown {
+  return {
+    line: it.node.line + 1,
+    text: it.node.text,
+    id: it.node.id,
+    note: it.node.note,
+    sets: it.node.sets,
+    words: it.wordCount,
+    syllables: it.syllables,
+    phonemes: it.phonemes,
+    wcm: it.wcm,
+    zipfMean: round(it.zipfMean, 4),
+    zipfMin: round(it.zipfMin, 4),
+    lowFrequencyWords: it.lowFrequencyWords,
+    estimatedWords: it.estimatedWords,
+    difficulty: it.difficulty,
+    rank: it.rank,
+    durations: Object.fromEntries(it.timings.map((t) => [t.pace.label, round(t.seconds, 3)])),
+    syllableRates: Object.fromEntries(it.timings.map((t) => [t.pace.label, round(t.syllableRate, 3)])),
+    estimates: it.words
+      .filter((w) => w.source === 'estimate' || w.source === 'morphology')
+      .map((w) => ({ word: w.spoken, phones: w.phones.join(' '), source: w.source })),
+  };
+}
+
+export function formatJson(files: ScoredFile[]): string {
+  const out = files.length === 1 ? scoreJson(files[0]) : files.map(scoreJson);
+  return `${JSON.stringify(out, null, 2)}\n`;
+}
+
+function csvCell(v: string | number | null): string {
+  const s = v === null ? '' : String(v);
+  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+/** One row per item; duration columns are the union of the paces in the files, in first-seen order. */
+export function formatCsv(files: ScoredFile[]): string {
+  const paceLabels: string[] = [];
+  for (const f of files) for (const r of f.analysis.rungs) for (const p of r.paces) if (!paceLabels.includes(p.label)) paceLabels.push(p.label);
+  const head = ['file', 'rung', 'line', 'id', 'text', 'words', 'syllables', 'phonemes', 'wcm', 'zipf_mean', 'zipf_min', 'low_frequency_words', 'estimated_words', 'difficulty', 'rank', ...paceLabels.map((l) => `seconds_at_${l.replace(' ', '_')}`)];
+  const rows = [head.join(',')];
+  for (const f of files) {
+    for (const r of f.analysis.rungs) {
+      for (const it of r.items) {
+        const byLabel = new Map(it.timings.map((t) => [t.pace.label, round(t.seconds, 3)]));
+        rows.push(
+          [f.file, r.node.name, it.node.line + 1, it.node.id, it.node.text, it.wordCount, it.syllables, it.phonemes, it.wcm, round(it.zipfMean, 4), round(it.zipfMin, 4), it.lowFrequencyWords, it.estimatedWords, it.difficulty, it.rank, ...paceLabels.map((l) => byLabel.get(l) ?? null)]
+            .map(csvCell)
+            .join(','),
+        );
+      }
+    }
+  }
+  return `${rows.join('\n')}\n`;
+}
+
+function pad(s: string, width: number, right = false): string {
+  const n = [...s].length;
+  if (n >= width) return s;
+  return right ? ' '.repeat(width - n) + s : s + ' '.repeat(width - n);
+}
+
+/** An aligned table for people: a block per file, a header per rung, one row per item. */
+export function formatTable(files: ScoredFile[], caution: string): string {
+  const out: string[] = [];
+  for (const f of files) {
+    const a = f.analysis;
+    const title = a.script.header.find((h) => h.key === 'title')?.value;
+    const base = a.options.baseline ? `; baseline ${formatNumber(a.options.baseline)} wps` : '';
+    out.push(`${f.file}${title ? ` — ${title}` : ''}  (paces ${a.options.paces.map((p) => p.label).join(', ')}${base})`);
+    for (const r of a.rungs) {
+      const cols = ['line', 'words', 'syl', 'phon', 'WCM', 'Zipf mean', 'Zipf min', 'diff', 'rank', ...r.paces.map((p) => `s@${p.label}`)];
+      const rows = r.items.map((it) => [
+        String(it.node.line + 1),
+        String(it.wordCount),
+        String(it.syllables),
+        String(it.phonemes),
+        String(it.wcm),
+        it.zipfMean.toFixed(2),
+        it.zipfMin.toFixed(2),
+        it.difficulty.toFixed(1),
+        String(it.rank),
+        ...it.timings.map((t) => t.seconds.toFixed(1)),
+      ]);
+      const widths = cols.map((c, i) => Math.max(c.length, ...rows.map((row) => row[i].length)));
+      const paceNotes = r.paces
+        .map((p, i) => `${formatNumber(r.totalSeconds[i], 1)} s at ${p.label}`)
+        .join(', ');
+      out.push('');
+      out.push(`  == ${r.node.name} (line ${r.node.line + 1}): ${r.items.length} item${r.items.length === 1 ? '' : 's'}, median ${r.median.toFixed(1)}, range ${r.min.toFixed(1)}-${r.max.toFixed(1)}; total ${paceNotes || '—'}`);
+      out.push(`    ${cols.map((c, i) => pad(c, widths[i], true)).join('  ')}  text`);
+      r.items.forEach((it, k) => {
+        const est = it.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => w.spoken);
+        const mark = est.length ? `   [estimated: ${[...new Set(est)].join(', ')}]` : '';
+        out.push(`    ${rows[k].map((c, i) => pad(c, widths[i], true)).join('  ')}  ${it.node.text}${mark}`);
+      });
+    }
+    const fast = a.options.paces.filter((p) => p.unit === 'wps' && p.value > a.options.readingNormWps);
+    if (fast.length) out.push('', `  note: ${fast.map((p) => p.label).join(', ')} is faster than adult reading aloud (${formatNumber(a.options.readingNormWps)} wps, Brysbaert 2019)`);
+    if (f.problems.length) {
+      out.push('', `  ${f.problems.length} problem${f.problems.length === 1 ? '' : 's'}:`);
+      for (const p of f.problems) out.push(`    ${p.line + 1}:${p.character + 1}  ${p.severity}  ${p.rule}  ${p.message}`);
+    }
+    out.push('');
+  }
+  out.push(caution);
+  return `${out.join('\n')}\n`;
+}

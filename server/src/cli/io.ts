@@ -1,0 +1,27 @@
+// What the CLI may touch, passed in so tests can run commands in-process on a fake file system.
+export interface CliFs {
+  readFile(path: string): string;
+  writeFile(path: string, text: string): void;
+  isDirectory(path: string): boolean;
+  exists(path: string): boolean;
+  readdir(path: string): string[];
+}
+
+export interface CliIO {
+  argv: string[];
+  cwd: string;
+  fs: CliFs;
+  stdout: (text: string) => void;
+  stderr: (text: string) => void;
+  /** Reads all of standard input (for `-`). */
+  readStdin?: () => string;
+  /** True when stdout is a terminal (colour, progress). */
+  isTTY?: boolean;
+  env?: Record<string, string | undefined>;
+}
+
+export const EXIT_OK = 0;
+export const EXIT_PROBLEMS = 1;
+export const EXIT_USAGE = 2;
+
+export class UsageError extends Error {}

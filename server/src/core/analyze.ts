@@ -1,0 +1,197 @@
+// The analysis core: text and options in, plain data out. No files, no protocol, no process:
+// the CLI, the language server and the tests all call `analyze` the same way.
+import { composite, difficultyComponents, median } from './difficulty';
+import { LOW_FREQUENCY_ZIPF } from './frequency';
+import { applySettings, defaultOptions } from './options';
+import { timeAt } from './pace';
+import { parseScript } from './parse';
+import { Pronouncer } from './pronounce';
+import { tokenize } from './tokenize';
+import type {
+  Analysis,
+  AnalysisOptions,
+  ItemAnalysis,
+  ItemNode,
+  Override,
+  Pace,
+  Problem,
+  RungAnalysis,
+  WordAnalysis,
+  WordData,
+} from './types';
+import { addWcmParts, emptyWcmParts } from './wcm';
+
+export interface AnalyzeInput {
+  text: string;
+  data: WordData;
+  /** Defaults merged with any workspace config; the script header is applied on top. */
+  options?: AnalysisOptions;
+  /** Workspace lexicon overrides; the script's own `@say` lines win over them. */
+  lexicon?: Override[];
+  /**
+   * A pronouncer to reuse between analyses of the same document (the language server keeps one
+   * per document so unchanged words are not scored again). Used only when its key matches.
+   */
+  reuse?: { key: string; pronouncer: Pronouncer };
+}
+
+export interface AnalyzeOutput extends Analysis {
+  /** The pronouncer used, with a key for reuse on the next analysis. */
+  pronouncer: { key: string; pronouncer: Pronouncer };
+}
+
+function pronouncerKey(overrides: Override[], options: AnalysisOptions): string {
+  const o = overrides.map((x) => `${x.word}=${x.phones.join(' ')}/${x.variant ?? ''}`).join(';');
+  return `${JSON.stringify(options.wcm)}|${o}`;
+}
+
+export function analyzeItem(
+  node: ItemNode,
+  rung: number,
+  paces: Pace[],
+  options: AnalysisOptions,
+  pronouncer: Pronouncer,
+  problems: Problem[],
+): ItemAnalysis {
+  const tokens = tokenize(node.text, node.textStart);
+  const words: WordAnalysis[] = [];
+  const parts = emptyWcmParts();
+  let syllables = 0;
+  let phonemes = 0;
+  let wcm = 0;
+  let zipfSum = 0;
+  let zipfMin = Infinity;
+  let low = 0;
+  let estimated = 0;
+  for (const t of tokens) {
+    for (const spoken of t.words) {
+      const s = pronouncer.score(spoken, t.variant);
+      if (s.variantError && t.variant !== null) {
+        problems.push({
+          rule: 'bad-variant',
+          severity: 'warning',
+          message: `${s.variantError}; the first is used`,
+          line: node.line,
+          character: t.start,
+          endLine: node.line,
+          endCharacter: t.end,
+        });
+      }
+      words.push({
+        surface: t.surface,
+        start: t.start,
+        end: t.end,
+        spoken,
+        phones: s.phones,
+        source: s.source,
+        variant: s.variant,
+        variants: s.variants,
+        syllables: s.syllables,
+        phonemes: s.phonemes,
+        wcm: s.wcm,
+        count: s.count,
+        zipf: s.zipf,
+        lg10wf: s.lg10wf,
+      });
+      syllables += s.syllables;
+      phonemes += s.phonemes;
+      wcm += s.wcm.total;
+      addWcmParts(parts, s.wcm.parts);
+      zipfSum += s.zipf;
+      if (s.zipf < zipfMin) zipfMin = s.zipf;
+      if (s.zipf < LOW_FREQUENCY_ZIPF) low++;
+      if (s.source === 'estimate' || s.source === 'morphology') estimated++;
+    }
+  }
+  const wordCount = words.length;
+  const zipfMean = wordCount ? zipfSum / wordCount : 0;
+  if (!wordCount) zipfMin = 0;
+  const components = difficultyComponents({ syllables, words: wordCount, wcm, zipfMean, zipfMin });
+  return {
+    node,
+    rung,
+    words,
+    wordCount,
+    syllables,
+    phonemes,
+    wcm,
+    wcmParts: parts,
+    zipfMean,
+    zipfMin,
+    lowFrequencyWords: low,
+    estimatedWords: estimated,
+    difficulty: composite(components, options.weights),
+    components,
+    rank: 0,
+    timings: paces.map((p) => timeAt(p, wordCount, syllables, options.baseline, options.readingNormWps)),
+  };
+}
+
+/** Ranks items 1..n by difficulty within a rung (ties share the lower rank, in line order). */
+function rankItems(items: ItemAnalysis[]): void {
+  const sorted = [...items].sort((a, b) => a.difficulty - b.difficulty || a.node.line - b.node.line);
+  let rank = 0;
+  let last = NaN;
+  sorted.forEach((it, i) => {
+    if (it.difficulty !== last) rank = i + 1;
+    last = it.difficulty;
+    it.rank = rank;
+  });
+}
+
+export function analyze(input: AnalyzeInput): AnalyzeOutput {
+  const script = parseScript(input.text);
+  const problems: Problem[] = [...script.problems];
+  const header = applySettings(input.options ?? defaultOptions(), script.header, 'script');
+  const options = header.options;
+  problems.push(...header.problems);
+
+  const overrides = [...(input.lexicon ?? []), ...script.overrides];
+  const key = pronouncerKey(overrides, options);
+  const pronouncer =
+    input.reuse && input.reuse.key === key ? input.reuse.pronouncer : new Pronouncer(input.data, overrides, options.wcm);
+  for (const o of script.overrides) {
+    if (o.variant === null) continue;
+    const listed = input.data.pronunciations(o.word)?.length ?? 0;
+    if (o.variant < 1 || o.variant > listed) {
+      problems.push({
+        rule: 'bad-variant',
+        severity: 'warning',
+        message: listed
+          ? `"${o.word}" has ${listed} listed pronunciation${listed === 1 ? '' : 's'}, not ${o.variant}; the first is used`
+          : `"${o.word}" is not in the dictionary, so there is no listed pronunciation ${o.variant} to choose`,
+        line: o.line,
+        character: o.character,
+        endLine: o.line,
+        endCharacter: o.character + o.word.length,
+      });
+    }
+  }
+
+  const rungs: RungAnalysis[] = [];
+  const items: ItemAnalysis[] = [];
+  script.rungs.forEach((node, index) => {
+    const rungSettings = applySettings(options, node.settings, 'rung');
+    problems.push(...rungSettings.problems);
+    const explicitPaces = node.settings.some((s) => s.key === 'pace' || s.key === 'paces');
+    const paces = explicitPaces ? rungSettings.options.paces : options.paces;
+    node.paces = explicitPaces ? paces : null;
+    const rungItems = node.items.map((it) => analyzeItem(it, index, paces, options, pronouncer, problems));
+    rankItems(rungItems);
+    const ds = rungItems.map((i) => i.difficulty);
+    rungs.push({
+      node,
+      index,
+      paces,
+      items: rungItems,
+      median: median(ds),
+      min: ds.length ? Math.min(...ds) : 0,
+      max: ds.length ? Math.max(...ds) : 0,
+      totalSeconds: paces.map((_, pi) => rungItems.reduce((sum, it) => sum + it.timings[pi].seconds, 0)),
+    });
+    items.push(...rungItems);
+  });
+
+  problems.sort((a, b) => a.line - b.line || a.character - b.character);
+  return { script, options, rungs, items, problems, pronouncer: { key, pronouncer } };
+}

@@ -1,0 +1,207 @@
+// Pronunciations for words the dictionary does not list. Morphology comes first: most unknown
+// words in scripts are an inflection, a derivation or a compound of listed words, and building on
+// a listed stem is far more reliable than spelling rules. Only when no analysis works do the NRL
+// letter-to-sound rules guess from the letters.
+
+import type { WordData } from '../types';
+import { letterToSound } from './letterToSound';
+
+export interface Estimate {
+  /** CMU ARPAbet phones, stress digits on vowels. */
+  phones: string[];
+  source: 'morphology' | 'estimate';
+  /** In words, how the phones were found, e.g. "stem 'bake' + -ing". */
+  how: string;
+}
+
+interface Analysis {
+  phones: string[];
+  how: string;
+}
+
+const SIBILANT_PHONES = new Set(['S', 'Z', 'SH', 'ZH', 'CH', 'JH']);
+const VOICELESS_PHONES = new Set(['P', 'T', 'K', 'F', 'TH', 'S', 'SH', 'CH', 'HH']);
+
+function isVowelPhone(phone: string): boolean {
+  return /\d$/.test(phone);
+}
+
+/** The first listed pronunciation of a word, `# comment` stripped, or undefined. */
+function listed(word: string, data: WordData): string[] | undefined {
+  const first = data.pronunciations(word)?.[0];
+  if (first === undefined) return undefined;
+  const phones = first.replace(/#.*$/, '').trim().split(/\s+/).filter((p) => p !== '');
+  return phones.length > 0 ? phones : undefined;
+}
+
+function vowelGroups(spelling: string): number {
+  return spelling.match(/[aeiouy]+/g)?.length ?? 0;
+}
+
+function syllables(phones: string[]): number {
+  return phones.filter(isVowelPhone).length;
+}
+
+/**
+ * A listed word fit to be a stem: its pronunciation must not have more syllables than its
+ * spelling has vowel groups, which turns away letter-by-letter readings of abbreviations
+ * ("abc" = EY1 B IY1 S IY1) that would otherwise poison every word they seem to be part of.
+ */
+function stem(word: string, data: WordData): string[] | undefined {
+  if (word.length < 2) return undefined;
+  const phones = listed(word, data);
+  if (phones === undefined) return undefined;
+  if (syllables(phones) > Math.max(1, vowelGroups(word))) return undefined;
+  return phones;
+}
+
+/** True when the spelling ends in one short vowel letter and one consonant ("bak", "hop"). */
+function endsShortClosed(spelling: string): boolean {
+  return /(^|[^aeiou])[aeiou][^aeiouwxy]$/.test(spelling);
+}
+
+/**
+ * The spellings a suffix may have been added to, most likely first: the bare stem ("walk-ing"),
+ * a stem that lost its final e ("bak-ing" from "bake"), and a stem whose final consonant was
+ * doubled ("runn-ing" from "run"). A short closed bare stem is tried after its e form, since
+ * English doubles the consonant after a short vowel: "baking" comes from "bake", not "bak".
+ */
+function stemSpellings(base: string): string[] {
+  const out: string[] = [];
+  if (/[aeiouy]$/.test(base)) return [base];
+  const doubled = base.length >= 3 && base[base.length - 1] === base[base.length - 2] && !/[aeiou]$/.test(base);
+  if (endsShortClosed(base)) out.push(`${base}e`, base);
+  else out.push(base, `${base}e`);
+  if (doubled) out.push(base.slice(0, -1));
+  return out;
+}
+
+function plural(phones: string[]): string[] {
+  const last = phones[phones.length - 1];
+  if (SIBILANT_PHONES.has(last)) return [...phones, 'IH0', 'Z'];
+  if (VOICELESS_PHONES.has(last)) return [...phones, 'S'];
+  return [...phones, 'Z'];
+}
+
+function past(phones: string[]): string[] {
+  const last = phones[phones.length - 1];
+  if (last === 'T' || last === 'D') return [...phones, 'IH0', 'D'];
+  if (VOICELESS_PHONES.has(last)) return [...phones, 'T'];
+  return [...phones, 'D'];
+}
+
+/** Replaces a stem's final IY (the y of "happy") before a suffix spelt with i ("happier"). */
+function withoutFinalY(phones: string[]): string[] {
+  const last = phones[phones.length - 1];
+  return last !== undefined && last.startsWith('IY') ? phones.slice(0, -1) : phones;
+}
+
+type Build = (phones: string[]) => string[];
+
+interface Suffix {
+  /** Spelling removed from the end of the word. */
+  ending: string;
+  /** Label used in `how`. */
+  label: string;
+  /** Spellings of the stem, given the word minus the ending. */
+  stems: (base: string) => string[];
+  build: Build;
+  /** Whether the stem (its phones and spelling) can take this suffix; default yes. */
+  accepts?: (phones: string[], spelling: string) => boolean;
+}
+
+const add =
+  (...extra: string[]): Build =>
+  (phones) => [...phones, ...extra];
+const bare = (base: string): string[] => [base];
+const yStem = (base: string): string[] => [`${base}y`];
+
+/** Suffixes, longest and most specific first. */
+const SUFFIXES: readonly Suffix[] = [
+  { ending: "'s", label: "-'s", stems: bare, build: plural },
+  { ending: "s'", label: "-s'", stems: bare, build: plural },
+  { ending: 'iness', label: '-ness', stems: yStem, build: (p) => [...withoutFinalY(p), 'IY0', 'N', 'AH0', 'S'] },
+  { ending: 'ness', label: '-ness', stems: bare, build: add('N', 'AH0', 'S') },
+  { ending: 'less', label: '-less', stems: bare, build: add('L', 'AH0', 'S') },
+  { ending: 'ful', label: '-ful', stems: bare, build: add('F', 'AH0', 'L') },
+  { ending: 'ment', label: '-ment', stems: bare, build: add('M', 'AH0', 'N', 'T') },
+  // CMU keeps no syllable for the -al- of -ically ("basically" = B EY1 S IH0 K L IY0).
+  { ending: 'ally', label: '-ally', stems: bare, build: add('L', 'IY0'), accepts: (_p, spelling) => spelling.endsWith('ic') },
+  { ending: 'ily', label: '-ly', stems: yStem, build: (p) => [...withoutFinalY(p), 'AH0', 'L', 'IY0'] },
+  { ending: 'ly', label: '-ly', stems: bare, build: add('L', 'IY0') },
+  { ending: 'ies', label: '-s', stems: yStem, build: add('Z') },
+  { ending: 'ied', label: '-ed', stems: yStem, build: add('D') },
+  { ending: 'ier', label: '-er', stems: yStem, build: (p) => (p[p.length - 1].startsWith('AY') ? [...p, 'ER0'] : [...withoutFinalY(p), 'IY0', 'ER0']) },
+  { ending: 'iest', label: '-est', stems: yStem, build: (p) => [...withoutFinalY(p), 'IY0', 'AH0', 'S', 'T'] },
+  { ending: 'ing', label: '-ing', stems: stemSpellings, build: add('IH0', 'NG') },
+  { ending: 'est', label: '-est', stems: stemSpellings, build: add('AH0', 'S', 'T') },
+  { ending: 'ed', label: '-ed', stems: stemSpellings, build: past },
+  { ending: 'er', label: '-er', stems: stemSpellings, build: add('ER0') },
+  { ending: 'es', label: '-es', stems: bare, build: plural, accepts: (p, spelling) => SIBILANT_PHONES.has(p[p.length - 1]) || spelling.endsWith('o') },
+  { ending: 's', label: '-s', stems: bare, build: plural },
+];
+
+/** Demotes primary stress to secondary, for the second part of a compound ("dog-HOUSE"). */
+function secondary(phones: string[]): string[] {
+  return phones.map((p) => (p.endsWith('1') ? `${p.slice(0, -1)}2` : p));
+}
+
+function resolveStem(word: string, data: WordData, depth: number): Analysis | undefined {
+  const phones = stem(word, data);
+  if (phones !== undefined) return { phones, how: `'${word}'` };
+  // A stem that is itself analysed ("walker" in "walkers") keeps its own explanation.
+  return depth > 0 ? analyse(word, data, depth - 1) : undefined;
+}
+
+function trySuffixes(word: string, data: WordData, depth: number): Analysis | undefined {
+  for (const suffix of SUFFIXES) {
+    if (!word.endsWith(suffix.ending) || word.length - suffix.ending.length < 2) continue;
+    if (suffix.ending === 's' && /(ss|us|is)$/.test(word)) continue;
+    const base = word.slice(0, -suffix.ending.length);
+    for (const spelling of suffix.stems(base)) {
+      // Only the bare remainder may itself be analysed: a restored e or undoubled consonant on
+      // top of a guessed analysis is too far from the evidence ("everyth" + e = "every" + "the").
+      const found = resolveStem(spelling, data, spelling === base ? depth : 0);
+      if (found !== undefined && (suffix.accepts === undefined || suffix.accepts(found.phones, spelling))) {
+        return { phones: suffix.build(found.phones), how: `${found.how} + ${suffix.label}` };
+      }
+    }
+  }
+  return undefined;
+}
+
+/** Two listed words of three letters or more, the longest first part preferred. */
+function tryCompound(word: string, data: WordData): Analysis | undefined {
+  for (let cut = word.length - 3; cut >= 3; cut--) {
+    const first = word.slice(0, cut);
+    const second = word.slice(cut);
+    // Never split a digraph ("blacks" + "hire" is black-shire).
+    if (second[0] === 'h' && /[cgpstw]$/.test(first)) continue;
+    const a = stem(first, data);
+    if (a === undefined) continue;
+    const b = stem(second, data);
+    if (b === undefined) continue;
+    return { phones: [...a, ...secondary(b)], how: `compound '${first}' + '${second}'` };
+  }
+  return undefined;
+}
+
+function analyse(word: string, data: WordData, depth: number): Analysis | undefined {
+  return trySuffixes(word, data, depth) ?? tryCompound(word, data);
+}
+
+/**
+ * Estimates the pronunciation of a lower-case word the dictionary does not list. Morphology on
+ * listed stems is tried first (suffixes such as -s, -ed, -ing, -er, -ly, -ness, -ful, -less, then
+ * compounds of two listed words); failing that, the NRL letter-to-sound rules. Phones are CMU
+ * ARPAbet with stress digits; for an input with no letters, `phones` is empty.
+ */
+export function estimatePronunciation(word: string, data: WordData): Estimate {
+  const spelling = word.toLowerCase().replace(/[^a-z']/g, '');
+  const found = spelling.length >= 4 ? analyse(spelling, data, 1) : undefined;
+  if (found !== undefined) {
+    const how = found.how.startsWith("'") ? `stem ${found.how}` : found.how;
+    return { phones: found.phones, source: 'morphology', how };
+  }
+  return { phones: letterToSound(spelling), source: 'estimate', how: 'letter-to-sound rules' };
+}

@@ -1,0 +1,90 @@
+// Paces and projected durations. Paced practice sets the model's rate in words per second (the
+// trade's unit); syllables per second is accepted when a script says so. Durations leave out
+// pauses and phrase-final lengthening, so real items run somewhat longer.
+import type { Pace, PaceTiming, PaceUnit } from './types';
+
+/** Adult reading-aloud rate: 183 words per minute = 3.05 words/s (Brysbaert 2019, JML 109). */
+export const READING_NORM_WPS = 183 / 60;
+
+const UNIT_WORDS: Record<string, PaceUnit> = {
+  wps: 'wps',
+  'w/s': 'wps',
+  'words/s': 'wps',
+  'word/s': 'wps',
+  sps: 'sps',
+  's/s': 'sps',
+  'syl/s': 'sps',
+  'syllables/s': 'sps',
+  'syllable/s': 'sps',
+};
+
+export function formatNumber(n: number, digits = 2): string {
+  return String(Number(n.toFixed(digits)));
+}
+
+export function makePace(value: number, unit: PaceUnit): Pace {
+  return { value, unit, label: `${formatNumber(value, 3)} ${unit}` };
+}
+
+/**
+ * Reads a pace list such as "1, 1.5, 2 wps" or "1.5 wps, 4 sps". A unit applies to the numbers
+ * written before it since the previous unit; numbers with no unit after them are words/s.
+ */
+export function parsePaces(text: string): { paces: Pace[]; error: string | null } {
+  const parts = text.toLowerCase().replace(/,/g, ' ').split(/\s+/).filter(Boolean);
+  const paces: Pace[] = [];
+  let pending: number[] = [];
+  for (const part of parts) {
+    const m = /^(\d+(?:\.\d+)?|\.\d+)([a-z/]*)$/.exec(part);
+    if (m) {
+      const value = Number(m[1]);
+      if (!(value > 0)) return { paces: [], error: `pace "${part}" must be above 0` };
+      if (value > 20) return { paces: [], error: `pace ${part} is not a plausible speech rate (above 20 per second)` };
+      if (m[2]) {
+        const unit = UNIT_WORDS[m[2]];
+        if (m[2] === 'wpm' || m[2] === 'spm') {
+          return { paces: [], error: `paces are per second, not per minute: divide by 60 (90 ${m[2]} = 1.5 ${m[2] === 'wpm' ? 'wps' : 'sps'})` };
+        }
+        if (!unit) return { paces: [], error: `unknown unit "${m[2]}": use wps (words/s) or sps (syllables/s)` };
+        paces.push(...pending.map((v) => makePace(v, unit)), makePace(value, unit));
+        pending = [];
+      } else pending.push(value);
+      continue;
+    }
+    const unit = UNIT_WORDS[part];
+    if (part === 'wpm' || part === 'spm') {
+      return { paces: [], error: `paces are per second, not per minute: divide by 60 (90 ${part} = 1.5 ${part === 'wpm' ? 'wps' : 'sps'})` };
+    }
+    if (!unit) return { paces: [], error: `cannot read "${part}" as a pace: write numbers with wps or sps, e.g. "1.5, 2 wps"` };
+    if (!pending.length) return { paces: [], error: `unit "${part}" has no number before it` };
+    paces.push(...pending.map((v) => makePace(v, unit)));
+    pending = [];
+  }
+  paces.push(...pending.map((v) => makePace(v, 'wps')));
+  if (!paces.length) return { paces: [], error: 'no pace given: write e.g. "1.5, 2 wps"' };
+  return { paces, error: null };
+}
+
+/**
+ * Projected time of an item at a pace: words / words-per-second, or syllables / syllables-per-second.
+ * An item with no words takes 0 s. Rates are in the unit the other pace would imply.
+ */
+export function timeAt(
+  pace: Pace,
+  words: number,
+  syllables: number,
+  baselineWps: number | null,
+  readingNormWps: number = READING_NORM_WPS,
+): PaceTiming {
+  const seconds = pace.unit === 'wps' ? words / pace.value : syllables / pace.value;
+  const wordRate = seconds > 0 ? words / seconds : pace.unit === 'wps' ? pace.value : 0;
+  const syllableRate = seconds > 0 ? syllables / seconds : pace.unit === 'sps' ? pace.value : 0;
+  return {
+    pace,
+    seconds,
+    syllableRate,
+    wordRate,
+    baselineRatio: baselineWps && baselineWps > 0 ? wordRate / baselineWps : null,
+    aboveReadingNorm: wordRate > readingNormWps + 1e-9,
+  };
+}

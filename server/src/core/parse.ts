@@ -1,0 +1,269 @@
+// The stimulus script format (documented in grammar/README.md). Line-oriented and forgiving:
+// every line is a comment, a setting, a rung header or an item, so a file of bare sentences is a
+// valid script. Parsing never throws; what it cannot read becomes a problem with a position.
+import type {
+  CommentLine,
+  ItemNode,
+  Override,
+  ParsedScript,
+  Problem,
+  RungNode,
+  Setting,
+} from './types';
+import { validatePhones } from './phones';
+
+export const COMMENT = '//';
+export const RUNG_MARK = '==';
+export const NOTE_MARK = '|';
+
+/** Keys a rung may carry, inline on its header or on `@` lines before its items. */
+export const RUNG_KEYS = new Set(['pace', 'paces', 'set']);
+
+const SETTING_LINE = /^@([A-Za-z][\w-]*)(?:\s*:)?\s*(.*?)\s*$/;
+const INLINE_ATTR = /(^|\s)@([A-Za-z][\w-]*)/g;
+const ID_TOKEN = /(^|\s)#([\w.:-]+)/g;
+const SET_ATTR = /(^|\s)@set\s+([^@#]+?)\s*(?=$|\s[@#])/g;
+
+export function splitLines(text: string): string[] {
+  return text.split(/\r\n|\r|\n/);
+}
+
+function problem(
+  rule: string,
+  message: string,
+  line: number,
+  character: number,
+  endCharacter: number,
+  severity: Problem['severity'] = 'error',
+): Problem {
+  return { rule, severity, message, line, character, endLine: line, endCharacter, };
+}
+
+/** Splits a comma- or space-separated list of labels. */
+export function splitLabels(value: string): string[] {
+  return value
+    .split(/[,\s]+/)
+    .map((s) => s.trim())
+    .filter(Boolean);
+}
+
+/** Reads `word = PHONES` or `word = N` (N picks the Nth listed pronunciation). */
+export function parseOverride(
+  body: string,
+  line: number,
+  bodyStart: number,
+  origin: string,
+  problems: Problem[],
+): Override | null {
+  const m = /^(\S+?)\s*(?:=|\s)\s*(.*)$/.exec(body);
+  if (!m || !m[2].trim()) {
+    problems.push(
+      problem(
+        'bad-value',
+        'a pronunciation needs a word and its phones, e.g. "Wojcik = W OY1 CH IH0 K", or a listed variant number, e.g. "record = 2"',
+        line,
+        bodyStart,
+        bodyStart + Math.max(1, body.length),
+      ),
+    );
+    return null;
+  }
+  const word = m[1].toLowerCase().replace(/[’‘ʼ]/g, "'");
+  const rest = m[2].trim();
+  const restStart = bodyStart + body.indexOf(rest, m[1].length);
+  if (/^\d+$/.test(rest)) {
+    return { word, phones: [], variant: Number(rest), origin, line, character: bodyStart };
+  }
+  const phones = rest.split(/\s+/);
+  const bad = validatePhones(phones);
+  for (const b of bad) {
+    const at = restStart + offsetOfNth(rest, b.index);
+    problems.push(
+      problem('unknown-phone', `"${b.phone}" is not a CMU ARPAbet phone: ${b.reason}`, line, at, at + b.phone.length),
+    );
+  }
+  if (bad.length) return null;
+  return { word, phones: phones.map((p) => p.toUpperCase()), variant: null, origin, line, character: bodyStart };
+}
+
+function offsetOfNth(text: string, n: number): number {
+  const re = /\S+/g;
+  let m: RegExpExecArray | null;
+  let i = 0;
+  while ((m = re.exec(text))) {
+    if (i++ === n) return m.index;
+  }
+  return 0;
+}
+
+/** Parses a workspace lexicon file: one `word = PHONES` (or `word PHONES`) per line, `//` comments. */
+export function parseLexicon(text: string, origin: string): { overrides: Override[]; problems: Problem[] } {
+  const overrides: Override[] = [];
+  const problems: Problem[] = [];
+  splitLines(text).forEach((raw, line) => {
+    const start = raw.length - raw.trimStart().length;
+    const body = raw.trim();
+    if (!body || body.startsWith(COMMENT)) return;
+    const o = parseOverride(body, line, start, origin, problems);
+    if (o) overrides.push(o);
+  });
+  return { overrides, problems };
+}
+
+function parseRungHeader(raw: string, line: number, start: number): RungNode {
+  // "== Name @pace 1.5 @set trained ==": the name runs up to the first inline attribute.
+  let bodyStart = start + RUNG_MARK.length;
+  while (raw[bodyStart] === '=') bodyStart++;
+  let body = raw.slice(bodyStart);
+  body = body.replace(/\s*=+\s*$/, (tail) => ' '.repeat(tail.length));
+  const settings: Setting[] = [];
+  const attrs = [...body.matchAll(INLINE_ATTR)];
+  const nameEnd = attrs.length ? attrs[0].index! + attrs[0][1].length : body.length;
+  attrs.forEach((a, i) => {
+    const keyStart = bodyStart + a.index! + a[1].length;
+    const keyEnd = keyStart + 1 + a[2].length;
+    const next = i + 1 < attrs.length ? bodyStart + attrs[i + 1].index! : bodyStart + body.length;
+    const valueRaw = raw.slice(keyEnd, next);
+    const lead = valueRaw.length - valueRaw.replace(/^[\s:]+/, '').length;
+    const value = valueRaw.trim().replace(/^:\s*/, '');
+    const valueStart = keyEnd + lead;
+    settings.push({
+      key: a[2].toLowerCase(),
+      value,
+      line,
+      keyStart,
+      keyEnd,
+      valueStart,
+      valueEnd: valueStart + value.length,
+    });
+  });
+  const name = body.slice(0, nameEnd).trim();
+  return {
+    name: name || `Rung ${line + 1}`,
+    line,
+    endLine: line,
+    implicit: false,
+    paces: null,
+    sets: [],
+    settings,
+    items: [],
+  };
+}
+
+function parseItem(raw: string, line: number, start: number): ItemNode {
+  const bar = raw.indexOf(NOTE_MARK, start);
+  const spokenRaw = bar < 0 ? raw.slice(start) : raw.slice(start, bar);
+  const text = spokenRaw.trimEnd();
+  let id: string | null = null;
+  let note: string | null = null;
+  const sets: string[] = [];
+  if (bar >= 0) {
+    let trailer = raw.slice(bar + 1);
+    trailer = trailer.replace(SET_ATTR, (_m, lead: string, labels: string) => {
+      sets.push(...splitLabels(labels));
+      return lead;
+    });
+    trailer = trailer.replace(ID_TOKEN, (m, lead: string, value: string) => {
+      if (id === null) {
+        id = value;
+        return lead;
+      }
+      return m;
+    });
+    const rest = trailer.replace(/\s+/g, ' ').trim();
+    note = rest || null;
+  }
+  return { line, text, textStart: start, textEnd: start + text.length, id, note, sets };
+}
+
+/** Parses a script. Positions in the result are 0-based lines and UTF-16 character offsets. */
+export function parseScript(text: string): ParsedScript {
+  const lines = splitLines(text);
+  const header: Setting[] = [];
+  const rungs: RungNode[] = [];
+  const comments: CommentLine[] = [];
+  const overrides: Override[] = [];
+  const problems: Problem[] = [];
+  let current: RungNode | null = null;
+
+  const implicitRung = (line: number): RungNode => {
+    const r: RungNode = {
+      name: 'Items',
+      line,
+      endLine: line,
+      implicit: true,
+      paces: null,
+      sets: [],
+      settings: [],
+      items: [],
+    };
+    rungs.push(r);
+    return r;
+  };
+
+  lines.forEach((raw, line) => {
+    const start = raw.length - raw.trimStart().length;
+    if (start === raw.length) return;
+    if (raw.startsWith(COMMENT, start)) {
+      comments.push({ line, text: raw.slice(start + COMMENT.length).trim(), start });
+      if (current) current.endLine = line;
+      return;
+    }
+    if (raw.startsWith(RUNG_MARK, start)) {
+      current = parseRungHeader(raw, line, start);
+      rungs.push(current);
+      return;
+    }
+    if (raw[start] === '@') {
+      const m = SETTING_LINE.exec(raw.slice(start));
+      if (!m) {
+        problems.push(
+          problem('bad-value', 'a setting line needs a key after "@", e.g. "@paces 1.5, 2 wps"', line, start, raw.length),
+        );
+        return;
+      }
+      const key = m[1].toLowerCase();
+      const keyStart = start;
+      const keyEnd = start + 1 + m[1].length;
+      const value = m[2];
+      const valueStart = value ? raw.indexOf(value, keyEnd) : raw.trimEnd().length;
+      const setting: Setting = {
+        key,
+        value,
+        line,
+        keyStart,
+        keyEnd,
+        valueStart,
+        valueEnd: valueStart + value.length,
+      };
+      if (key === 'say') {
+        const o = parseOverride(value, line, valueStart, `line ${line + 1}`, problems);
+        if (o) overrides.push(o);
+        return;
+      }
+      // Rung keys after a rung header (or after items in it) belong to that rung.
+      if (current && !current.implicit && RUNG_KEYS.has(key)) {
+        current.settings.push(setting);
+        current.endLine = line;
+      } else {
+        header.push(setting);
+      }
+      return;
+    }
+    if (!current) current = implicitRung(line);
+    const item = parseItem(raw, line, start);
+    if (item.text.length === 0) {
+      problems.push(
+        problem('bad-value', 'this line has a note but no sentence before the "|"', line, start, raw.length, 'warning'),
+      );
+      return;
+    }
+    current.items.push(item);
+    current.endLine = line;
+  });
+
+  for (const r of rungs) {
+    for (const s of r.settings) if (s.key === 'set') r.sets.push(...splitLabels(s.value));
+  }
+  return { header, rungs, comments, overrides, problems, lineCount: lines.length };
+}

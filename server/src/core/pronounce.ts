@@ -1,0 +1,127 @@
+// Pronunciation of spoken words, in order of trust: a written override (script, then workspace
+// lexicon), the CMU Pronouncing Dictionary (first listed pronunciation unless a variant is
+// chosen), morphology on a dictionary stem, then letter-to-sound rules. Whatever did not come
+// from the dictionary or an override is marked, so every display can say it is an estimate.
+import { estimatePronunciation } from './lts/estimate';
+import { lg10wf, zipf } from './frequency';
+import { isVowel, parsePhones } from './phones';
+import type { Override, PronunciationSource, WcmOptions, WcmResult, WordData } from './types';
+import { wordComplexity } from './wcm';
+
+export interface Pronunciation {
+  phones: string[];
+  source: PronunciationSource;
+  /** 1-based index of the listed pronunciation used (0 when not from the dictionary). */
+  variant: number;
+  variants: string[][];
+  /** How an estimate was made, or which override applied, in words. */
+  how: string;
+  /** Set when a requested variant does not exist; the first listed one was used instead. */
+  variantError: string | null;
+}
+
+/** Everything about a word that does not depend on where it stands; computed once per spelling. */
+export interface WordScore extends Pronunciation {
+  syllables: number;
+  phonemes: number;
+  wcm: WcmResult;
+  count: number;
+  zipf: number;
+  lg10wf: number;
+}
+
+export function countSyllables(phones: string[]): number {
+  let n = 0;
+  for (const p of phones) if (isVowel(p)) n++;
+  return n;
+}
+
+export class Pronouncer {
+  private readonly overrides = new Map<string, Override>();
+  private readonly cache = new Map<string, WordScore>();
+
+  constructor(
+    private readonly data: WordData,
+    overrides: Override[],
+    private readonly wcmOptions: WcmOptions,
+  ) {
+    // Later overrides win: callers pass the workspace lexicon first, then the script's own.
+    for (const o of overrides) this.overrides.set(o.word, o);
+  }
+
+  override(word: string): Override | undefined {
+    return this.overrides.get(word);
+  }
+
+  /** Scores a lower-case spoken word, optionally choosing a listed variant (1-based). */
+  score(spoken: string, variant: number | null = null): WordScore {
+    const key = variant ? `${spoken}(${variant})` : spoken;
+    let hit = this.cache.get(key);
+    if (!hit) {
+      hit = this.compute(spoken, variant);
+      this.cache.set(key, hit);
+    }
+    return hit;
+  }
+
+  private compute(spoken: string, variant: number | null): WordScore {
+    const p = this.pronounce(spoken, variant);
+    const count = this.frequencyCount(spoken);
+    return {
+      ...p,
+      syllables: countSyllables(p.phones),
+      phonemes: p.phones.length,
+      wcm: wordComplexity(p.phones, this.wcmOptions),
+      count,
+      zipf: zipf(count),
+      lg10wf: lg10wf(count),
+    };
+  }
+
+  /** SUBTLEX counts are of word forms; a possessive not listed falls back to its base form. */
+  private frequencyCount(spoken: string): number {
+    const c = this.data.count(spoken);
+    if (c > 0) return c;
+    if (spoken.endsWith("'s")) return this.data.count(spoken.slice(0, -2));
+    if (spoken.endsWith("'")) return this.data.count(spoken.slice(0, -1));
+    return 0;
+  }
+
+  pronounce(spoken: string, variant: number | null): Pronunciation {
+    const listed = this.data.pronunciations(spoken);
+    const variants = listed ? listed.map(parsePhones) : [];
+    const o = this.overrides.get(spoken);
+    let wanted = variant;
+    if (o && o.phones.length && wanted === null) {
+      return { phones: o.phones, source: 'override', variant: 0, variants, how: `override (${o.origin})`, variantError: null };
+    }
+    if (o && o.variant !== null && wanted === null) wanted = o.variant;
+    if (variants.length) {
+      let variantError: string | null = null;
+      let index = 1;
+      if (wanted !== null) {
+        if (wanted >= 1 && wanted <= variants.length) index = wanted;
+        else {
+          variantError = `"${spoken}" has ${variants.length} listed pronunciation${variants.length === 1 ? '' : 's'}, not ${wanted}`;
+        }
+      }
+      return {
+        phones: variants[index - 1],
+        source: 'dictionary',
+        variant: index,
+        variants,
+        how: index > 1 ? `listed pronunciation ${index} of ${variants.length}` : 'CMU Pronouncing Dictionary',
+        variantError,
+      };
+    }
+    const est = estimatePronunciation(spoken, this.data);
+    return {
+      phones: est.phones,
+      source: est.source,
+      variant: 0,
+      variants: [],
+      how: est.how,
+      variantError: wanted !== null ? `"${spoken}" is not in the dictionary, so it has no listed pronunciation ${wanted}` : null,
+    };
+  }
+}

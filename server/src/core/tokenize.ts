@@ -1,0 +1,490 @@
+// Splits one item of script text into written tokens and the words a reader says for each.
+// The scanner walks the ORIGINAL text by index, so every offset points into what the user wrote;
+// normalisation (curly quotes, diacritics, case) happens only on the lookup form of each word.
+// Patterns are compiled once at load and used sticky, so tokenising never compiles a regex.
+
+import { toWords, toWordsOrdinal } from 'number-to-words';
+import { ABBREVIATIONS, CURRENCIES, LEADING_ELISIONS, type Currency } from './abbreviations';
+
+export interface Token {
+  /** The written token as in the text, e.g. "Dr.", "3:30", "don't", "record(2)". */
+  surface: string;
+  /** Offset in the given text (UTF-16 index), plus the `offset` argument. */
+  start: number;
+  /** Exclusive. */
+  end: number;
+  kind: 'word' | 'number' | 'time' | 'ordinal' | 'money' | 'percent' | 'abbreviation' | 'symbol';
+  /** Spoken words, lower case, apostrophes as ASCII "'" (["doctor"], ["three", "thirty"]). */
+  words: string[];
+  /** A written choice of listed pronunciation: "record(2)" -> 2 (words ["record"]). */
+  variant: number | null;
+  /** A phrase-break punctuation (, ; : . ! ? — – ( ) ellipsis) follows this token. */
+  breakAfter: boolean;
+}
+
+type Kind = Token['kind'];
+
+interface State {
+  text: string;
+  offset: number;
+  tokens: Token[];
+  /** A leading single quote was seen and not yet closed, so a trailing "s'" closes it. */
+  openQuote: boolean;
+}
+
+const LETTER = /\p{L}/uy;
+// Marks and joiners continue a word so decomposed "café" and Indic or Persian words stay whole.
+const LETTER_RUN = /[\p{L}\p{M}\u00ad\u200c\u200d]+/uy;
+const DOTTED = /[A-Za-z]+(?:\.[A-Za-z]+)*\./y;
+const TIME = /(\d{1,2}):(\d{2})(?!\d)/y;
+// Thousands separators only in proper groups of three, so "1,2,3" stays a list of numbers.
+const NUMBER = /(\d{1,3}(?:,\d{3})+(?!\d)|\d+)?(?:\.(\d+))?/y;
+const ORDINAL_SUFFIX = /(?:st|nd|rd|th)(?![\p{L}\p{N}])/iuy;
+const PLURAL_SUFFIX = /['\u2018\u2019\u02bc\u2032]?s(?![\p{L}\p{N}])/uy;
+// At most one space before am/pm; "a.m." keeps its periods, but a bare "pm." leaves its period as a break.
+const AM_PM = /[ \u00a0]?(?:([AaPp])\.[Mm]\.|([AaPp])[Mm](?![\p{L}\p{N}]))/uy;
+const SCALE = /\s+(thousand|million|billion|trillion)(?![\p{L}\p{N}])/iuy;
+const CAPITAL_NEXT = /\s+\p{Lu}/uy;
+const DECADE = /['\u2018\u2019\u02bc\u2032](\d\d)s(?![\p{L}\p{N}])/uy;
+const NON_ASCII = /[^\x00-\x7f]/;
+const NON_LATIN_LETTER = /(?!\p{Script=Latin})\p{L}/u;
+const MARKS = /\p{M}+/gu;
+const SOFT_HYPHEN = /\u00ad/g;
+const CURLY_APOSTROPHES = /[\u2018\u2019\u02bc\u2032]/g;
+const COMMAS = /,/g;
+// number-to-words writes "one thousand, two hundred fifty" and "twenty-one".
+const NUMBER_WORD_SEPARATORS = /[\s,-]+/;
+
+const DIGIT_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine'];
+// number-to-words throws past Number.MAX_SAFE_INTEGER (16 digits); longer strings are read out.
+const MAX_WORDED_DIGITS = 15;
+// The longest abbreviation recognised without its period ("prof", "blvd"); longer words skip the lookup.
+const MAX_BARE_LENGTH = 4;
+
+const BREAKS = new Set(
+  // ASCII and typographic phrase punctuation, then the CJK, Arabic and Devanagari equivalents.
+  [...',;:.!?\u2026()\u2013\u2014\u2015\u3001\u3002\uff0c\uff01\uff1f\uff1b\uff1a\u060c\u061b\u061f\u0964'].map(
+    (ch) => ch.charCodeAt(0),
+  ),
+);
+
+function at(re: RegExp, text: string, i: number): RegExpExecArray | null {
+  re.lastIndex = i;
+  return re.exec(text);
+}
+
+function isDigitAt(text: string, i: number): boolean {
+  const c = text.charCodeAt(i);
+  return c >= 0x30 && c <= 0x39;
+}
+
+function isLetterAt(text: string, i: number): boolean {
+  if (i < 0 || i >= text.length) return false;
+  const c = text.charCodeAt(i);
+  if (c < 0x80) return (c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a);
+  return at(LETTER, text, i) !== null;
+}
+
+function isAlnumAt(text: string, i: number): boolean {
+  return isDigitAt(text, i) || isLetterAt(text, i);
+}
+
+/** ASCII ' and its typographic stand-ins (’ ‘ ʼ ′), all read as one apostrophe. */
+function isApostrophe(c: number): boolean {
+  return c === 0x27 || c === 0x2019 || c === 0x2018 || c === 0x02bc || c === 0x2032;
+}
+
+/** Hyphen-minus, Unicode hyphen and non-breaking hyphen join compounds; dashes are breaks. */
+function isHyphen(c: number): boolean {
+  return c === 0x2d || c === 0x2010 || c === 0x2011;
+}
+
+function startsNumber(text: string, i: number): boolean {
+  return isDigitAt(text, i) || (text.charCodeAt(i) === 0x2e && isDigitAt(text, i + 1));
+}
+
+function letterRunEnd(text: string, j: number): number {
+  const n = text.length;
+  while (j < n) {
+    const c = text.charCodeAt(j);
+    if ((c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a)) {
+      j++;
+    } else if (c >= 0x80) {
+      const m = at(LETTER_RUN, text, j);
+      if (m === null) break;
+      j += m[0].length;
+    } else {
+      break;
+    }
+  }
+  return j;
+}
+
+/**
+ * The dictionary form of a written word: ASCII apostrophes, lower case, and for Latin-script words
+ * no diacritics (the dictionary spells "cafe", "naive"). Other scripts keep their marks, which
+ * carry vowels there, and are only composed (NFC) and lower-cased.
+ */
+export function lookupForm(raw: string): string {
+  let w = raw;
+  if (NON_ASCII.test(w)) {
+    w = w.replace(CURLY_APOSTROPHES, "'").replace(SOFT_HYPHEN, '').normalize('NFD');
+    w = (NON_LATIN_LETTER.test(w) ? w : w.replace(MARKS, '')).normalize('NFC');
+  }
+  return w.toLowerCase();
+}
+
+function push(st: State, start: number, end: number, kind: Kind, words: string[], variant: number | null = null) {
+  st.tokens.push({
+    surface: st.text.slice(start, end),
+    start: start + st.offset,
+    end: end + st.offset,
+    kind,
+    words,
+    variant,
+    breakAfter: false,
+  });
+}
+
+function markBreak(st: State): void {
+  const last = st.tokens[st.tokens.length - 1];
+  if (last !== undefined) last.breakAfter = true;
+}
+
+// ---- Number wording -------------------------------------------------------------------------
+
+function splitNumberWords(s: string): string[] {
+  // Readers of American-style number words say no "and"; drop it should the library ever add one.
+  return s.split(NUMBER_WORD_SEPARATORS).filter((w) => w !== '' && w !== 'and');
+}
+
+function digitByDigit(digits: string): string[] {
+  return [...digits].map((d) => DIGIT_WORDS[d.charCodeAt(0) - 0x30]);
+}
+
+/** Integer digits (no commas) as words; leading zeros ("007") and huge numbers are read digit by digit. */
+function cardinal(digits: string): string[] {
+  if ((digits.length > 1 && digits[0] === '0') || digits.length > MAX_WORDED_DIGITS) return digitByDigit(digits);
+  return splitNumberWords(toWords(Number(digits)));
+}
+
+function ordinal(digits: string): string[] {
+  if ((digits.length > 1 && digits[0] === '0') || digits.length > MAX_WORDED_DIGITS) return digitByDigit(digits);
+  return splitNumberWords(toWordsOrdinal(Number(digits)));
+}
+
+/** "3.14" -> three point one four; ".5" -> point five (decimals are read digit by digit). */
+function amountWords(digits: string, decimals: string | undefined): string[] {
+  const words = digits === '' ? [] : cardinal(digits);
+  if (decimals !== undefined) words.push('point', ...digitByDigit(decimals));
+  return words;
+}
+
+function isYear(intText: string): boolean {
+  if (intText.length !== 4) return false;
+  const n = Number(intText);
+  return n >= 1100 && n <= 2099;
+}
+
+/** 1990 -> nineteen ninety, 1905 -> nineteen oh five, 1900 -> nineteen hundred, 2005 -> two thousand five, 2024 -> twenty twenty four. */
+function yearWords(n: number): string[] {
+  if (n >= 2000 && n < 2010) return cardinal(String(n));
+  const high = Math.floor(n / 100);
+  const low = n % 100;
+  const words = cardinal(String(high));
+  if (low === 0) words.push('hundred');
+  else if (low < 10) words.push('oh', DIGIT_WORDS[low]);
+  else words.push(...cardinal(String(low)));
+  return words;
+}
+
+/** "1990s" -> nineteen nineties, "80s" -> eighties, "6s" -> sixes. */
+function pluralise(words: string[]): string[] {
+  const last = words.length - 1;
+  const w = words[last];
+  words[last] = w.endsWith('y') ? `${w.slice(0, -1)}ies` : w.endsWith('x') ? `${w}es` : `${w}s`;
+  return words;
+}
+
+function moneyWords(digits: string, decimals: string | undefined, currency: Currency): string[] {
+  if (decimals === undefined || decimals.length !== 2) {
+    const single = digits === '1' && decimals === undefined;
+    const words = amountWords(digits, decimals);
+    if (words.length === 0) words.push('zero');
+    words.push(single ? currency.one : currency.many);
+    return words;
+  }
+  // Two decimals are a subunit: "$2.50" is said "two dollars fifty cents", "$0.50" "fifty cents".
+  const words: string[] = [];
+  if (digits !== '' && Number(digits) !== 0) words.push(...cardinal(digits), digits === '1' ? currency.one : currency.many);
+  const cents = Number(decimals);
+  if (cents !== 0) words.push(...cardinal(String(cents)), cents === 1 ? currency.subunitOne : currency.subunitMany);
+  if (words.length === 0) words.push('zero', currency.many);
+  return words;
+}
+
+function scanTime(st: State, start: number, end: number, hour: number, minute: number): number {
+  const words = cardinal(String(hour));
+  const ampm = at(AM_PM, st.text, end);
+  // "10:00" is said "ten o'clock", but "10:00 am" just "ten a m".
+  if (minute === 0) {
+    if (ampm === null) words.push("o'clock");
+  } else if (minute < 10) {
+    words.push('oh', DIGIT_WORDS[minute]);
+  } else {
+    words.push(...cardinal(String(minute)));
+  }
+  if (ampm !== null) {
+    words.push((ampm[1] ?? ampm[2]).toLowerCase(), 'm');
+    end += ampm[0].length;
+  }
+  push(st, start, end, 'time', words);
+  return end;
+}
+
+/** Scans a number whose digits (or ".digit") begin at i; the token begins at start (sign or currency). */
+function scanNumber(st: State, start: number, i: number, minus: boolean, currency: Currency | null): number {
+  const { text } = st;
+  if (!minus && currency === null) {
+    const t = at(TIME, text, i);
+    if (t !== null) {
+      const hour = Number(t[1]);
+      const minute = Number(t[2]);
+      if (hour <= 23 && minute <= 59) return scanTime(st, start, i + t[0].length, hour, minute);
+    }
+  }
+  const m = at(NUMBER, text, i) as RegExpExecArray; // Matches: the caller saw a digit or ".digit".
+  const intText = m[1] ?? '';
+  const decimals = m[2];
+  const digits = intText.replace(COMMAS, '');
+  const plain = decimals === undefined && digits !== '';
+  let j = i + m[0].length;
+  let kind: Kind = 'number';
+  let words: string[];
+  let suffix: RegExpExecArray | null;
+
+  if (currency !== null) {
+    kind = 'money';
+    const scale = at(SCALE, text, j);
+    if (scale !== null) {
+      // "$5 million" is said "five million dollars".
+      j += scale[0].length;
+      words = [...amountWords(digits, decimals), scale[1].toLowerCase(), currency.many];
+    } else {
+      words = moneyWords(digits, decimals, currency);
+    }
+  } else if (plain && (suffix = at(ORDINAL_SUFFIX, text, j)) !== null) {
+    kind = 'ordinal';
+    words = ordinal(digits);
+    j += suffix[0].length;
+  } else if (text.charCodeAt(j) === 0x25) {
+    kind = 'percent';
+    words = [...amountWords(digits, decimals), 'percent'];
+    j++;
+  } else if (plain && !minus && intText.length <= 2 && Number(digits) >= 1 && Number(digits) <= 12 &&
+      (suffix = at(AM_PM, text, j)) !== null) {
+    kind = 'time';
+    words = [...cardinal(String(Number(digits))), (suffix[1] ?? suffix[2]).toLowerCase(), 'm'];
+    j += suffix[0].length;
+  } else {
+    // Four digits from 1100 to 2099 without commas are read as years, as in most scripts they are.
+    words = plain && !minus && isYear(intText) ? yearWords(Number(intText)) : amountWords(digits, decimals);
+    if (plain && (suffix = at(PLURAL_SUFFIX, text, j)) !== null) {
+      words = pluralise(words);
+      j += suffix[0].length;
+    }
+  }
+  if (minus) words.unshift('minus');
+  push(st, start, j, kind, words);
+  return j;
+}
+
+// ---- Words and abbreviations ----------------------------------------------------------------
+
+function abbreviationToken(st: State, start: number, end: number, words: readonly string[]): number {
+  push(st, start, end, 'abbreviation', [...words]);
+  return end;
+}
+
+function startsCapitalised(st: State, i: number): boolean {
+  const c = st.text.charCodeAt(i);
+  return c >= 0x41 && c <= 0x5a;
+}
+
+/** Tries an abbreviation at word start i whose first letter run ends at runEnd; returns its end or -1. */
+function scanAbbreviation(st: State, i: number, runEnd: number): number {
+  const { text } = st;
+  const next = text.charCodeAt(runEnd);
+  if (next === 0x2e) {
+    const m = at(DOTTED, text, i);
+    if (m === null) return -1;
+    let raw = m[0];
+    let entry = ABBREVIATIONS.get(raw.toLowerCase());
+    if (entry === undefined) {
+      // Dotted single letters ("U.K.", "D.C.") are spelled out.
+      const letters = raw.slice(0, -1).split('.');
+      if (letters.length >= 2 && letters.every((l) => l.length === 1)) {
+        return abbreviationToken(st, i, i + raw.length, letters.map((l) => l.toLowerCase()));
+      }
+      raw = text.slice(i, runEnd + 1);
+      entry = ABBREVIATIONS.get(raw.toLowerCase());
+    }
+    const end = i + raw.length;
+    if (entry !== undefined) {
+      const before = entry.beforeCapital !== undefined && at(CAPITAL_NEXT, text, end) !== null;
+      return abbreviationToken(st, i, end, before && entry.beforeCapital ? entry.beforeCapital : entry.words);
+    }
+    // A capital initial between names ("John F. Kennedy", "J. Smith") is not a sentence end.
+    if (raw.length === 2 && startsCapitalised(st, i) && at(CAPITAL_NEXT, text, end) !== null) {
+      const prev = st.tokens[st.tokens.length - 1];
+      if (prev === undefined || prev.breakAfter || startsCapitalisedSurface(prev.surface)) {
+        return abbreviationToken(st, i, end, [raw[0].toLowerCase()]);
+      }
+    }
+    return -1;
+  }
+  // Undotted forms ("Mr Smith", "cats vs dogs"), when the word ends here. None is over 4 letters.
+  if (runEnd - i > MAX_BARE_LENGTH || isApostrophe(next) || isHyphen(next) || isLetterAt(text, runEnd)) return -1;
+  const entry = ABBREVIATIONS.get(`${text.slice(i, runEnd).toLowerCase()}.`);
+  if (entry === undefined || entry.bare === undefined) return -1;
+  if (entry.bare === 'capitalised' && !startsCapitalised(st, i)) return -1;
+  const before = entry.beforeCapital !== undefined && at(CAPITAL_NEXT, text, runEnd) !== null;
+  return abbreviationToken(st, i, runEnd, before && entry.beforeCapital ? entry.beforeCapital : entry.words);
+}
+
+function startsCapitalisedSurface(surface: string): boolean {
+  const c = surface.charCodeAt(0);
+  return c >= 0x41 && c <= 0x5a;
+}
+
+/** A trailing apostrophe belongs to the word in "James'", "dogs'" and dropped-g "goin'". */
+function keepsTrailingApostrophe(part: string): boolean {
+  const w = lookupForm(part);
+  return w.endsWith('s') || (w.length >= 4 && w.endsWith('in'));
+}
+
+function scanWord(st: State, i: number): number {
+  const { text } = st;
+  let j = letterRunEnd(text, i);
+  const abbreviation = scanAbbreviation(st, i, j);
+  if (abbreviation >= 0) return abbreviation;
+
+  // Apostrophes between letters stay inside a part (don't, o'clock); hyphens start a new one.
+  const parts: string[] = [];
+  let partStart = i;
+  for (;;) {
+    const c = text.charCodeAt(j);
+    if (isApostrophe(c) && isLetterAt(text, j + 1)) {
+      j = letterRunEnd(text, j + 1);
+    } else if (isHyphen(c) && isLetterAt(text, j + 1)) {
+      parts.push(text.slice(partStart, j));
+      partStart = j + 1;
+      j = letterRunEnd(text, partStart);
+    } else {
+      break;
+    }
+  }
+  let next = j;
+  if (isApostrophe(text.charCodeAt(j)) && !isAlnumAt(text, j + 1)) {
+    // The apostrophe is consumed either way: it is a possessive or it closes a quotation.
+    next = j + 1;
+    if (!st.openQuote && keepsTrailingApostrophe(text.slice(partStart, j))) j = next;
+    else st.openQuote = false;
+  }
+  parts.push(text.slice(partStart, j));
+
+  let variant: number | null = null;
+  const v = text.charCodeAt(next + 1);
+  if (next === j && text.charCodeAt(j) === 0x28 && v >= 0x31 && v <= 0x39 && text.charCodeAt(j + 2) === 0x29) {
+    variant = v - 0x30;
+    next = j = j + 3;
+  }
+  push(st, i, j, 'word', parts.map(lookupForm), variant);
+  return next;
+}
+
+/** A single quote outside a word: an elision ('n', 'til), a decade ('90s) or a quotation mark. */
+function scanApostrophe(st: State, i: number): number {
+  const { text } = st;
+  const decade = at(DECADE, text, i);
+  if (decade !== null) {
+    const end = i + decade[0].length;
+    push(st, i, end, 'number', pluralise(cardinal(String(Number(decade[1])))));
+    return end;
+  }
+  if (isLetterAt(text, i + 1)) {
+    let end = letterRunEnd(text, i + 1);
+    const form = `'${lookupForm(text.slice(i + 1, end))}`;
+    const c = text.charCodeAt(end);
+    const continues = (isApostrophe(c) || isHyphen(c)) && isLetterAt(text, end + 1);
+    if (LEADING_ELISIONS.has(form) && !continues) {
+      if (form === "'n" && isApostrophe(c)) end++; // 'n' is written between two apostrophes.
+      push(st, i, end, 'word', [form]);
+      return end;
+    }
+    st.openQuote = true;
+  } else {
+    st.openQuote = false;
+  }
+  return i + 1;
+}
+
+function scanHyphen(st: State, i: number, c: number): number {
+  const { text } = st;
+  const afterWord = isAlnumAt(text, i - 1);
+  if (!afterWord && (c === 0x2d || c === 0x2212)) {
+    if (startsNumber(text, i + 1)) return scanNumber(st, i, i + 1, true, null);
+    const currency = CURRENCIES.get(text[i + 1]);
+    if (currency !== undefined && startsNumber(text, i + 2)) return scanNumber(st, i, i + 2, true, currency);
+  }
+  // Between letters or digits ("5-year-old", "COVID-19", "10-20") a hyphen is neither word nor pause.
+  if (afterWord && isAlnumAt(text, i + 1) && c !== 0x2212) return i + 1;
+  // Leading, trailing, spaced or doubled ("--") hyphens are used as dashes.
+  markBreak(st);
+  return i + 1;
+}
+
+function scanOther(st: State, i: number, c: number): number {
+  const { text } = st;
+  if (isApostrophe(c)) return scanApostrophe(st, i);
+  if (isHyphen(c) || c === 0x2212) return scanHyphen(st, i, c);
+  if (c === 0x2e && isDigitAt(text, i + 1) && !isDigitAt(text, i - 1)) return scanNumber(st, i, i, false, null);
+  const currency = CURRENCIES.get(text[i]);
+  if (currency !== undefined && startsNumber(text, i + 1)) return scanNumber(st, i, i + 1, false, currency);
+  if (c === 0x26) {
+    push(st, i, i + 1, 'symbol', ['and']);
+    return i + 1;
+  }
+  if (BREAKS.has(c)) markBreak(st);
+  // Anything else (quotes, emoji, * # /) is not spoken and is skipped whole, surrogate pairs included.
+  const pair = c >= 0xd800 && c <= 0xdbff && (text.charCodeAt(i + 1) & 0xfc00) === 0xdc00;
+  return i + (pair ? 2 : 1);
+}
+
+/**
+ * Tokenises one item (a sentence or phrase). Offsets index `text` exactly as given, plus `offset`.
+ * Never throws; unspeakable characters are skipped.
+ */
+export function tokenize(text: string, offset = 0): Token[] {
+  const st: State = { text, offset, tokens: [], openQuote: false };
+  const n = text.length;
+  let i = 0;
+  while (i < n) {
+    const c = text.charCodeAt(i);
+    if (c <= 0x20) i++;
+    else if (c >= 0x30 && c <= 0x39) i = scanNumber(st, i, i, false, null);
+    else if (isLetterAt(text, i)) i = scanWord(st, i);
+    else i = scanOther(st, i, c);
+  }
+  // The period of an abbreviation ("etc.", "p.m.") is a break only when it ends the item.
+  const last = st.tokens[st.tokens.length - 1];
+  if (last !== undefined && last.surface.endsWith('.')) last.breakAfter = true;
+  return st.tokens;
+}
+
+/** Total spoken words in the tokens (the count pacing uses): 0 for none, symbols without words add 0. */
+export function spokenWordCount(tokens: Token[]): number {
+  let n = 0;
+  for (const t of tokens) n += t.words.length;
+  return n;
+}
