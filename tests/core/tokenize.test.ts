@@ -223,7 +223,7 @@ describe('tokenize', () => {
   });
 
   it('counts spoken words for pacing: each hyphen part, no symbols', () => {
-    expect(spokenWordCount(tokenize('My mother-in-law arrives at 3:30 p.m. \u{1f600} *'))).toBe(9);
+    expect(spokenWordCount(tokenize('My mother-in-law arrives at 3:30 p.m. \u{1f600} *'))).toBe(10);
     expect(spokenWordCount([])).toBe(0);
   });
 

@@ -3,10 +3,12 @@
 // editor and CI always agree.
 import { defaultOptions } from '../core/options';
 import type { AnalysisOptions, Override, Problem } from '../core/types';
+import type { LintSettings } from '../rules/types';
 
 export interface ScriptContext {
   options: AnalysisOptions;
   lexicon: Override[];
+  lint: LintSettings;
   /** Problems in config or lexicon files, with the file they are in. */
   problems: { file: string; problem: Problem }[];
 }
@@ -18,5 +20,5 @@ export interface ConfigFs {
 
 /** Context for one script path. (Config files are read in a later step of the resolver.) */
 export function resolveScriptContext(_path: string, _fs: ConfigFs): ScriptContext {
-  return { options: defaultOptions(), lexicon: [], problems: [] };
+  return { options: defaultOptions(), lexicon: [], problems: [], lint: { severities: {} } };
 }

@@ -4,7 +4,7 @@
 // Patterns are compiled once at load and used sticky, so tokenising never compiles a regex.
 
 import { toWords, toWordsOrdinal } from 'number-to-words';
-import { ABBREVIATIONS, CURRENCIES, LEADING_ELISIONS, type Currency } from './abbreviations';
+import { ABBREVIATIONS, CURRENCIES, LEADING_ELISIONS, type Abbreviation, type Currency } from './abbreviations';
 
 export interface Token {
   /** The written token as in the text, e.g. "Dr.", "3:30", "don't", "record(2)". */
@@ -60,6 +60,17 @@ const DIGIT_WORDS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seve
 const MAX_WORDED_DIGITS = 15;
 // The longest abbreviation recognised without its period ("prof", "blvd"); longer words skip the lookup.
 const MAX_BARE_LENGTH = 4;
+
+// Undotted abbreviations keyed by how they may be written ("Mr", "MR"; "vs", "Vs", "VS"), so a
+// word needs one lookup of its own spelling and no lower-casing.
+const BARE = new Map<string, Abbreviation>();
+for (const [written, entry] of ABBREVIATIONS) {
+  if (entry.bare === undefined) continue;
+  const lower = written.slice(0, -1);
+  const forms = [lower[0].toUpperCase() + lower.slice(1), lower.toUpperCase()];
+  if (entry.bare === 'any') forms.push(lower);
+  for (const form of forms) BARE.set(form, entry);
+}
 
 const BREAKS = new Set(
   // ASCII and typographic phrase punctuation, then the CJK, Arabic and Devanagari equivalents.
@@ -162,15 +173,30 @@ function digitByDigit(digits: string): string[] {
   return [...digits].map((d) => DIGIT_WORDS[d.charCodeAt(0) - 0x30]);
 }
 
+// number-to-words dominates the cost of a number, and scripts repeat the same few, so wordings are
+// memoised; the caches are cleared when full so memory stays bounded on generated input.
+const CACHE_LIMIT = 4096;
+const cardinalCache = new Map<string, readonly string[]>();
+const ordinalCache = new Map<string, readonly string[]>();
+
+function memoised(cache: Map<string, readonly string[]>, digits: string, word: (n: number) => string): string[] {
+  let words = cache.get(digits);
+  if (words === undefined) {
+    const readOut = (digits.length > 1 && digits[0] === '0') || digits.length > MAX_WORDED_DIGITS;
+    words = readOut ? digitByDigit(digits) : splitNumberWords(word(Number(digits)));
+    if (cache.size >= CACHE_LIMIT) cache.clear();
+    cache.set(digits, words);
+  }
+  return words.slice(); // Callers extend the list, so each gets its own copy.
+}
+
 /** Integer digits (no commas) as words; leading zeros ("007") and huge numbers are read digit by digit. */
 function cardinal(digits: string): string[] {
-  if ((digits.length > 1 && digits[0] === '0') || digits.length > MAX_WORDED_DIGITS) return digitByDigit(digits);
-  return splitNumberWords(toWords(Number(digits)));
+  return memoised(cardinalCache, digits, toWords);
 }
 
 function ordinal(digits: string): string[] {
-  if ((digits.length > 1 && digits[0] === '0') || digits.length > MAX_WORDED_DIGITS) return digitByDigit(digits);
-  return splitNumberWords(toWordsOrdinal(Number(digits)));
+  return memoised(ordinalCache, digits, toWordsOrdinal);
 }
 
 /** "3.14" -> three point one four; ".5" -> point five (decimals are read digit by digit). */
@@ -345,9 +371,8 @@ function scanAbbreviation(st: State, i: number, runEnd: number): number {
   }
   // Undotted forms ("Mr Smith", "cats vs dogs"), when the word ends here. None is over 4 letters.
   if (runEnd - i > MAX_BARE_LENGTH || isApostrophe(next) || isHyphen(next) || isLetterAt(text, runEnd)) return -1;
-  const entry = ABBREVIATIONS.get(`${text.slice(i, runEnd).toLowerCase()}.`);
-  if (entry === undefined || entry.bare === undefined) return -1;
-  if (entry.bare === 'capitalised' && !startsCapitalised(st, i)) return -1;
+  const entry = BARE.get(text.slice(i, runEnd));
+  if (entry === undefined) return -1;
   const before = entry.beforeCapital !== undefined && at(CAPITAL_NEXT, text, runEnd) !== null;
   return abbreviationToken(st, i, runEnd, before && entry.beforeCapital ? entry.beforeCapital : entry.words);
 }
@@ -370,14 +395,14 @@ function scanWord(st: State, i: number): number {
   if (abbreviation >= 0) return abbreviation;
 
   // Apostrophes between letters stay inside a part (don't, o'clock); hyphens start a new one.
-  const parts: string[] = [];
+  const words: string[] = [];
   let partStart = i;
   for (;;) {
     const c = text.charCodeAt(j);
     if (isApostrophe(c) && isLetterAt(text, j + 1)) {
       j = letterRunEnd(text, j + 1);
     } else if (isHyphen(c) && isLetterAt(text, j + 1)) {
-      parts.push(text.slice(partStart, j));
+      words.push(lookupForm(text.slice(partStart, j)));
       partStart = j + 1;
       j = letterRunEnd(text, partStart);
     } else {
@@ -391,7 +416,7 @@ function scanWord(st: State, i: number): number {
     if (!st.openQuote && keepsTrailingApostrophe(text.slice(partStart, j))) j = next;
     else st.openQuote = false;
   }
-  parts.push(text.slice(partStart, j));
+  words.push(lookupForm(text.slice(partStart, j)));
 
   let variant: number | null = null;
   const v = text.charCodeAt(next + 1);
@@ -399,7 +424,7 @@ function scanWord(st: State, i: number): number {
     variant = v - 0x30;
     next = j = j + 3;
   }
-  push(st, i, j, 'word', parts.map(lookupForm), variant);
+  push(st, i, j, 'word', words, variant);
   return next;
 }
 

@@ -144,7 +144,25 @@ export const NRL_RULES: Readonly<Record<string, readonly string[]>> = {
  * Rules added by Rungs, tried before the published rules of their letter. Each fixes a whole class
  * of spellings the report's rules miss, found by measuring against the CMU dictionary.
  */
-export const AMENDMENTS: Readonly<Record<string, readonly string[]>> = {};
+export const AMENDMENTS: Readonly<Record<string, readonly string[]>> = {
+  A: [
+    // Doubled A is one vowel ("bazaar", "aardvark", and many Dutch and Afrikaans names).
+    '[AA]=AA',
+  ],
+  M: [
+    // The Gaelic name prefix Mc- is a syllable of its own, "mac" (mcbride = M AH0 K B R AY1 D).
+    ' [MCG]=M AX G', ' [MC]=M AX K',
+  ],
+  L: [
+    // A consonant + -ler, -ling or -ley reads without a schwa before the l (butler, darling,
+    // parsley); the report's L-suffix rule gives these an extra syllable.
+    '#:^[L]ER=L', '#:^[L]EY=L',
+  ],
+  S: [
+    // Final -ism and -asm end in a syllable of their own (racism = R EY1 S IH0 Z AH0 M).
+    '#[SM] =Z AX M',
+  ],
+};
 
 function parseRule(source: string): LtsRule {
   const open = source.indexOf('[');
