@@ -35,6 +35,8 @@ const entries = [
   { in: 'server/src/cli/bin.ts', out: 'rungs.js' },
   { in: 'server/src/lsp/main.ts', out: 'server.js' },
   { in: 'client/src/extension.ts', out: 'extension.js', external: ['vscode'] },
+  // The benchmark calls the core in-process through this small bundle (not shipped).
+  { in: 'tests/bench/core-entry.ts', out: 'bench-core.js' },
 ];
 await Promise.all(
   entries

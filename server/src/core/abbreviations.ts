@@ -27,7 +27,8 @@ export const ABBREVIATIONS: ReadonlyMap<string, Abbreviation> = new Map<string, 
   // Places. "St." names a saint before a name ("St. Paul") and a street after one ("Main St.").
   ['st.', { words: ['street'], beforeCapital: ['saint'], bare: 'capitalised' }],
   ['mt.', { words: ['mount'], bare: 'capitalised' }],
-  ['ave.', { words: ['avenue'], bare: 'capitalised' }],
+  // No undotted "Ave": "Ave Maria" is a prayer, not an avenue.
+  ['ave.', { words: ['avenue'] }],
   ['rd.', { words: ['road'], bare: 'capitalised' }],
   ['blvd.', { words: ['boulevard'], bare: 'capitalised' }],
   // Latin and everyday short forms, read as their English expansion.

@@ -36,17 +36,13 @@ const LETTER = /\p{L}/uy;
 // Marks and joiners continue a word so decomposed "café" and Indic or Persian words stay whole.
 const LETTER_RUN = /[\p{L}\p{M}\u00ad\u200c\u200d]+/uy;
 const DOTTED = /[A-Za-z]+(?:\.[A-Za-z]+)*\./y;
-const TIME = /(\d{1,2}):(\d{2})(?!\d)/y;
-// Thousands separators only in proper groups of three, so "1,2,3" stays a list of numbers.
-const NUMBER = /(\d{1,3}(?:,\d{3})+(?!\d)|\d+)?(?:\.(\d+))?/y;
 const ORDINAL_SUFFIX = /(?:st|nd|rd|th)(?![\p{L}\p{N}])/iuy;
 const PLURAL_SUFFIX = /['\u2018\u2019\u02bc\u2032]?s(?![\p{L}\p{N}])/uy;
 // At most one space before am/pm; "a.m." keeps its periods, but a bare "pm." leaves its period as a break.
 const AM_PM = /[ \u00a0]?(?:([AaPp])\.[Mm]\.|([AaPp])[Mm](?![\p{L}\p{N}]))/uy;
 const SCALE = /\s+(thousand|million|billion|trillion)(?![\p{L}\p{N}])/iuy;
 const CAPITAL_NEXT = /\s+\p{Lu}/uy;
-const DECADE = /['\u2018\u2019\u02bc\u2032](\d\d)s(?![\p{L}\p{N}])/uy;
-const NON_ASCII = /[^\x00-\x7f]/;
+const DECADE = /['\u2018\u2019\u02bc\u2032](\d)0s(?![\p{L}\p{N}])/uy;
 const NON_LATIN_LETTER = /(?!\p{Script=Latin})\p{L}/u;
 const MARKS = /\p{M}+/gu;
 const SOFT_HYPHEN = /\u00ad/g;
@@ -71,6 +67,7 @@ for (const [written, entry] of ABBREVIATIONS) {
   if (entry.bare === 'any') forms.push(lower);
   for (const form of forms) BARE.set(form, entry);
 }
+const BARE_FIRST = new Set([...BARE.keys()].map((form) => form.charCodeAt(0)));
 
 const BREAKS = new Set(
   // ASCII and typographic phrase punctuation, then the CJK, Arabic and Devanagari equivalents.
@@ -110,6 +107,11 @@ function isHyphen(c: number): boolean {
   return c === 0x2d || c === 0x2010 || c === 0x2011;
 }
 
+function digitsEnd(text: string, j: number): number {
+  while (isDigitAt(text, j)) j++;
+  return j;
+}
+
 function startsNumber(text: string, i: number): boolean {
   return isDigitAt(text, i) || (text.charCodeAt(i) === 0x2e && isDigitAt(text, i + 1));
 }
@@ -137,17 +139,32 @@ function letterRunEnd(text: string, j: number): number {
  * carry vowels there, and are only composed (NFC) and lower-cased.
  */
 export function lookupForm(raw: string): string {
-  let w = raw;
-  if (NON_ASCII.test(w)) {
-    w = w.replace(CURLY_APOSTROPHES, "'").replace(SOFT_HYPHEN, '').normalize('NFD');
-    w = (NON_LATIN_LETTER.test(w) ? w : w.replace(MARKS, '')).normalize('NFC');
+  // Most words are plain ASCII and many already lower case: return those without allocating.
+  let upper = false;
+  for (let k = 0; k < raw.length; k++) {
+    const c = raw.charCodeAt(k);
+    if (c >= 0x80) return unicodeLookupForm(raw);
+    if (c >= 0x41 && c <= 0x5a) upper = true;
   }
-  return w.toLowerCase();
+  return upper ? raw.toLowerCase() : raw;
 }
 
-function push(st: State, start: number, end: number, kind: Kind, words: string[], variant: number | null = null) {
+function unicodeLookupForm(raw: string): string {
+  const w = raw.replace(CURLY_APOSTROPHES, "'").replace(SOFT_HYPHEN, '').normalize('NFD');
+  return (NON_LATIN_LETTER.test(w) ? w : w.replace(MARKS, '')).normalize('NFC').toLowerCase();
+}
+
+function push(
+  st: State,
+  start: number,
+  end: number,
+  kind: Kind,
+  words: string[],
+  variant: number | null = null,
+  surface: string = st.text.slice(start, end),
+) {
   st.tokens.push({
-    surface: st.text.slice(start, end),
+    surface,
     start: start + st.offset,
     end: end + st.offset,
     kind,
@@ -173,9 +190,9 @@ function digitByDigit(digits: string): string[] {
   return [...digits].map((d) => DIGIT_WORDS[d.charCodeAt(0) - 0x30]);
 }
 
-// number-to-words dominates the cost of a number, and scripts repeat the same few, so wordings are
-// memoised; the caches are cleared when full so memory stays bounded on generated input.
-const CACHE_LIMIT = 4096;
+// number-to-words dominates the cost of a number and scripts repeat the same few, so wordings of
+// up to four digits (at most 11,110 keys, so memory stays bounded) are memoised.
+const CACHE_MAX_DIGITS = 4;
 const cardinalCache = new Map<string, readonly string[]>();
 const ordinalCache = new Map<string, readonly string[]>();
 
@@ -184,8 +201,7 @@ function memoised(cache: Map<string, readonly string[]>, digits: string, word: (
   if (words === undefined) {
     const readOut = (digits.length > 1 && digits[0] === '0') || digits.length > MAX_WORDED_DIGITS;
     words = readOut ? digitByDigit(digits) : splitNumberWords(word(Number(digits)));
-    if (cache.size >= CACHE_LIMIT) cache.clear();
-    cache.set(digits, words);
+    if (digits.length <= CACHE_MAX_DIGITS) cache.set(digits, words);
   }
   return words.slice(); // Callers extend the list, so each gets its own copy.
 }
@@ -271,20 +287,32 @@ function scanTime(st: State, start: number, end: number, hour: number, minute: n
 /** Scans a number whose digits (or ".digit") begin at i; the token begins at start (sign or currency). */
 function scanNumber(st: State, start: number, i: number, minus: boolean, currency: Currency | null): number {
   const { text } = st;
-  if (!minus && currency === null) {
-    const t = at(TIME, text, i);
-    if (t !== null) {
-      const hour = Number(t[1]);
-      const minute = Number(t[2]);
-      if (hour <= 23 && minute <= 59) return scanTime(st, start, i + t[0].length, hour, minute);
+  const intEnd = digitsEnd(text, i);
+  let j = intEnd;
+  // "H:MM" or "HH:MM" with a real hour and minute is a time; "25:61" is two numbers.
+  if (!minus && currency === null && j - i <= 2 && j > i && text.charCodeAt(j) === 0x3a &&
+      isDigitAt(text, j + 1) && isDigitAt(text, j + 2) && !isDigitAt(text, j + 3)) {
+    const hour = Number(text.slice(i, j));
+    const minute = Number(text.slice(j + 1, j + 3));
+    if (hour <= 23 && minute <= 59) return scanTime(st, start, j + 3, hour, minute);
+  }
+  // Thousands separators only in whole groups of three, so "1,2,3" stays a list of numbers.
+  let grouped = false;
+  if (j - i >= 1 && j - i <= 3) {
+    while (text.charCodeAt(j) === 0x2c && digitsEnd(text, j + 1) === j + 4) {
+      j += 4;
+      grouped = true;
     }
   }
-  const m = at(NUMBER, text, i) as RegExpExecArray; // Matches: the caller saw a digit or ".digit".
-  const intText = m[1] ?? '';
-  const decimals = m[2];
-  const digits = intText.replace(COMMAS, '');
+  const intText = text.slice(i, j);
+  const digits = grouped ? intText.replace(COMMAS, '') : intText;
+  let decimals: string | undefined;
+  if (text.charCodeAt(j) === 0x2e && isDigitAt(text, j + 1)) {
+    const end = digitsEnd(text, j + 1);
+    decimals = text.slice(j + 1, end);
+    j = end;
+  }
   const plain = decimals === undefined && digits !== '';
-  let j = i + m[0].length;
   let kind: Kind = 'number';
   let words: string[];
   let suffix: RegExpExecArray | null;
@@ -303,10 +331,11 @@ function scanNumber(st: State, start: number, i: number, minus: boolean, currenc
     kind = 'ordinal';
     words = ordinal(digits);
     j += suffix[0].length;
-  } else if (text.charCodeAt(j) === 0x25) {
+  } else if (text.charCodeAt(j) === 0x25 || (text.charCodeAt(j) === 0x20 && text.charCodeAt(j + 1) === 0x25)) {
+    // "50%" and "50 %" are both said "fifty percent".
     kind = 'percent';
     words = [...amountWords(digits, decimals), 'percent'];
-    j++;
+    j = text.indexOf('%', j) + 1;
   } else if (plain && !minus && intText.length <= 2 && Number(digits) >= 1 && Number(digits) <= 12 &&
       (suffix = at(AM_PM, text, j)) !== null) {
     kind = 'time';
@@ -371,6 +400,7 @@ function scanAbbreviation(st: State, i: number, runEnd: number): number {
   }
   // Undotted forms ("Mr Smith", "cats vs dogs"), when the word ends here. None is over 4 letters.
   if (runEnd - i > MAX_BARE_LENGTH || isApostrophe(next) || isHyphen(next) || isLetterAt(text, runEnd)) return -1;
+  if (!BARE_FIRST.has(text.charCodeAt(i))) return -1;
   const entry = BARE.get(text.slice(i, runEnd));
   if (entry === undefined) return -1;
   const before = entry.beforeCapital !== undefined && at(CAPITAL_NEXT, text, runEnd) !== null;
@@ -416,15 +446,17 @@ function scanWord(st: State, i: number): number {
     if (!st.openQuote && keepsTrailingApostrophe(text.slice(partStart, j))) j = next;
     else st.openQuote = false;
   }
-  words.push(lookupForm(text.slice(partStart, j)));
+  const lastPart = text.slice(partStart, j);
+  words.push(lookupForm(lastPart));
 
-  let variant: number | null = null;
   const v = text.charCodeAt(next + 1);
   if (next === j && text.charCodeAt(j) === 0x28 && v >= 0x31 && v <= 0x39 && text.charCodeAt(j + 2) === 0x29) {
-    variant = v - 0x30;
-    next = j = j + 3;
+    next = j + 3;
+    push(st, i, next, 'word', words, v - 0x30);
+  } else {
+    // A one-part word is its own surface; sharing the string saves an allocation per word.
+    push(st, i, j, 'word', words, null, partStart === i ? lastPart : text.slice(i, j));
   }
-  push(st, i, j, 'word', words, variant);
   return next;
 }
 
@@ -434,7 +466,9 @@ function scanApostrophe(st: State, i: number): number {
   const decade = at(DECADE, text, i);
   if (decade !== null) {
     const end = i + decade[0].length;
-    push(st, i, end, 'number', pluralise(cardinal(String(Number(decade[1])))));
+    // "'90s" -> nineties; "'00s" names the decade after 2000 ("two thousands"), not zeros.
+    const words = decade[1] === '0' ? ['two', 'thousand'] : cardinal(`${decade[1]}0`);
+    push(st, i, end, 'number', pluralise(words));
     return end;
   }
   if (isLetterAt(text, i + 1)) {

@@ -2,7 +2,7 @@
 // ARPAbet phones, for words the dictionary does not list. Pure and allocation-light: it is called
 // once per unknown word and keeps no cache.
 
-import { LTS_RULES, type LtsRule } from './rules';
+import { LETTER_NAMES, LTS_RULES, type LtsRule } from './rules';
 
 const VOWELS = 'AEIOU';
 const VOICED = 'BDVGJLMNRWZ';
@@ -13,11 +13,23 @@ const LONG_U_CONSONANTS = 'TSRDLZNJ';
 function isLetter(c: string | undefined): boolean {
   return c !== undefined && c >= 'A' && c <= 'Z';
 }
-function isVowel(c: string | undefined): boolean {
-  return c !== undefined && c.length === 1 && VOWELS.includes(c);
+/**
+ * Whether text[p] is a vowel letter for the contexts. The report counts only A E I O U; here a Y
+ * after a consonant and not before a vowel counts too ("tyke", "scythe", "myth"), so that rules
+ * like `#:[E] =` (silent final e) see the vowel it spells. A departure, measured to help.
+ */
+function vowelAt(text: string, p: number): boolean {
+  const c = text[p];
+  if (c !== undefined && c.length === 1 && VOWELS.includes(c)) return true;
+  if (c === 'Y') {
+    const before = text[p - 1];
+    const after = text[p + 1];
+    return isLetter(before) && !VOWELS.includes(before) && before !== 'Y' && !(after !== undefined && VOWELS.includes(after));
+  }
+  return false;
 }
-function isConsonant(c: string | undefined): boolean {
-  return isLetter(c) && !isVowel(c);
+function consonantAt(text: string, p: number): boolean {
+  return isLetter(text[p]) && !vowelAt(text, p);
 }
 function isIn(set: string, c: string | undefined): boolean {
   return c !== undefined && c.length === 1 && set.includes(c);
@@ -35,18 +47,18 @@ function matchLeft(pattern: string, text: string, pos: number): boolean {
         p--;
         break;
       case '#':
-        if (!isVowel(c)) return false;
-        while (isVowel(text[p])) p--;
+        if (!vowelAt(text, p)) return false;
+        while (vowelAt(text, p)) p--;
         break;
       case ':':
-        while (isConsonant(text[p])) p--;
+        while (consonantAt(text, p)) p--;
         break;
       case '*':
-        if (!isConsonant(c)) return false;
-        while (isConsonant(text[p])) p--;
+        if (!consonantAt(text, p)) return false;
+        while (consonantAt(text, p)) p--;
         break;
       case '^':
-        if (!isConsonant(c)) return false;
+        if (!consonantAt(text, p)) return false;
         p--;
         break;
       case '.':
@@ -58,7 +70,7 @@ function matchLeft(pattern: string, text: string, pos: number): boolean {
         p--;
         break;
       case '$':
-        if (!isConsonant(c) || !isIn('EI', text[p + 1])) return false;
+        if (!consonantAt(text, p) || !isIn('EI', text[p + 1])) return false;
         p--;
         break;
       case '&':
@@ -91,18 +103,18 @@ function matchRight(pattern: string, text: string, pos: number): boolean {
         p++;
         break;
       case '#':
-        if (!isVowel(c)) return false;
-        while (isVowel(text[p])) p++;
+        if (!vowelAt(text, p)) return false;
+        while (vowelAt(text, p)) p++;
         break;
       case ':':
-        while (isConsonant(text[p])) p++;
+        while (consonantAt(text, p)) p++;
         break;
       case '*':
-        if (!isConsonant(c)) return false;
-        while (isConsonant(text[p])) p++;
+        if (!consonantAt(text, p)) return false;
+        while (consonantAt(text, p)) p++;
         break;
       case '^':
-        if (!isConsonant(c)) return false;
+        if (!consonantAt(text, p)) return false;
         p++;
         break;
       case '.':
@@ -114,7 +126,7 @@ function matchRight(pattern: string, text: string, pos: number): boolean {
         p++;
         break;
       case '$':
-        if (!isConsonant(c) || !isIn('EI', text[p + 1])) return false;
+        if (!consonantAt(text, p) || !isIn('EI', text[p + 1])) return false;
         p += 2;
         break;
       case '%':
@@ -128,6 +140,9 @@ function matchRight(pattern: string, text: string, pos: number): boolean {
         } else {
           return false;
         }
+        // The report's suffix must end the word here: read mid-word, "[I]%" makes two vowels of
+        // the ie of "field" and "achieve". A departure from the report, measured to help.
+        if (isLetter(text[p])) return false;
         break;
       case '&':
         if (isIn('CS', c) && text[p + 1] === 'H') p += 2;
@@ -199,6 +214,18 @@ function assignStress(phones: string[], starts: number[], letters: string): stri
   });
 }
 
+function spellOut(letters: string): string[] {
+  const phones: string[] = [];
+  const names = [...letters].filter((c) => LETTER_NAMES[c] !== undefined);
+  names.forEach((c, k) => {
+    // The last letter name takes the primary stress, the others secondary ("dnc" = D IY1 EH2 N S IY2
+    // in CMU puts it first, but both patterns occur; the count of syllables is what matters here).
+    const last = k === names.length - 1;
+    for (const phone of LETTER_NAMES[c]) phones.push(phone.replace('1', last ? '1' : '2'));
+  });
+  return phones;
+}
+
 /**
  * Estimates the CMU ARPAbet phones of a spelling with the NRL letter-to-sound rules, stress digits
  * on every vowel (a heuristic; see `assignStress`). Letters a-z and the apostrophe are used, case
@@ -207,6 +234,9 @@ function assignStress(phones: string[], starts: number[], letters: string): stri
 export function letterToSound(word: string): string[] {
   const letters = word.toUpperCase().replace(/[^A-Z']/g, '');
   if (letters === '') return [];
+  // A spelling with no vowel letter at all is read letter by letter, as an abbreviation ("dnc",
+  // "sql"); the report's rules would give it no syllable. A departure from the report.
+  if (!/[AEIOUY]/.test(letters)) return spellOut(letters);
   const text = ` ${letters} `;
   const phones: string[] = [];
   const starts: number[] = [];

@@ -148,6 +148,38 @@ export const AMENDMENTS: Readonly<Record<string, readonly string[]>> = {
   A: [
     // Doubled A is one vowel ("bazaar", "aardvark", and many Dutch and Afrikaans names).
     '[AA]=AA',
+    // A before -sion is long (invasion, occasion); the report's AS rule takes the s from -sion.
+    '^[A]SION=EY',
+    // AE spells one vowel (aerial, caesar, graeme).
+    '[AE]=EH',
+    // AY is a vowel digraph before any context rule can read the Y as a consonant (bayer, layer).
+    '[AY]=EY',
+  ],
+  C: [
+    // -ceous is one syllable (herbaceous, cretaceous).
+    '[CEOUS]=SH AX S',
+  ],
+  D: [
+    // D before a soft G is silent: the DG of judge, edge, budget is one affricate.
+    '[D]G+=',
+  ],
+  E: [
+    // EAU(X) is one vowel (plateau, bureau, and many French names).
+    '[EAUX]=OW', '[EAU]=OW',
+  ],
+  G: [
+    // -geous is one syllable (gorgeous, courageous).
+    '[GEOUS]=JH AX S',
+  ],
+  I: [
+    // After a double L, -ion is a glide and a schwa (million, billion, stallion).
+    'LL[I]ON=Y',
+  ],
+  O: [
+    // OE before two consonants or an H is one vowel (mostly German names: roessner, koehn).
+    '[OE]^^=OW', '[OE]H=OW',
+    // OY is a vowel digraph before any context rule can read the Y as a consonant (boyer).
+    '[OY]=OY',
   ],
   M: [
     // The Gaelic name prefix Mc- is a syllable of its own, "mac" (mcbride = M AH0 K B R AY1 D).
@@ -156,12 +188,21 @@ export const AMENDMENTS: Readonly<Record<string, readonly string[]>> = {
   L: [
     // A consonant + -ler, -ling or -ley reads without a schwa before the l (butler, darling,
     // parsley); the report's L-suffix rule gives these an extra syllable.
-    '#:^[L]ER=L', '#:^[L]EY=L',
+    '#:^[L]ER=L', '#:^[L]ING=L', '#:^[L]EY=L',
   ],
   S: [
     // Final -ism and -asm end in a syllable of their own (racism = R EY1 S IH0 Z AH0 M).
     '#[SM] =Z AX M',
   ],
+};
+
+/** Names of the letters in CMU phones, for spellings read letter by letter (abbreviations). */
+export const LETTER_NAMES: Readonly<Record<string, readonly string[]>> = {
+  A: ['EY1'], B: ['B', 'IY1'], C: ['S', 'IY1'], D: ['D', 'IY1'], E: ['IY1'], F: ['EH1', 'F'],
+  G: ['JH', 'IY1'], H: ['EY1', 'CH'], I: ['AY1'], J: ['JH', 'EY1'], K: ['K', 'EY1'], L: ['EH1', 'L'],
+  M: ['EH1', 'M'], N: ['EH1', 'N'], O: ['OW1'], P: ['P', 'IY1'], Q: ['K', 'Y', 'UW1'], R: ['AA1', 'R'],
+  S: ['EH1', 'S'], T: ['T', 'IY1'], U: ['Y', 'UW1'], V: ['V', 'IY1'],
+  W: ['D', 'AH1', 'B', 'AH0', 'L', 'Y', 'UW0'], X: ['EH1', 'K', 'S'], Y: ['W', 'AY1'], Z: ['Z', 'IY1'],
 };
 
 function parseRule(source: string): LtsRule {

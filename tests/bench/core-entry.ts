@@ -1,0 +1,3 @@
+// What the benchmark needs from the server, bundled to dist/bench-core.js by the build.
+export { analyze } from '../../server/src/core/analyze';
+export { loadWordTable } from '../../server/src/data/wordTable';

@@ -1,0 +1,39 @@
+// A seeded, generated stimulus script for the benchmark: rungs of sentences made from common and
+// less common words, with settings, notes and the odd number, like a large real library.
+export function mulberry32(seed) {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+const SUBJECTS = ['I', 'We', 'My sister', 'The nurse', 'Our neighbour', 'Grandpa', 'The children', 'You'];
+const VERBS = ['want', 'need', 'like', 'bought', 'found', 'carried', 'remember', 'cooked', 'painted', 'washed'];
+const OBJECTS = [
+  'the bread', 'a cup of tea', 'the blue umbrella', 'some oranges', 'the newspaper', 'my glasses',
+  'a warm blanket', 'the telephone', 'two tickets', 'the vegetables', 'a birthday cake', 'the keys',
+];
+const TAILS = [
+  '', 'today', 'this morning', 'at 3:30', 'after lunch', 'before the appointment', 'with Dr. Patel',
+  'for the grandchildren', 'on Saturday afternoon', 'near the library', 'in the garden', 'again',
+];
+
+export function generateScript(items, seed = 20261201) {
+  const rand = mulberry32(seed);
+  const pick = (xs) => xs[Math.floor(rand() * xs.length)];
+  const lines = ['// generated benchmark script', '@title Benchmark library', '@paces 1, 1.5, 2 wps', '@baseline 0.8 wps', ''];
+  const perRung = 500;
+  for (let i = 0; i < items; i++) {
+    if (i % perRung === 0) lines.push('', `== Level ${i / perRung + 1}`);
+    const words = [pick(SUBJECTS), pick(VERBS), pick(OBJECTS)];
+    const tail = pick(TAILS);
+    if (tail) words.push(tail);
+    const note = rand() < 0.2 ? ` | practise twice #b${i}` : '';
+    lines.push(`${words.join(' ')}.${note}`);
+  }
+  return `${lines.join('\n')}\n`;
+}
