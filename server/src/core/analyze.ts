@@ -5,7 +5,7 @@ import { LOW_FREQUENCY_ZIPF } from './frequency';
 import { applySettings, defaultOptions } from './options';
 import { timeAt } from './pace';
 import { parseScript } from './parse';
-import { Pronouncer } from './pronounce';
+import { Pronouncer, type WordScore } from './pronounce';
 import { tokenize } from './tokenize';
 import type {
   Analysis,
@@ -38,6 +38,35 @@ export interface AnalyzeInput {
 export interface AnalyzeOutput extends Analysis {
   /** The pronouncer used, with a key for reuse on the next analysis. */
   pronouncer: { key: string; pronouncer: Pronouncer };
+}
+
+/**
+ * A word where it stands in an item. Everything that does not depend on position is shared with
+ * the pronouncer's per-spelling score, so a 10,000-item script allocates little per word.
+ */
+class PlacedWord implements WordAnalysis {
+  constructor(
+    readonly surface: string,
+    readonly start: number,
+    readonly end: number,
+    readonly spoken: string,
+    private readonly score: WordScore,
+  ) {}
+  get phones() { return this.score.phones; }
+  get source() { return this.score.source; }
+  get variant() { return this.score.variant; }
+  get variants() { return this.score.variants; }
+  get syllables() { return this.score.syllables; }
+  get phonemes() { return this.score.phonemes; }
+  get wcm() { return this.score.wcm; }
+  get count() { return this.score.count; }
+  get zipf() { return this.score.zipf; }
+  get lg10wf() { return this.score.lg10wf; }
+  /** Plain data for serialisers (getters are not own properties). */
+  toJSON(): WordAnalysis {
+    const { surface, start, end, spoken, phones, source, variant, variants, syllables, phonemes, wcm, count, zipf, lg10wf } = this;
+    return { surface, start, end, spoken, phones, source, variant, variants, syllables, phonemes, wcm, count, zipf, lg10wf };
+  }
 }
 
 function pronouncerKey(overrides: Override[], options: AnalysisOptions): string {
@@ -77,22 +106,7 @@ export function analyzeItem(
           endCharacter: t.end,
         });
       }
-      words.push({
-        surface: t.surface,
-        start: t.start,
-        end: t.end,
-        spoken,
-        phones: s.phones,
-        source: s.source,
-        variant: s.variant,
-        variants: s.variants,
-        syllables: s.syllables,
-        phonemes: s.phonemes,
-        wcm: s.wcm,
-        count: s.count,
-        zipf: s.zipf,
-        lg10wf: s.lg10wf,
-      });
+      words.push(new PlacedWord(t.surface, t.start, t.end, spoken, s));
       syllables += s.syllables;
       phonemes += s.phonemes;
       wcm += s.wcm.total;

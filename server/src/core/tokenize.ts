@@ -81,14 +81,22 @@ function at(re: RegExp, text: string, i: number): RegExpExecArray | null {
   return re.exec(text);
 }
 
+/**
+ * The UTF-16 unit at i, or -1 outside the text. Scanners peek past both ends all the time, and
+ * reading out of range with charCodeAt makes V8 throw away its optimised code once per function.
+ */
+function codeAt(text: string, i: number): number {
+  return i >= 0 && i < text.length ? text.charCodeAt(i) : -1;
+}
+
 function isDigitAt(text: string, i: number): boolean {
-  const c = text.charCodeAt(i);
+  const c = codeAt(text, i);
   return c >= 0x30 && c <= 0x39;
 }
 
 function isLetterAt(text: string, i: number): boolean {
-  if (i < 0 || i >= text.length) return false;
-  const c = text.charCodeAt(i);
+  const c = codeAt(text, i);
+  if (c < 0) return false;
   if (c < 0x80) return (c >= 0x41 && c <= 0x5a) || (c >= 0x61 && c <= 0x7a);
   return at(LETTER, text, i) !== null;
 }
@@ -112,8 +120,14 @@ function digitsEnd(text: string, j: number): number {
   return j;
 }
 
+function currencyAt(text: string, i: number): Currency | undefined {
+  // Currency signs are all single UTF-16 units; skip the lookup for the many characters that are not.
+  const c = codeAt(text, i);
+  return c === 0x24 || c >= 0xa0 ? CURRENCIES.get(text[i]) : undefined;
+}
+
 function startsNumber(text: string, i: number): boolean {
-  return isDigitAt(text, i) || (text.charCodeAt(i) === 0x2e && isDigitAt(text, i + 1));
+  return isDigitAt(text, i) || (codeAt(text, i) === 0x2e && isDigitAt(text, i + 1));
 }
 
 function letterRunEnd(text: string, j: number): number {
@@ -290,7 +304,7 @@ function scanNumber(st: State, start: number, i: number, minus: boolean, currenc
   const intEnd = digitsEnd(text, i);
   let j = intEnd;
   // "H:MM" or "HH:MM" with a real hour and minute is a time; "25:61" is two numbers.
-  if (!minus && currency === null && j - i <= 2 && j > i && text.charCodeAt(j) === 0x3a &&
+  if (!minus && currency === null && j - i <= 2 && j > i && codeAt(text, j) === 0x3a &&
       isDigitAt(text, j + 1) && isDigitAt(text, j + 2) && !isDigitAt(text, j + 3)) {
     const hour = Number(text.slice(i, j));
     const minute = Number(text.slice(j + 1, j + 3));
@@ -299,7 +313,7 @@ function scanNumber(st: State, start: number, i: number, minus: boolean, currenc
   // Thousands separators only in whole groups of three, so "1,2,3" stays a list of numbers.
   let grouped = false;
   if (j - i >= 1 && j - i <= 3) {
-    while (text.charCodeAt(j) === 0x2c && digitsEnd(text, j + 1) === j + 4) {
+    while (codeAt(text, j) === 0x2c && digitsEnd(text, j + 1) === j + 4) {
       j += 4;
       grouped = true;
     }
@@ -307,7 +321,7 @@ function scanNumber(st: State, start: number, i: number, minus: boolean, currenc
   const intText = text.slice(i, j);
   const digits = grouped ? intText.replace(COMMAS, '') : intText;
   let decimals: string | undefined;
-  if (text.charCodeAt(j) === 0x2e && isDigitAt(text, j + 1)) {
+  if (codeAt(text, j) === 0x2e && isDigitAt(text, j + 1)) {
     const end = digitsEnd(text, j + 1);
     decimals = text.slice(j + 1, end);
     j = end;
@@ -331,7 +345,7 @@ function scanNumber(st: State, start: number, i: number, minus: boolean, currenc
     kind = 'ordinal';
     words = ordinal(digits);
     j += suffix[0].length;
-  } else if (text.charCodeAt(j) === 0x25 || (text.charCodeAt(j) === 0x20 && text.charCodeAt(j + 1) === 0x25)) {
+  } else if (codeAt(text, j) === 0x25 || (codeAt(text, j) === 0x20 && codeAt(text, j + 1) === 0x25)) {
     // "50%" and "50 %" are both said "fifty percent".
     kind = 'percent';
     words = [...amountWords(digits, decimals), 'percent'];
@@ -361,15 +375,15 @@ function abbreviationToken(st: State, start: number, end: number, words: readonl
   return end;
 }
 
-function startsCapitalised(st: State, i: number): boolean {
-  const c = st.text.charCodeAt(i);
+function isCapitalAt(text: string, i: number): boolean {
+  const c = codeAt(text, i);
   return c >= 0x41 && c <= 0x5a;
 }
 
 /** Tries an abbreviation at word start i whose first letter run ends at runEnd; returns its end or -1. */
 function scanAbbreviation(st: State, i: number, runEnd: number): number {
   const { text } = st;
-  const next = text.charCodeAt(runEnd);
+  const next = codeAt(text, runEnd);
   if (next === 0x2e) {
     const m = at(DOTTED, text, i);
     if (m === null) return -1;
@@ -390,9 +404,9 @@ function scanAbbreviation(st: State, i: number, runEnd: number): number {
       return abbreviationToken(st, i, end, before && entry.beforeCapital ? entry.beforeCapital : entry.words);
     }
     // A capital initial between names ("John F. Kennedy", "J. Smith") is not a sentence end.
-    if (raw.length === 2 && startsCapitalised(st, i) && at(CAPITAL_NEXT, text, end) !== null) {
+    if (raw.length === 2 && isCapitalAt(text, i) && at(CAPITAL_NEXT, text, end) !== null) {
       const prev = st.tokens[st.tokens.length - 1];
-      if (prev === undefined || prev.breakAfter || startsCapitalisedSurface(prev.surface)) {
+      if (prev === undefined || prev.breakAfter || isCapitalAt(prev.surface, 0)) {
         return abbreviationToken(st, i, end, [raw[0].toLowerCase()]);
       }
     }
@@ -400,16 +414,11 @@ function scanAbbreviation(st: State, i: number, runEnd: number): number {
   }
   // Undotted forms ("Mr Smith", "cats vs dogs"), when the word ends here. None is over 4 letters.
   if (runEnd - i > MAX_BARE_LENGTH || isApostrophe(next) || isHyphen(next) || isLetterAt(text, runEnd)) return -1;
-  if (!BARE_FIRST.has(text.charCodeAt(i))) return -1;
+  if (!BARE_FIRST.has(codeAt(text, i))) return -1;
   const entry = BARE.get(text.slice(i, runEnd));
   if (entry === undefined) return -1;
   const before = entry.beforeCapital !== undefined && at(CAPITAL_NEXT, text, runEnd) !== null;
   return abbreviationToken(st, i, runEnd, before && entry.beforeCapital ? entry.beforeCapital : entry.words);
-}
-
-function startsCapitalisedSurface(surface: string): boolean {
-  const c = surface.charCodeAt(0);
-  return c >= 0x41 && c <= 0x5a;
 }
 
 /** A trailing apostrophe belongs to the word in "James'", "dogs'" and dropped-g "goin'". */
@@ -425,14 +434,14 @@ function scanWord(st: State, i: number): number {
   if (abbreviation >= 0) return abbreviation;
 
   // Apostrophes between letters stay inside a part (don't, o'clock); hyphens start a new one.
-  const words: string[] = [];
+  let words: string[] | null = null;
   let partStart = i;
   for (;;) {
-    const c = text.charCodeAt(j);
+    const c = codeAt(text, j);
     if (isApostrophe(c) && isLetterAt(text, j + 1)) {
       j = letterRunEnd(text, j + 1);
     } else if (isHyphen(c) && isLetterAt(text, j + 1)) {
-      words.push(lookupForm(text.slice(partStart, j)));
+      (words ??= []).push(lookupForm(text.slice(partStart, j)));
       partStart = j + 1;
       j = letterRunEnd(text, partStart);
     } else {
@@ -440,17 +449,19 @@ function scanWord(st: State, i: number): number {
     }
   }
   let next = j;
-  if (isApostrophe(text.charCodeAt(j)) && !isAlnumAt(text, j + 1)) {
+  if (isApostrophe(codeAt(text, j)) && !isAlnumAt(text, j + 1)) {
     // The apostrophe is consumed either way: it is a possessive or it closes a quotation.
     next = j + 1;
     if (!st.openQuote && keepsTrailingApostrophe(text.slice(partStart, j))) j = next;
     else st.openQuote = false;
   }
   const lastPart = text.slice(partStart, j);
-  words.push(lookupForm(lastPart));
+  // Most words have one part; a literal array is sized exactly, where push() would reserve 17 slots.
+  if (words === null) words = [lookupForm(lastPart)];
+  else words.push(lookupForm(lastPart));
 
-  const v = text.charCodeAt(next + 1);
-  if (next === j && text.charCodeAt(j) === 0x28 && v >= 0x31 && v <= 0x39 && text.charCodeAt(j + 2) === 0x29) {
+  const v = codeAt(text, j + 1);
+  if (next === j && codeAt(text, j) === 0x28 && v >= 0x31 && v <= 0x39 && codeAt(text, j + 2) === 0x29) {
     next = j + 3;
     push(st, i, next, 'word', words, v - 0x30);
   } else {
@@ -474,7 +485,7 @@ function scanApostrophe(st: State, i: number): number {
   if (isLetterAt(text, i + 1)) {
     let end = letterRunEnd(text, i + 1);
     const form = `'${lookupForm(text.slice(i + 1, end))}`;
-    const c = text.charCodeAt(end);
+    const c = codeAt(text, end);
     const continues = (isApostrophe(c) || isHyphen(c)) && isLetterAt(text, end + 1);
     if (LEADING_ELISIONS.has(form) && !continues) {
       if (form === "'n" && isApostrophe(c)) end++; // 'n' is written between two apostrophes.
@@ -493,7 +504,7 @@ function scanHyphen(st: State, i: number, c: number): number {
   const afterWord = isAlnumAt(text, i - 1);
   if (!afterWord && (c === 0x2d || c === 0x2212)) {
     if (startsNumber(text, i + 1)) return scanNumber(st, i, i + 1, true, null);
-    const currency = CURRENCIES.get(text[i + 1]);
+    const currency = currencyAt(text, i + 1);
     if (currency !== undefined && startsNumber(text, i + 2)) return scanNumber(st, i, i + 2, true, currency);
   }
   // Between letters or digits ("5-year-old", "COVID-19", "10-20") a hyphen is neither word nor pause.
@@ -508,7 +519,7 @@ function scanOther(st: State, i: number, c: number): number {
   if (isApostrophe(c)) return scanApostrophe(st, i);
   if (isHyphen(c) || c === 0x2212) return scanHyphen(st, i, c);
   if (c === 0x2e && isDigitAt(text, i + 1) && !isDigitAt(text, i - 1)) return scanNumber(st, i, i, false, null);
-  const currency = CURRENCIES.get(text[i]);
+  const currency = currencyAt(text, i);
   if (currency !== undefined && startsNumber(text, i + 1)) return scanNumber(st, i, i + 1, false, currency);
   if (c === 0x26) {
     push(st, i, i + 1, 'symbol', ['and']);
@@ -516,7 +527,7 @@ function scanOther(st: State, i: number, c: number): number {
   }
   if (BREAKS.has(c)) markBreak(st);
   // Anything else (quotes, emoji, * # /) is not spoken and is skipped whole, surrogate pairs included.
-  const pair = c >= 0xd800 && c <= 0xdbff && (text.charCodeAt(i + 1) & 0xfc00) === 0xdc00;
+  const pair = c >= 0xd800 && c <= 0xdbff && (codeAt(text, i + 1) & 0xfc00) === 0xdc00;
   return i + (pair ? 2 : 1);
 }
 

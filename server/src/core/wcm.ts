@@ -92,6 +92,14 @@ export function wordComplexity(phones: string[], options: WcmOptions = DEFAULT_W
   return { total, parts };
 }
 
+/** Adds one word's parameters into an item's running totals (explicit fields: this is a hot path). */
 export function addWcmParts(into: WcmParts, from: WcmParts): void {
-  for (const k of Object.keys(into) as (keyof WcmParts)[]) into[k] += from[k];
+  into.syllables += from.syllables;
+  into.nonInitialStress += from.nonInitialStress;
+  into.finalConsonant += from.finalConsonant;
+  into.clusters += from.clusters;
+  into.velars += from.velars;
+  into.liquids += from.liquids;
+  into.fricatives += from.fricatives;
+  into.voicedFricatives += from.voicedFricatives;
 }

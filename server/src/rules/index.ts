@@ -1,29 +1,87 @@
 // The rule registry and the one entry point both the CLI and the language server call.
 import type { Analysis, Problem } from '../core/types';
 import { splitLines } from '../core/parse';
+import { badConfig } from './badConfig';
+import { badDirective } from './badDirective';
+import { badValue } from './badValue';
+import { badVariant } from './badVariant';
+import { isAllowed, readDirectives } from './directives';
+import { duplicateItem } from './duplicateItem';
+import { estimatedWord } from './estimatedWord';
+import { itemOutlier } from './itemOutlier';
+import { itemTooLong } from './itemTooLong';
+import { paceAboveNorm } from './paceAboveNorm';
+import { paceBelowBaseline } from './paceBelowBaseline';
+import { paceSlowsDown } from './paceSlowsDown';
+import { rungsOverlap } from './rungsOverlap';
+import { stepBackwards } from './stepBackwards';
+import { stepTooBig } from './stepTooBig';
+import { thinRung } from './thinRung';
 import type { LintSettings, Rule } from './types';
+import { unevenSteps } from './unevenSteps';
+import { unknownKey } from './unknownKey';
+import { unknownPhone } from './unknownPhone';
+import { unsortedRung } from './unsortedRung';
 
-/** Every rule, in documentation order. */
-export const RULES: Rule[] = [];
+/** Every rule, in documentation order: ladder, items, paces, then the format itself. */
+export const RULES: Rule[] = [
+  stepBackwards,
+  stepTooBig,
+  unevenSteps,
+  rungsOverlap,
+  thinRung,
+  unsortedRung,
+  itemOutlier,
+  duplicateItem,
+  itemTooLong,
+  estimatedWord,
+  unknownPhone,
+  badVariant,
+  paceSlowsDown,
+  paceAboveNorm,
+  paceBelowBaseline,
+  unknownKey,
+  badValue,
+  badConfig,
+  badDirective,
+];
+
+export const RULE_IDS: string[] = RULES.map((r) => r.id);
+
+export function ruleById(id: string): Rule | undefined {
+  return RULES.find((r) => r.id === id);
+}
+
+/** Problems in the order every output uses: by position, then rule id, then message. */
+export function compareProblems(a: Problem, b: Problem): number {
+  return (
+    a.line - b.line ||
+    a.character - b.character ||
+    (a.rule < b.rule ? -1 : a.rule > b.rule ? 1 : 0) ||
+    (a.message < b.message ? -1 : a.message > b.message ? 1 : 0)
+  );
+}
 
 /**
  * All problems of an analysed script: the core's own (syntax, settings, phones) and every rule's,
- * with severity overrides and ignore directives applied, sorted by position.
+ * with ignore directives and severity overrides applied, sorted by position.
  */
 export function lint(analysis: Analysis, text: string, settings: LintSettings = { severities: {} }): Problem[] {
   const problems: Problem[] = [];
   const lines = splitLines(text);
   for (const p of analysis.problems) problems.push(p);
   for (const rule of RULES) {
-    rule.check({ analysis, lines }, (p) =>
+    rule.check({ analysis, lines, text, settings }, (p) =>
       problems.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }),
     );
   }
+  const directives = readDirectives(analysis.script.comments, lines, RULE_IDS);
   const out: Problem[] = [];
-  for (const p of problems) {
+  for (const p of [...problems.filter((q) => !isAllowed(directives, q)), ...directives.problems]) {
+    if (p.fix === undefined) delete p.fix;
     const o = settings.severities[p.rule];
     if (o === 'off') continue;
     out.push(o ? { ...p, severity: o } : p);
   }
-  return out.sort((a, b) => a.line - b.line || a.character - b.character || a.rule.localeCompare(b.rule));
+  return out.sort(compareProblems);
 }

@@ -6,6 +6,10 @@ export interface RuleContext {
   analysis: Analysis;
   /** The script's lines, for rules that build fixes from the original text. */
   lines: string[];
+  /** The whole text (line breaks included), for fixes that must keep the file's line endings. */
+  text: string;
+  /** Lint settings in force (ladder metric and thresholds); severities are applied by lint(). */
+  settings: LintSettings;
 }
 
 export interface Report {
@@ -35,8 +39,24 @@ export interface Rule {
 /** Per-rule severity overrides ("off" silences a rule), from config files or editor settings. */
 export type SeverityOverrides = Record<string, Severity | 'off'>;
 
+/** What the ladder rules read per item: the composite difficulty (default) or one metric. */
+export type LadderMetric = 'difficulty' | 'words' | 'syllables' | 'phonemes' | 'wcm' | 'rarity';
+
+export const LADDER_METRICS: LadderMetric[] = ['difficulty', 'words', 'syllables', 'phonemes', 'wcm', 'rarity'];
+
+export interface LadderSettings {
+  /** The number the ladder rules compare between rungs; default `difficulty`. */
+  metric?: LadderMetric;
+  /**
+   * Largest step on that metric. For `difficulty` the script's `@max-step` is used; for another
+   * metric step-too-big only runs when this is set (difficulty points do not carry over).
+   */
+  maxStep?: number;
+}
+
 export interface LintSettings {
   severities: SeverityOverrides;
+  ladder?: LadderSettings;
 }
 
 export type { Problem };

@@ -177,6 +177,9 @@ function tryCompound(word: string, data: WordData): Analysis | undefined {
     const second = word.slice(cut);
     // Never split a digraph ("blacks" + "hire" is black-shire).
     if (second[0] === 'h' && /[cgpstw]$/.test(first)) continue;
+    // Both parts must be words people say (seen in SUBTLEX-US): the dictionary also lists
+    // fragments and rare names ("lep", "hege") that make false compounds.
+    if (data.count(first) === 0 || data.count(second) === 0) continue;
     const a = stem(first, data);
     if (a === undefined) continue;
     const b = stem(second, data);

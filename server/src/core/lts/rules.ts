@@ -154,6 +154,8 @@ export const AMENDMENTS: Readonly<Record<string, readonly string[]>> = {
     '[AE]=EH',
     // AY is a vowel digraph before any context rule can read the Y as a consonant (bayer, layer).
     '[AY]=EY',
+    // -ically keeps no syllable for its -al- (basically = B EY1 S IH0 K L IY0).
+    'IC[ALLY] =L IY',
   ],
   C: [
     // -ceous is one syllable (herbaceous, cretaceous).
@@ -166,10 +168,16 @@ export const AMENDMENTS: Readonly<Record<string, readonly string[]>> = {
   E: [
     // EAU(X) is one vowel (plateau, bureau, and many French names).
     '[EAUX]=OW', '[EAU]=OW',
+    // EY is a vowel digraph before any context rule can read the Y as a consonant (meyer).
+    ' [EYE]=AY', '[EY]=IY',
+    // An e between a consonant and final -man is silent (foreman, sideman, lindeman).
+    '#:^[E]MAN =',
   ],
   G: [
     // -geous is one syllable (gorgeous, courageous).
     '[GEOUS]=JH AX S',
+    // -geon after a vowel and consonants is JH + schwa (pigeon, dungeon, surgeon).
+    '#:[GEON]=JH AX N',
   ],
   I: [
     // After a double L, -ion is a glide and a schwa (million, billion, stallion).
@@ -181,6 +189,10 @@ export const AMENDMENTS: Readonly<Record<string, readonly string[]>> = {
     // OY is a vowel digraph before any context rule can read the Y as a consonant (boyer).
     '[OY]=OY',
   ],
+  U: [
+    // UI after consonants before T, CE or SE is one vowel (fruit, suit, juice, cruise).
+    ' :[UI]T=UW', ' :[UI]CE=UW S', ' :[UI]SE=UW Z',
+  ],
   M: [
     // The Gaelic name prefix Mc- is a syllable of its own, "mac" (mcbride = M AH0 K B R AY1 D).
     ' [MCG]=M AX G', ' [MC]=M AX K',
@@ -189,6 +201,10 @@ export const AMENDMENTS: Readonly<Record<string, readonly string[]>> = {
     // A consonant + -ler, -ling or -ley reads without a schwa before the l (butler, darling,
     // parsley); the report's L-suffix rule gives these an extra syllable.
     '#:^[L]ER=L', '#:^[L]ING=L', '#:^[L]EY=L',
+  ],
+  Y: [
+    // Y between a consonant and a vowel, after the first syllable, is the glide /j/ (canyon).
+    '#:^[Y]A=Y', '#:^[Y]O=Y',
   ],
   S: [
     // Final -ism and -asm end in a syllable of their own (racism = R EY1 S IH0 Z AH0 M).

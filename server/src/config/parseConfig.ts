@@ -1,0 +1,194 @@
+// Reads one config file (JSON or YAML; JSON is read by the YAML 1.2 parser, so it may carry
+// comments) or an editor-settings object into a layer the resolver merges. Pure: text in, data out.
+// Every problem has a position in the file, and whatever cannot be read is left out.
+import { dirname, isAbsolute, join } from 'node:path';
+import { isMap, isScalar, isSeq, LineCounter, parseDocument, type Node as YamlNode } from 'yaml';
+import { editDistance, KEYS, keySpec } from '../core/options';
+import type { Problem, Range, Setting } from '../core/types';
+import { RULE_IDS } from '../rules/index';
+import { LADDER_METRICS, type LadderMetric, type LadderSettings, type SeverityOverrides } from '../rules/types';
+
+/** Looked for in each folder, in this order; the first found is the folder's config. */
+export const CONFIG_FILE_NAMES = ['.rungs.json', '.rungs.yaml', '.rungs.yml'];
+
+/** Top-level keys that are not analysis settings. */
+const RESERVED = ['root', 'rules', 'ladder', 'lexicon'];
+/** Settings that only make sense inside one script. */
+const SCRIPT_ONLY = new Set(['title', 'say', 'set']);
+const SEVERITIES = ['error', 'warning', 'info', 'hint', 'off'];
+
+export interface ConfigLayer {
+  file: string;
+  /** False for editor settings, which have no file to watch. */
+  fromFile: boolean;
+  root: boolean;
+  settings: Setting[];
+  rules: SeverityOverrides;
+  ladder: LadderSettings;
+  lexicon: { name: string; path: string; range: Range }[];
+  problems: Problem[];
+}
+
+/** A key and value with where they were written (0-based); zero ranges for plain objects. */
+interface Entry {
+  key: string;
+  keyRange: Range;
+  value: unknown;
+  valueRange: Range;
+  children: Entry[] | null;
+}
+
+const NOWHERE: Range = { line: 0, character: 0, endLine: 0, endCharacter: 0 };
+
+function nearestOf(name: string, candidates: string[]): string | null {
+  let best: string | null = null;
+  let bestD = Infinity;
+  for (const c of candidates) {
+    const d = editDistance(name.toLowerCase(), c);
+    if (d < bestD) [best, bestD] = [c, d];
+  }
+  return best !== null && bestD <= Math.max(2, Math.floor(name.length / 3)) ? best : null;
+}
+
+function fromYaml(node: unknown, text: string, lc: LineCounter): Entry[] | null {
+  if (!isMap(node)) return null;
+  const at = (offset: number) => {
+    const p = lc.linePos(offset);
+    return { line: p.line - 1, character: p.col - 1 };
+  };
+  const range = (start: number, end: number): Range => {
+    const a = at(start);
+    const b = at(Math.max(start, end));
+    return { line: a.line, character: a.character, endLine: b.line, endCharacter: b.character };
+  };
+  return node.items.map((pair) => {
+    const k = pair.key as YamlNode | null;
+    const v = pair.value as YamlNode | null;
+    let [ks, ke] = k?.range ?? [0, 0];
+    if (/["']/.test(text[ks] ?? '') && ke - ks >= 2) [ks, ke] = [ks + 1, ke - 1];
+    const kr = range(ks, ke);
+    const vr = v?.range ? range(v.range[0], v.range[1]) : { ...kr, character: kr.endCharacter };
+    return {
+      key: String(isScalar(k) ? k.value : k ?? ''),
+      keyRange: kr,
+      value: v && typeof (v as { toJSON?: unknown }).toJSON === 'function' ? (v as { toJSON(): unknown }).toJSON() : v,
+      valueRange: vr,
+      children: fromYaml(v, text, lc),
+    };
+  });
+}
+
+function fromObject(value: unknown): Entry[] | null {
+  if (!value || typeof value !== 'object' || Array.isArray(value)) return null;
+  return Object.entries(value as Record<string, unknown>).map(([key, v]) => ({
+    key,
+    keyRange: NOWHERE,
+    value: v,
+    valueRange: NOWHERE,
+    children: fromObject(v),
+  }));
+}
+
+/** A config value as the text a script header would hold: `[1, 1.5]` -> "1, 1.5", yes/no for booleans. */
+function settingText(v: unknown): string | null {
+  if (typeof v === 'string') return v;
+  if (typeof v === 'number') return String(v);
+  if (typeof v === 'boolean') return v ? 'yes' : 'no';
+  if (Array.isArray(v) && v.every((x) => typeof x === 'string' || typeof x === 'number')) return v.join(', ');
+  if (v && typeof v === 'object') {
+    const parts = Object.entries(v as Record<string, unknown>);
+    if (parts.every(([, x]) => typeof x === 'number')) return parts.map(([k, x]) => `${k} ${x}`).join(', ');
+  }
+  return null;
+}
+
+export function parseConfigText(text: string, file: string): ConfigLayer {
+  const lc = new LineCounter();
+  const doc = parseDocument(text, { lineCounter: lc, uniqueKeys: true, prettyErrors: false });
+  const problems: Problem[] = doc.errors.map((e) => {
+    const p = e.linePos?.[0] ?? { line: 1, col: 1 };
+    const q = e.linePos?.[1] ?? { line: p.line, col: p.col + 1 };
+    const first = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
+    return { rule: 'bad-config', severity: 'error', message: `cannot read the config file: ${first}`, line: p.line - 1, character: p.col - 1, endLine: q.line - 1, endCharacter: q.col - 1 };
+  });
+  if (problems.length) return parseConfigObject({}, file, dirname(file), problems);
+  const contents = doc.contents;
+  if (contents === null || (isScalar(contents) && contents.value === null)) return parseConfigObject({}, file, dirname(file));
+  const entries = fromYaml(contents, text, lc);
+  if (!entries) {
+    return parseConfigObject({}, file, dirname(file), [
+      { rule: 'bad-config', severity: 'error', message: 'a config file holds an object of settings, e.g. {"max-step": 12}', line: 0, character: 0, endLine: 0, endCharacter: 1 },
+    ]);
+  }
+  return interpret(entries, file, dirname(file), true, []);
+}
+
+/** A layer from a plain object (editor settings); positions are line 1, column 1. */
+export function parseConfigObject(value: unknown, name: string, baseDir: string, problems: Problem[] = []): ConfigLayer {
+  return interpret(fromObject(value) ?? [], name, baseDir, false, problems);
+}
+
+function interpret(entries: Entry[], file: string, baseDir: string, fromFile: boolean, problems: Problem[]): ConfigLayer {
+  const layer: ConfigLayer = { file, fromFile, root: false, settings: [], rules: {}, ladder: {}, lexicon: [], problems };
+  const bad = (r: Range, message: string, rule = 'bad-config', fix?: Problem['fix']) =>
+    problems.push({ ...r, rule, severity: 'error', message, ...(fix ? { fix } : {}) });
+  for (const e of entries) {
+    const key = e.key.toLowerCase();
+    if (key === 'root') {
+      if (typeof e.value !== 'boolean') bad(e.valueRange, `"root" takes true or false, not ${JSON.stringify(e.value)}`);
+      else layer.root = e.value;
+    } else if (key === 'rules') {
+      if (!e.children) bad(e.valueRange, '"rules" maps rule ids to error, warning, info, hint or off');
+      for (const r of e.children ?? []) {
+        const id = r.key.toLowerCase();
+        if (!RULE_IDS.includes(id)) {
+          const near = nearestOf(id, RULE_IDS);
+          bad(r.keyRange, `unknown rule "${r.key}"${near ? `; did you mean "${near}"?` : ''}`, 'bad-config', near && fromFile ? { title: `Change "${r.key}" to "${near}"`, edits: [{ ...r.keyRange, newText: near }] } : undefined);
+        } else if (typeof r.value !== 'string' || !SEVERITIES.includes(r.value.toLowerCase())) {
+          bad(r.valueRange, `the severity of "${id}" is one of ${SEVERITIES.join(', ')}, not ${JSON.stringify(r.value)}`);
+        } else layer.rules[id] = r.value.toLowerCase() as SeverityOverrides[string];
+      }
+    } else if (key === 'ladder') {
+      if (!e.children) bad(e.valueRange, '"ladder" is an object: {"metric": "syllables", "maxStep": 3}');
+      for (const l of e.children ?? []) {
+        if (l.key === 'metric' && LADDER_METRICS.includes(l.value as LadderMetric)) layer.ladder.metric = l.value as LadderMetric;
+        else if (l.key === 'metric') bad(l.valueRange, `ladder metric is one of ${LADDER_METRICS.join(', ')}, not ${JSON.stringify(l.value)}`);
+        else if (l.key === 'maxStep' && typeof l.value === 'number' && l.value > 0) layer.ladder.maxStep = l.value;
+        else if (l.key === 'maxStep') bad(l.valueRange, `ladder maxStep is a number above 0, not ${JSON.stringify(l.value)}`);
+        else bad(l.keyRange, `unknown ladder key "${l.key}": use metric or maxStep`);
+      }
+    } else if (key === 'lexicon') {
+      const list = typeof e.value === 'string' ? [e.value] : e.value;
+      if (!Array.isArray(list) || !list.every((x) => typeof x === 'string')) {
+        bad(e.valueRange, '"lexicon" is a file name or a list of file names, relative to the config file');
+        continue;
+      }
+      for (const name of list as string[]) layer.lexicon.push({ name, path: isAbsolute(name) ? name : join(baseDir, name), range: e.valueRange });
+    } else if (keySpec(key)) {
+      const spec = keySpec(key)!;
+      if (SCRIPT_ONLY.has(spec.key)) {
+        bad(e.keyRange, `"${e.key}" belongs in a script, not in a config file${spec.key === 'say' ? ' (put pronunciations in a lexicon file)' : ''}`, 'bad-value');
+        continue;
+      }
+      const value = settingText(e.value);
+      if (value === null) {
+        bad(e.valueRange, `cannot read the value of "${e.key}": write it as in a script, e.g. "${spec.example}"`, 'bad-value');
+        continue;
+      }
+      const vr = e.valueRange;
+      layer.settings.push({
+        key,
+        value,
+        line: e.keyRange.line,
+        keyStart: e.keyRange.character,
+        keyEnd: e.keyRange.endCharacter,
+        valueStart: vr.line === e.keyRange.line ? vr.character : e.keyRange.endCharacter,
+        valueEnd: vr.line === e.keyRange.line && vr.endLine === vr.line ? vr.endCharacter : e.keyRange.endCharacter,
+      });
+    } else {
+      const near = nearestOf(key, [...RESERVED, ...KEYS.filter((k) => !SCRIPT_ONLY.has(k.key)).map((k) => k.key)]);
+      bad(e.keyRange, `unknown key "${e.key}"${near ? `; did you mean "${near}"?` : ''}`, 'unknown-key', near && fromFile ? { title: `Change "${e.key}" to "${near}"`, edits: [{ ...e.keyRange, newText: near }] } : undefined);
+    }
+  }
+  return layer;
+}

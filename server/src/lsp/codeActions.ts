@@ -1,0 +1,127 @@
+// Code actions: every mechanical fix the core and the rules attach to problems (as quick fixes,
+// plus one "fix all" source action), "add pronunciation override" and "use listed pronunciation
+// N" on a word, and "sort rung by difficulty" anywhere in a rung.
+import {
+  CodeActionKind,
+  type CodeAction,
+  type CodeActionParams,
+  type Diagnostic,
+  type WorkspaceEdit,
+} from 'vscode-languageserver/node';
+import type { Problem, TextEdit, WordAnalysis } from '../core/types';
+import { fromLspRange, rangesTouch, toLspDiagnostic, toLspTextEdit } from './convert';
+import type { Snapshot } from './documents';
+import { eolOf, sortRung } from './sortRung';
+
+export const FIX_ALL_KIND = `${CodeActionKind.SourceFixAll}.rungs`;
+
+function edit(s: Snapshot, edits: TextEdit[]): WorkspaceEdit {
+  return { changes: { [s.uri]: edits.map(toLspTextEdit) } };
+}
+
+function sameDiagnostic(d: Diagnostic, p: Problem): boolean {
+  return (
+    d.code === p.rule &&
+    d.range.start.line === p.line &&
+    d.range.start.character === p.character &&
+    d.range.end.line === p.endLine &&
+    d.range.end.character === p.endCharacter
+  );
+}
+
+/** Non-overlapping fixes in document order (a later fix overlapping an earlier one waits). */
+export function compatibleFixes(problems: Problem[]): TextEdit[] {
+  const chosen: TextEdit[] = [];
+  for (const p of problems) {
+    if (!p.fix) continue;
+    if (p.fix.edits.some((e) => chosen.some((c) => rangesTouch(c, e)))) continue;
+    chosen.push(...p.fix.edits);
+  }
+  return chosen;
+}
+
+/** Where a new `@say` line goes: after the last header setting or override, else after leading comments. */
+function overrideInsertLine(s: Snapshot): number {
+  const firstRung = s.analysis.rungs.find((r) => !r.node.implicit)?.node.line ?? Infinity;
+  const firstItem = s.analysis.items[0]?.node.line ?? Infinity;
+  const limit = Math.min(firstRung, firstItem);
+  let after = -1;
+  for (const st of s.analysis.script.header) if (st.line < limit) after = Math.max(after, st.line);
+  for (const o of s.analysis.script.overrides) if (o.line < limit) after = Math.max(after, o.line);
+  if (after >= 0) return after + 1;
+  let line = 0;
+  while (line < s.lines.length && line < limit && s.lines[line].trimStart().startsWith('//')) line++;
+  return line;
+}
+
+function wordActions(s: Snapshot, w: WordAnalysis, line: number): CodeAction[] {
+  const actions: CodeAction[] = [];
+  const scriptOverride = s.analysis.script.overrides.find((o) => o.word === w.spoken);
+  if (!scriptOverride && w.phones.length) {
+    const at = overrideInsertLine(s);
+    const eol = eolOf(s.text);
+    const estimated = w.source === 'estimate' || w.source === 'morphology';
+    actions.push({
+      title: `Add pronunciation override for "${w.spoken}" (@say ${w.spoken} = ${w.phones.join(' ')})`,
+      kind: estimated ? CodeActionKind.QuickFix : CodeActionKind.RefactorRewrite,
+      edit: edit(s, [{ line: at, character: 0, endLine: at, endCharacter: 0, newText: `@say ${w.spoken} = ${w.phones.join(' ')}${eol}` }]),
+    });
+  }
+  if (w.variants.length > 1) {
+    const token = s.lines[line].slice(w.start, w.end);
+    const mark = /\(\d+\)$/.exec(token);
+    w.variants.forEach((v, i) => {
+      const n = i + 1;
+      if (w.source === 'dictionary' && n === w.variant) return;
+      const e: TextEdit = mark
+        ? { line, character: w.end - mark[0].length, endLine: line, endCharacter: w.end, newText: `(${n})` }
+        : { line, character: w.end, endLine: line, endCharacter: w.end, newText: `(${n})` };
+      actions.push({
+        title: `Use listed pronunciation ${n} of "${w.spoken}": ${v.join(' ')}`,
+        kind: CodeActionKind.RefactorRewrite,
+        edit: edit(s, [e]),
+      });
+    });
+  }
+  return actions;
+}
+
+export function codeActions(s: Snapshot, params: CodeActionParams): CodeAction[] {
+  const range = fromLspRange(params.range);
+  const only = params.context.only;
+  const wants = (kind: string) => !only || only.some((k) => kind === k || kind.startsWith(`${k}.`));
+  const actions: CodeAction[] = [];
+
+  if (wants(CodeActionKind.QuickFix)) {
+    for (const p of s.problems) {
+      if (!p.fix || !rangesTouch(p, range)) continue;
+      const diagnostic = params.context.diagnostics.find((d) => sameDiagnostic(d, p)) ?? toLspDiagnostic(p, s.uri);
+      actions.push({
+        title: p.fix.title,
+        kind: CodeActionKind.QuickFix,
+        diagnostics: [diagnostic],
+        isPreferred: true,
+        edit: edit(s, p.fix.edits),
+      });
+    }
+  }
+
+  const line = range.line;
+  const item = s.itemAt(line);
+  if (item && (wants(CodeActionKind.QuickFix) || wants(CodeActionKind.RefactorRewrite))) {
+    const w = item.words.find((x) => range.character >= x.start && range.character <= x.end);
+    if (w) actions.push(...wordActions(s, w, line).filter((a) => wants(a.kind!)));
+  }
+
+  const rung = s.rungContaining(line);
+  if (rung && wants(CodeActionKind.RefactorRewrite)) {
+    const e = sortRung(s, rung);
+    if (e) actions.push({ title: `Sort rung "${rung.node.name}" by difficulty`, kind: CodeActionKind.RefactorRewrite, edit: edit(s, [e]) });
+  }
+
+  if (only?.some((k) => FIX_ALL_KIND.startsWith(k) && k.startsWith(CodeActionKind.Source))) {
+    const edits = compatibleFixes(s.problems);
+    if (edits.length) actions.push({ title: 'Fix all auto-fixable Rungs problems', kind: FIX_ALL_KIND, edit: edit(s, edits) });
+  }
+  return actions;
+}

@@ -1,0 +1,218 @@
+// Open scripts and their analyses. Each document keeps its last analysis, its Pronouncer and its
+// item cache, so a request always gets the analysis of the text it was sent against (analysed
+// synchronously when the text or the settings moved on) and an edit re-scores only what changed.
+import { readFileSync, statSync } from 'node:fs';
+import { dirname, join, sep } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { TextDocument } from 'vscode-languageserver-textdocument';
+import type { AnalyzeOutput } from '../core/analyze';
+import { splitLines } from '../core/parse';
+import type { ItemAnalysis, Problem, RungAnalysis, WordData } from '../core/types';
+import { clearConfigCache, resolveScriptContext, type ConfigFs } from '../config/resolve';
+import { lint } from '../rules/index';
+import { analyzeIncremental, type ItemCache } from './incremental';
+import { DEFAULT_SETTINGS, toConfigObject, type RungsSettings } from './settings';
+
+export interface Snapshot {
+  uri: string;
+  version: number;
+  text: string;
+  lines: string[];
+  analysis: AnalyzeOutput;
+  /** Every problem: the core's and every rule's, severities applied. */
+  problems: Problem[];
+  settings: RungsSettings;
+  /** Milliseconds the analysis and lint took (for the log and the report). */
+  ms: number;
+  itemAt(line: number): ItemAnalysis | undefined;
+  /** The rung whose header (or, for the implicit rung, first item) is on this line. */
+  rungAtHeader(line: number): RungAnalysis | undefined;
+  /** The rung a line belongs to (header through its last line). */
+  rungContaining(line: number): RungAnalysis | undefined;
+}
+
+interface DocState {
+  snapshot?: Snapshot;
+  settingsGeneration: number;
+  cache?: ItemCache;
+  reuse?: AnalyzeOutput['pronouncer'];
+}
+
+export const nodeConfigFs: ConfigFs = {
+  readFile: (p) => readFileSync(p, 'utf8'),
+  exists: (p) => {
+    try {
+      statSync(p);
+      return true;
+    } catch {
+      return false;
+    }
+  },
+};
+
+export function uriToPath(uri: string): string | null {
+  if (!uri.startsWith('file:')) return null;
+  try {
+    return fileURLToPath(uri);
+  } catch {
+    return null;
+  }
+}
+
+function makeSnapshot(
+  uri: string,
+  version: number,
+  text: string,
+  analysis: AnalyzeOutput,
+  problems: Problem[],
+  settings: RungsSettings,
+  ms: number,
+): Snapshot {
+  let byLine: Map<number, ItemAnalysis> | undefined;
+  let headers: Map<number, RungAnalysis> | undefined;
+  return {
+    uri,
+    version,
+    text,
+    lines: splitLines(text),
+    analysis,
+    problems,
+    settings,
+    ms,
+    itemAt(line) {
+      byLine ??= new Map(analysis.items.map((it) => [it.node.line, it]));
+      return byLine.get(line);
+    },
+    rungAtHeader(line) {
+      headers ??= new Map(analysis.rungs.map((r) => [r.node.line, r]));
+      return headers.get(line);
+    },
+    rungContaining(line) {
+      // A rung runs from its header to the line before the next header.
+      let found: RungAnalysis | undefined;
+      for (const r of analysis.rungs) if (r.node.line <= line) found = r;
+      return found;
+    },
+  };
+}
+
+export interface StoreHooks {
+  log(message: string): void;
+  error(message: string): void;
+  /** Called after every fresh analysis (not when a cached one is returned). */
+  analyzed(s: Snapshot): void;
+}
+
+export class AnalysisStore {
+  private readonly states = new Map<string, DocState>();
+  private readonly settings = new Map<string, RungsSettings>();
+  private readonly logged = new Set<string>();
+  private generation = 0;
+  workspaceFolders: string[] = [];
+
+  constructor(
+    private readonly data: WordData,
+    private readonly hooks: StoreHooks,
+  ) {}
+
+  /** Settings used for a document (defaults until the client's answer arrives). */
+  settingsFor(uri: string): RungsSettings {
+    return this.settings.get(uri) ?? DEFAULT_SETTINGS;
+  }
+
+  /** Records settings for a document; returns true when they differ from those in use. */
+  setSettings(uri: string, s: RungsSettings): boolean {
+    const before = this.settings.get(uri);
+    this.settings.set(uri, s);
+    if (before && JSON.stringify(before) === JSON.stringify(s)) return false;
+    this.generation++;
+    return true;
+  }
+
+  /** Forgets cached settings, config and lexicon files (configuration or watched files changed). */
+  invalidate(): void {
+    this.settings.clear();
+    this.logged.clear();
+    clearConfigCache();
+    this.generation++;
+  }
+
+  close(uri: string): void {
+    this.states.delete(uri);
+    this.settings.delete(uri);
+  }
+
+  /** The analysis of exactly this document version, computed now if needed. Never throws. */
+  get(doc: TextDocument): Snapshot {
+    let state = this.states.get(doc.uri);
+    if (!state) {
+      state = { settingsGeneration: -1 };
+      this.states.set(doc.uri, state);
+    }
+    const s = state.snapshot;
+    if (s && s.version === doc.version && state.settingsGeneration === this.generation) return s;
+    const fresh = this.analyse(doc, state);
+    state.snapshot = fresh;
+    state.settingsGeneration = this.generation;
+    this.hooks.analyzed(fresh);
+    return fresh;
+  }
+
+  private analyse(doc: TextDocument, state: DocState): Snapshot {
+    const t0 = performance.now();
+    const text = doc.getText();
+    const settings = this.settingsFor(doc.uri);
+    try {
+      const path = uriToPath(doc.uri);
+      // Editor settings are the resolver's lowest layer above the defaults; workspace config
+      // files and the script header win over them, as in `rungs lint`.
+      const baseDir = this.folderOf(path);
+      const ctx = resolveScriptContext(path ?? join(baseDir, 'untitled.rungs'), nodeConfigFs, {
+        editor: { settings: toConfigObject(settings), baseDir, name: 'editor settings (rungs.*)' },
+      });
+      const { output, cache } = analyzeIncremental(
+        { text, data: this.data, options: ctx.options, lexicon: ctx.lexicon, reuse: state.reuse },
+        state.cache,
+      );
+      state.cache = cache;
+      state.reuse = output.pronouncer;
+      const problems = lint(output, text, ctx.lint);
+      this.logConfigProblems(ctx.problems.map((c) => `${c.file}:${c.problem.line + 1}: ${c.problem.message}`));
+      return makeSnapshot(doc.uri, doc.version, text, output, problems, settings, performance.now() - t0);
+    } catch (err) {
+      // A bad document (or a bug) becomes a diagnostic, never a crash of the server.
+      this.hooks.error(`analysis of ${doc.uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
+      state.cache = undefined;
+      state.reuse = undefined;
+      const empty = analyzeIncremental({ text: '', data: this.data }, undefined).output;
+      const problem: Problem = {
+        rule: 'internal-error',
+        severity: 'error',
+        message: `Rungs could not analyse this script (${err instanceof Error ? err.message : String(err)}); see the Rungs output for details`,
+        line: 0,
+        character: 0,
+        endLine: 0,
+        endCharacter: 0,
+      };
+      return makeSnapshot(doc.uri, doc.version, text, empty, [problem], settings, performance.now() - t0);
+    }
+  }
+
+  /** Config and lexicon problems are logged once each, not on every keystroke. */
+  private logConfigProblems(messages: string[]): void {
+    for (const m of messages) {
+      if (this.logged.has(m)) continue;
+      this.logged.add(m);
+      this.hooks.log(m);
+    }
+  }
+
+  /** The workspace folder holding a script (editor lexicon paths are relative to it). */
+  folderOf(scriptPath: string | null): string {
+    return (
+      (scriptPath && this.workspaceFolders.find((f) => scriptPath.startsWith(f.endsWith(sep) ? f : f + sep))) ??
+      this.workspaceFolders[0] ??
+      (scriptPath ? dirname(scriptPath) : process.cwd())
+    );
+  }
+}

@@ -1,0 +1,23 @@
+// Number formatting shared by hovers, hints and lenses, so every view shows the same digits.
+import { formatNumber } from '../core/pace';
+
+/** Seconds: "2 s", "1.33 s". */
+export const secs = (n: number): string => `${formatNumber(n, 2)} s`;
+/** Difficulty, one decimal as the score table shows it. */
+export const diff = (n: number): string => formatNumber(n, 1);
+/** Zipf and Lg10WF, two decimals always ("5.28"). */
+export const two = (n: number): string => n.toFixed(2);
+export const rate = (n: number): string => formatNumber(n, 2);
+/** Signed difference: "+12.3", "-4". */
+export const signed = (n: number): string => `${n >= 0 ? '+' : ''}${formatNumber(n, 1)}`;
+/** Minutes and seconds for long totals: "95 s (1 min 35 s)". */
+export function total(n: number): string {
+  if (n < 60) return secs(n);
+  const m = Math.floor(n / 60);
+  const s = Math.round(n - m * 60);
+  return `${secs(n)} (${m} min ${s} s)`;
+}
+/** Escapes text for a Markdown table cell or inline use. */
+export function md(text: string): string {
+  return text.replace(/([\\`*_{}[\]<>|#])/g, '\\$1');
+}

@@ -1,0 +1,185 @@
+// Hovers: a word (pronunciation, WCM breakdown, frequency, source, other listed pronunciations),
+// an item (counts, difficulty and rank, durations at every pace), a rung header (summary and the
+// step from the rung before) and a setting key (what it does). Compact Markdown throughout.
+import { MarkupKind, type Hover } from 'vscode-languageserver/node';
+import { keySpec } from '../core/options';
+import { toIpa } from '../core/phones';
+import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
+import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
+import { WCM_PARAMETER_NAMES } from '../core/wcm';
+import type { Snapshot } from './documents';
+import { diff, md, rate, secs, signed, total, two } from './format';
+
+const markdown = (value: string, line: number, start: number, end: number): Hover => ({
+  contents: { kind: MarkupKind.Markdown, value },
+  range: { start: { line, character: start }, end: { line, character: end } },
+});
+
+/** The written variant mark of a token ("record(2)" -> 2). */
+function writtenVariant(surface: string): number | null {
+  const m = /\((\d+)\)$/.exec(surface);
+  return m ? Number(m[1]) : null;
+}
+
+function wcmBreakdown(parts: WcmParts): string {
+  const rows = (Object.keys(WCM_PARAMETER_NAMES) as (keyof WcmParts)[])
+    .filter((k) => parts[k] > 0)
+    .map((k) => `| ${WCM_PARAMETER_NAMES[k]} | ${parts[k]} |`);
+  if (!rows.length) return 'No WCM points (all eight parameters 0).';
+  return ['| WCM parameter | points |', '|---|---:|', ...rows].join('\n');
+}
+
+function sourceText(s: Snapshot, w: WordAnalysis, how: string): string {
+  if (w.source === 'dictionary') return how;
+  if (w.source === 'override') return how;
+  return `estimate (${how}): check it, or add a pronunciation override`;
+}
+
+export function wordHoverText(s: Snapshot, w: WordAnalysis, variantMark: number | null): string {
+  const score = s.analysis.pronouncer.pronouncer.score(w.spoken, variantMark);
+  const lines: string[] = [];
+  lines.push(`**${md(w.spoken)}** · ${sourceText(s, w, score.how)}`);
+  lines.push('');
+  lines.push(`\`${w.phones.join(' ')}\` · /${toIpa(w.phones)}/`);
+  lines.push('');
+  lines.push('| syllables | phonemes | WCM | Zipf | Lg10WF | SUBTLEX count |');
+  lines.push('|---:|---:|---:|---:|---:|---:|');
+  lines.push(`| ${w.syllables} | ${w.phonemes} | ${w.wcm.total} | ${two(w.zipf)} | ${two(w.lg10wf)} | ${w.count} |`);
+  lines.push('');
+  lines.push(wcmBreakdown(w.wcm.parts));
+  if (w.zipf < LOW_FREQUENCY_ZIPF) {
+    lines.push('');
+    lines.push(w.count === 0 ? 'Not seen in SUBTLEX-US (lowest Zipf).' : `Low frequency (Zipf below ${LOW_FREQUENCY_ZIPF}).`);
+  }
+  if (w.variants.length > 1 || (w.variants.length === 1 && w.source !== 'dictionary')) {
+    lines.push('');
+    lines.push('Listed pronunciations (CMU):');
+    for (const { v, n } of w.variants.map((v, i) => ({ v, n: i + 1 }))) {
+      const used = w.source === 'dictionary' && n === w.variant;
+      lines.push(`${n}. \`${v.join(' ')}\` /${toIpa(v)}/${used ? ' (used)' : ` — write \`${md(w.spoken)}(${n})\``}`);
+    }
+  }
+  return lines.join('\n');
+}
+
+function paceTable(s: Snapshot, item: ItemAnalysis): string {
+  const withBaseline = s.analysis.options.baseline !== null;
+  const head = withBaseline
+    ? ['| pace | duration | words/s | syllables/s | × baseline |', '|---|---:|---:|---:|---:|']
+    : ['| pace | duration | words/s | syllables/s |', '|---|---:|---:|---:|'];
+  const rows = item.timings.map((t) => {
+    const cells = [t.pace.label + (t.aboveReadingNorm ? ' ⚠' : ''), secs(t.seconds), rate(t.wordRate), rate(t.syllableRate)];
+    if (withBaseline) cells.push(t.baselineRatio === null ? '–' : rate(t.baselineRatio));
+    return `| ${cells.join(' | ')} |`;
+  });
+  return [...head, ...rows].join('\n');
+}
+
+export function itemHoverText(s: Snapshot, item: ItemAnalysis): string {
+  const rung = s.analysis.rungs[item.rung];
+  const o = s.analysis.options;
+  const lines: string[] = [];
+  lines.push(
+    `**Item** in rung "${md(rung.node.name)}" · difficulty **${diff(item.difficulty)}**, rank ${item.rank} of ${rung.items.length} (1 = easiest)`,
+  );
+  lines.push('');
+  lines.push('| words | syllables | phonemes | WCM | Zipf mean | Zipf min |');
+  lines.push('|---:|---:|---:|---:|---:|---:|');
+  lines.push(
+    `| ${item.wordCount} | ${item.syllables} | ${item.phonemes} | ${item.wcm} | ${two(item.zipfMean)} | ${two(item.zipfMin)} |`,
+  );
+  lines.push('');
+  lines.push(paceTable(s, item));
+  lines.push('');
+  const c = item.components;
+  const notes = [
+    `length ${two(c.length)} · complexity ${two(c.complexity)} · rarity ${two(c.rarity)} (weights ${o.weights.length}/${o.weights.complexity}/${o.weights.rarity})`,
+  ];
+  if (item.lowFrequencyWords) notes.push(`${item.lowFrequencyWords} low-frequency word${item.lowFrequencyWords === 1 ? '' : 's'}`);
+  const est = item.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => w.spoken);
+  if (est.length) notes.push(`estimated: ${est.map(md).join(', ')}`);
+  if (item.timings.some((t) => t.aboveReadingNorm)) notes.push(`⚠ faster than adult reading aloud (${rate(o.readingNormWps)} words/s)`);
+  lines.push(notes.join('; '));
+  return lines.join('\n');
+}
+
+/** The rung before `rung` that has items (ladder steps skip empty rungs). */
+export function previousRung(s: Snapshot, rung: RungAnalysis): RungAnalysis | undefined {
+  for (let i = rung.index - 1; i >= 0; i--) if (s.analysis.rungs[i].items.length) return s.analysis.rungs[i];
+  return undefined;
+}
+
+export function rungHoverText(s: Snapshot, rung: RungAnalysis): string {
+  const o = s.analysis.options;
+  const n = rung.items.length;
+  const lines: string[] = [];
+  lines.push(`**Rung ${rung.index + 1} "${md(rung.node.name)}"** · ${n} item${n === 1 ? '' : 's'}`);
+  lines.push('');
+  if (n) lines.push(`Difficulty ${diff(rung.min)}–${diff(rung.max)}, median **${diff(rung.median)}**`);
+  const prev = previousRung(s, rung);
+  if (prev && n) {
+    const delta = rung.median - prev.median;
+    lines.push('');
+    lines.push(
+      `Step from rung ${prev.index + 1} "${md(prev.node.name)}" (median ${diff(prev.median)}): **${signed(delta)}** (largest allowed ${diff(o.maxStep)}, ${o.direction})`,
+    );
+  }
+  lines.push('');
+  lines.push('| pace | total time |');
+  lines.push('|---|---:|');
+  rung.paces.forEach((p, i) => lines.push(`| ${p.label} | ${total(rung.totalSeconds[i])} |`));
+  lines.push('');
+  lines.push('Totals leave out pauses between items.');
+  return lines.join('\n');
+}
+
+function settingHoverText(setting: Setting): string | null {
+  const spec = keySpec(setting.key);
+  if (!spec) return null;
+  const aliases = spec.aliases.length ? ` (also ${spec.aliases.map((a) => `@${a}`).join(', ')})` : '';
+  const where = spec.scope === 'script' ? 'script header' : spec.scope === 'rung' ? 'rung' : 'script header or a rung';
+  return `**@${spec.key}**${aliases} — ${spec.summary}\n\nExample: \`@${spec.key} ${spec.example}\` · applies in the ${where}`;
+}
+
+export function hover(s: Snapshot, line: number, character: number): Hover | null {
+  const item = s.itemAt(line);
+  if (item) {
+    const hit = item.words.filter((w) => character >= w.start && character <= w.end);
+    if (hit.length && character < item.node.textEnd + 1) {
+      const t = hit[0];
+      const text = hit.map((w) => wordHoverText(s, w, writtenVariant(w.surface))).join('\n\n---\n\n');
+      return markdown(text, line, t.start, t.end);
+    }
+    return markdown(itemHoverText(s, item), line, item.node.textStart, item.node.textEnd);
+  }
+  const settings = [...s.analysis.script.header, ...s.analysis.rungs.flatMap((r) => r.node.settings)];
+  const setting = settings.find((x) => x.line === line && character >= x.keyStart && character <= x.keyEnd);
+  if (setting) {
+    const text = settingHoverText(setting);
+    if (text) return markdown(text, line, setting.keyStart, setting.keyEnd);
+  }
+  const override = s.analysis.script.overrides.find(
+    (o) => o.line === line && character >= o.character && character <= o.character + o.word.length,
+  );
+  if (override) {
+    const score = s.analysis.pronouncer.pronouncer.score(override.word, null);
+    const w: WordAnalysis = {
+      surface: override.word,
+      start: override.character,
+      end: override.character + override.word.length,
+      spoken: override.word,
+      ...score,
+    };
+    return markdown(wordHoverText(s, w, null), line, w.start, w.end);
+  }
+  const rung = s.rungAtHeader(line);
+  if (rung && !rung.node.implicit) {
+    return markdown(rungHoverText(s, rung), line, 0, s.lines[line]?.length ?? 0);
+  }
+  const keyLine = settings.find((x) => x.line === line);
+  if (keyLine && !s.rungAtHeader(line)) {
+    const text = settingHoverText(keyLine);
+    if (text) return markdown(text, line, keyLine.keyStart, keyLine.valueEnd);
+  }
+  return null;
+}

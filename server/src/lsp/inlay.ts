@@ -1,0 +1,30 @@
+// Inlay hints at the end of item lines: projected duration at the rung's first pace and the
+// composite difficulty. Off with `rungs.inlayHints.enabled: false`.
+import { InlayHintKind, MarkupKind, type InlayHint, type Range } from 'vscode-languageserver/node';
+import type { Snapshot } from './documents';
+import { diff, secs } from './format';
+
+export function inlayHints(s: Snapshot, range: Range): InlayHint[] {
+  if (!s.settings.inlayHints.enabled) return [];
+  const hints: InlayHint[] = [];
+  for (const rung of s.analysis.rungs) {
+    const pace = rung.paces[0];
+    for (const item of rung.items) {
+      const line = item.node.line;
+      if (line < range.start.line || line > range.end.line) continue;
+      const t = item.timings[0];
+      const raw = s.lines[line] ?? '';
+      hints.push({
+        position: { line, character: raw.trimEnd().length },
+        label: `${secs(t.seconds)} @ ${pace.label} · D ${diff(item.difficulty)}`,
+        kind: InlayHintKind.Type,
+        paddingLeft: true,
+        tooltip: {
+          kind: MarkupKind.Markdown,
+          value: `Projected ${secs(t.seconds)} at ${pace.label} (no pauses); difficulty ${diff(item.difficulty)}, rank ${item.rank} of ${rung.items.length} in "${rung.node.name}".`,
+        },
+      });
+    }
+  }
+  return hints;
+}

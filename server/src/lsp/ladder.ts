@@ -1,0 +1,116 @@
+// The custom requests the VS Code client's ladder view and status bar use. Names and shapes are
+// a contract with client/ (keep them): `rungs/ladder`, `rungs/itemAt`, and the notification
+// `rungs/didAnalyze` sent after every analysis.
+import { NotificationType, RequestType } from 'vscode-languageserver/node';
+import type { Direction, Severity } from '../core/types';
+import { RULES } from '../rules/index';
+import type { Snapshot } from './documents';
+
+export interface LadderItem {
+  line: number;
+  text: string;
+  difficulty: number;
+  rank: number;
+}
+
+export interface LadderRung {
+  name: string;
+  /** 0-based line of the header (of the first item for the implicit rung). */
+  line: number;
+  median: number;
+  min: number;
+  max: number;
+  paces: string[];
+  items: LadderItem[];
+}
+
+export interface LadderStep {
+  /** Rung indices into `rungs`. */
+  from: number;
+  to: number;
+  /** Median of `to` minus median of `from`, difficulty points. */
+  delta: number;
+  /** Id of the ladder rule that reports this step, or null. */
+  problem: string | null;
+}
+
+export interface Ladder {
+  title: string | null;
+  direction: Direction;
+  maxStep: number;
+  rungs: LadderRung[];
+  steps: LadderStep[];
+  problems: { rule: string; severity: Severity; line: number; message: string }[];
+}
+
+export interface ItemAtResult {
+  line: number;
+  difficulty: number;
+  rank: number;
+  rungName: string;
+  /** The rung's first pace, e.g. "1 wps". */
+  pace: string;
+  /** Projected seconds at that pace. */
+  seconds: number;
+}
+
+export const LadderRequest = new RequestType<{ uri: string }, Ladder | null, void>('rungs/ladder');
+export const ItemAtRequest = new RequestType<{ uri: string; line: number }, ItemAtResult | null, void>('rungs/itemAt');
+export const DidAnalyzeNotification = new NotificationType<{ uri: string; version: number }>('rungs/didAnalyze');
+
+const round1 = (n: number) => Math.round(n * 10) / 10;
+
+export function ladder(s: Snapshot): Ladder {
+  const a = s.analysis;
+  const ladderRules = new Set(RULES.filter((r) => r.category === 'ladder').map((r) => r.id));
+  const title = a.script.header.find((h) => h.key === 'title')?.value.trim() || null;
+  const rungs = a.rungs.map((r) => ({
+    name: r.node.name,
+    line: r.node.line,
+    median: r.median,
+    min: r.min,
+    max: r.max,
+    paces: r.paces.map((p) => p.label),
+    items: r.items.map((it) => ({ line: it.node.line, text: it.node.text, difficulty: it.difficulty, rank: it.rank })),
+  }));
+  const steps: LadderStep[] = [];
+  const withItems = a.rungs.filter((r) => r.items.length > 0);
+  for (let i = 1; i < withItems.length; i++) {
+    const from = withItems[i - 1];
+    const to = withItems[i];
+    // A ladder problem about this step sits on the later rung (its header or within it), or
+    // points at the earlier rung through its related information.
+    const end = a.rungs[to.index + 1]?.node.line ?? Infinity;
+    const p = s.problems.find(
+      (x) =>
+        ladderRules.has(x.rule) &&
+        x.line >= to.node.line &&
+        x.line < end &&
+        (x.line === to.node.line || x.related?.some((r) => r.line === from.node.line)),
+    );
+    steps.push({ from: from.index, to: to.index, delta: round1(to.median - from.median), problem: p?.rule ?? null });
+  }
+  return {
+    title,
+    direction: a.options.direction,
+    maxStep: a.options.maxStep,
+    rungs,
+    steps,
+    problems: s.problems.map((p) => ({ rule: p.rule, severity: p.severity, line: p.line, message: p.message })),
+  };
+}
+
+export function itemAt(s: Snapshot, line: number): ItemAtResult | null {
+  const item = s.itemAt(line);
+  if (!item) return null;
+  const rung = s.analysis.rungs[item.rung];
+  const t = item.timings[0];
+  return {
+    line,
+    difficulty: item.difficulty,
+    rank: item.rank,
+    rungName: rung.node.name,
+    pace: t?.pace.label ?? '',
+    seconds: t?.seconds ?? 0,
+  };
+}

@@ -1,0 +1,290 @@
+// The language server: wires the features to the protocol. Every handler is guarded, so an
+// exception becomes a logged error and an empty answer; the server logs only through the
+// client's console (window/logMessage), never to stdout, which carries the protocol.
+import {
+  CancellationToken,
+  CodeActionKind,
+  createConnection,
+  DidChangeWatchedFilesNotification,
+  LSPErrorCodes,
+  ProposedFeatures,
+  ResponseError,
+  StreamMessageReader,
+  StreamMessageWriter,
+  TextDocumentSyncKind,
+  TextDocuments,
+  type ClientCapabilities,
+  type Connection,
+  type InitializeResult,
+} from 'vscode-languageserver/node';
+import { TextDocument } from 'vscode-languageserver-textdocument';
+import { CONFIG_FILE_NAMES } from '../config/resolve';
+import type { WordData } from '../core/types';
+import { loadWordTable } from '../data/wordTable';
+import { codeActions, FIX_ALL_KIND } from './codeActions';
+import { codeLenses, SORT_RUNG_COMMAND } from './codeLens';
+import { completion, signatureHelp } from './completion';
+import { toLspDiagnostic, toLspTextEdit } from './convert';
+import { AnalysisStore, type Snapshot } from './documents';
+import { formatDocument } from './formatting';
+import { hover } from './hover';
+import { inlayHints } from './inlay';
+import { DidAnalyzeNotification, itemAt, ItemAtRequest, ladder, LadderRequest } from './ladder';
+import { LEGEND, semanticTokens } from './semanticTokens';
+import { normalizeSettings } from './settings';
+import { sortRung } from './sortRung';
+import { documentSymbols, foldingRanges } from './symbols';
+
+/** Quiet time after the last keystroke before diagnostics are published again. */
+export const PUBLISH_DELAY_MS = 150;
+
+/** Workspace files whose change re-checks every open script: config files and lexicons. */
+export const WATCHED_GLOBS = [`**/{${CONFIG_FILE_NAMES.join(',')}}`, '**/*lexicon*', '**/*.lex'];
+
+const TRANSPORT_FLAGS = ['--stdio', '--node-ipc', '--socket', '--pipe', '--clientProcessId'];
+
+function emptyData(): WordData {
+  return { pronunciations: () => undefined, count: () => 0 };
+}
+
+/** Starts the server on the transport named in argv (stdio when none is named). */
+export function startServer(): Connection {
+  const named = process.argv.some((a) => TRANSPORT_FLAGS.some((f) => a === f || a.startsWith(`${f}=`)));
+  const connection = named
+    ? createConnection(ProposedFeatures.all)
+    : createConnection(ProposedFeatures.all, new StreamMessageReader(process.stdin), new StreamMessageWriter(process.stdout));
+  // Anything that still calls console.* must not write into the protocol stream.
+  console.log = (...a: unknown[]) => connection.console.log(a.map(String).join(' '));
+  console.info = (...a: unknown[]) => connection.console.info(a.map(String).join(' '));
+  console.warn = (...a: unknown[]) => connection.console.warn(a.map(String).join(' '));
+  console.error = (...a: unknown[]) => connection.console.error(a.map(String).join(' '));
+  process.on('uncaughtException', (e) => connection.console.error(`uncaught: ${e.stack ?? e.message}`));
+  process.on('unhandledRejection', (e) => connection.console.error(`unhandled rejection: ${String(e)}`));
+
+  let data: WordData;
+  try {
+    data = loadWordTable();
+  } catch (err) {
+    data = emptyData();
+    setImmediate(() =>
+      connection.console.error(`word tables not loaded (${err instanceof Error ? err.message : String(err)}); every word is estimated`),
+    );
+  }
+
+  const documents = new TextDocuments(TextDocument);
+  const store = new AnalysisStore(data, {
+    log: (m) => connection.console.log(m),
+    error: (m) => connection.console.error(m),
+    analyzed: (s) => void connection.sendNotification(DidAnalyzeNotification, { uri: s.uri, version: s.version }),
+  });
+  let caps: ClientCapabilities = {};
+  let configurationSupport = false;
+  const timers = new Map<string, NodeJS.Timeout>();
+  const published = new Map<string, number>();
+
+  const cancelled = () => new ResponseError(LSPErrorCodes.RequestCancelled, 'request cancelled');
+  function guard<P, R>(name: string, fallback: R, fn: (p: P, token: CancellationToken) => R) {
+    return (p: P, token?: CancellationToken): R | ResponseError<void> => {
+      const t = token ?? CancellationToken.None;
+      if (t.isCancellationRequested) return cancelled();
+      try {
+        const r = fn(p, t);
+        return t.isCancellationRequested ? cancelled() : r;
+      } catch (err) {
+        connection.console.error(`${name} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
+        return fallback;
+      }
+    };
+  }
+  /** The analysis of the document as the client last sent it (never a stale one). */
+  const snap = (uri: string): Snapshot | null => {
+    const doc = documents.get(uri);
+    return doc ? store.get(doc) : null;
+  };
+
+  function publish(uri: string): void {
+    timers.delete(uri);
+    try {
+      const doc = documents.get(uri);
+      if (!doc) return;
+      const s = store.get(doc);
+      if (published.get(uri) === s.version && !s.settings) return;
+      published.set(uri, s.version);
+      void connection.sendDiagnostics({ uri, version: s.version, diagnostics: s.problems.map((p) => toLspDiagnostic(p, uri)) });
+    } catch (err) {
+      connection.console.error(`publishing diagnostics for ${uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
+    }
+  }
+  function schedule(uri: string, delay = PUBLISH_DELAY_MS): void {
+    clearTimeout(timers.get(uri));
+    timers.set(uri, setTimeout(() => publish(uri), delay));
+  }
+
+  async function refreshSettings(uri: string): Promise<boolean> {
+    if (!configurationSupport) return false;
+    try {
+      const raw: unknown = await connection.workspace.getConfiguration({ scopeUri: uri, section: 'rungs' });
+      const { settings, warnings } = normalizeSettings(raw);
+      for (const w of warnings) connection.console.warn(w);
+      return store.setSettings(uri, settings);
+    } catch (err) {
+      connection.console.warn(`could not read settings for ${uri}: ${String(err)}`);
+      return false;
+    }
+  }
+  async function recheckAll(): Promise<void> {
+    store.invalidate();
+    for (const doc of documents.all()) await refreshSettings(doc.uri);
+    for (const doc of documents.all()) publish(doc.uri);
+    const ws = caps.workspace;
+    if (ws?.inlayHint?.refreshSupport) void connection.languages.inlayHint.refresh().catch(() => undefined);
+    if (ws?.semanticTokens?.refreshSupport) connection.languages.semanticTokens.refresh();
+    if (ws?.codeLens?.refreshSupport) void connection.sendRequest('workspace/codeLens/refresh').catch(() => undefined);
+  }
+
+  connection.onInitialize((params): InitializeResult => {
+    caps = params.capabilities;
+    configurationSupport = Boolean(caps.workspace?.configuration);
+    const folders = params.workspaceFolders?.map((f) => f.uri) ?? (params.rootUri ? [params.rootUri] : []);
+    store.workspaceFolders = folders.flatMap((u) => (u.startsWith('file:') ? [decodeURIComponent(new URL(u).pathname)] : []));
+    return {
+      capabilities: {
+        textDocumentSync: { openClose: true, change: TextDocumentSyncKind.Incremental, save: false },
+        hoverProvider: true,
+        inlayHintProvider: { resolveProvider: false },
+        codeLensProvider: { resolveProvider: false },
+        codeActionProvider: { codeActionKinds: [CodeActionKind.QuickFix, CodeActionKind.RefactorRewrite, FIX_ALL_KIND] },
+        completionProvider: { triggerCharacters: ['@', ' ', ',', '='], resolveProvider: false },
+        signatureHelpProvider: { triggerCharacters: [' '], retriggerCharacters: [','] },
+        documentSymbolProvider: true,
+        foldingRangeProvider: true,
+        semanticTokensProvider: { legend: LEGEND, full: true, range: false },
+        documentFormattingProvider: true,
+        executeCommandProvider: { commands: [SORT_RUNG_COMMAND] },
+        workspace: { workspaceFolders: { supported: true, changeNotifications: true } },
+      },
+      serverInfo: { name: 'rungs', version: '0.1.0' },
+    };
+  });
+
+  connection.onInitialized(() => {
+    connection.console.log('Rungs language server ready');
+    if (caps.workspace?.didChangeConfiguration?.dynamicRegistration) {
+      void connection.client.register(
+        { method: 'workspace/didChangeConfiguration' } as never,
+        { section: 'rungs' } as never,
+      ).catch(() => undefined);
+    }
+    if (caps.workspace?.didChangeWatchedFiles?.dynamicRegistration) {
+      void connection.client
+        .register(DidChangeWatchedFilesNotification.type, { watchers: WATCHED_GLOBS.map((globPattern) => ({ globPattern })) })
+        .catch((e) => connection.console.warn(`file watching not registered: ${String(e)}`));
+    }
+  });
+
+  connection.onDidChangeConfiguration((change) => {
+    if (!configurationSupport) {
+      const raw = (change.settings as { rungs?: unknown } | null)?.rungs;
+      const { settings, warnings } = normalizeSettings(raw);
+      for (const w of warnings) connection.console.warn(w);
+      store.invalidate();
+      for (const doc of documents.all()) store.setSettings(doc.uri, settings);
+      for (const doc of documents.all()) publish(doc.uri);
+      return;
+    }
+    void recheckAll();
+  });
+  connection.onDidChangeWatchedFiles(() => void recheckAll());
+
+  documents.onDidOpen((e) => {
+    // Publish at once with the settings in hand, again if the client's settings differ.
+    publish(e.document.uri);
+    void refreshSettings(e.document.uri).then((changed) => {
+      if (changed) publish(e.document.uri);
+    });
+  });
+  documents.onDidChangeContent((e) => {
+    if (published.has(e.document.uri)) schedule(e.document.uri);
+  });
+  documents.onDidClose((e) => {
+    clearTimeout(timers.get(e.document.uri));
+    timers.delete(e.document.uri);
+    published.delete(e.document.uri);
+    store.close(e.document.uri);
+    void connection.sendDiagnostics({ uri: e.document.uri, diagnostics: [] });
+  });
+
+  connection.onHover(guard('hover', null, (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? hover(s, p.position.line, p.position.character) : null;
+  }));
+  connection.languages.inlayHint.on(guard('inlayHint', [], (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? inlayHints(s, p.range) : [];
+  }));
+  connection.onCodeLens(guard('codeLens', [], (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? codeLenses(s) : [];
+  }));
+  connection.onCodeAction(guard('codeAction', [], (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? codeActions(s, p) : [];
+  }));
+  connection.onCompletion(guard('completion', [], (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? completion(s, p.position.line, p.position.character) : [];
+  }));
+  connection.onSignatureHelp(guard('signatureHelp', null, (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? signatureHelp(s, p.position.line, p.position.character) : null;
+  }));
+  connection.onDocumentSymbol(guard('documentSymbol', [], (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? documentSymbols(s) : [];
+  }));
+  connection.onFoldingRanges(guard('foldingRange', [], (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? foldingRanges(s) : [];
+  }));
+  connection.languages.semanticTokens.on(guard('semanticTokens', { data: [] }, (p) => {
+    const s = snap(p.textDocument.uri);
+    return s ? semanticTokens(s) : { data: [] };
+  }));
+  connection.onDocumentFormatting(guard('formatting', [], (p) => {
+    const doc = documents.get(p.textDocument.uri);
+    return doc ? formatDocument(doc.getText()) : [];
+  }));
+  connection.onRequest(LadderRequest, guard('rungs/ladder', null, (p) => {
+    const s = snap(p.uri);
+    return s ? ladder(s) : null;
+  }));
+  connection.onRequest(ItemAtRequest, guard('rungs/itemAt', null, (p) => {
+    const s = snap(p.uri);
+    return s ? itemAt(s, p.line) : null;
+  }));
+
+  connection.onExecuteCommand(async (p) => {
+    try {
+      if (p.command !== SORT_RUNG_COMMAND) return null;
+      const [uri, line] = (p.arguments ?? []) as [string, number];
+      const s = typeof uri === 'string' ? snap(uri) : null;
+      if (!s || typeof line !== 'number') return { applied: false };
+      const rung = s.rungAtHeader(line) ?? s.rungContaining(line);
+      const e = rung ? sortRung(s, rung) : null;
+      if (!e) return { applied: false };
+      const edits = [toLspTextEdit(e)];
+      const edit = caps.workspace?.workspaceEdit?.documentChanges
+        ? { documentChanges: [{ textDocument: { uri, version: s.version }, edits }] }
+        : { changes: { [uri]: edits } };
+      const r = await connection.workspace.applyEdit({ label: `Sort rung "${rung!.node.name}" by difficulty`, edit });
+      return { applied: r.applied };
+    } catch (err) {
+      connection.console.error(`${SORT_RUNG_COMMAND} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
+      return { applied: false };
+    }
+  });
+
+  documents.listen(connection);
+  connection.listen();
+  return connection;
+}

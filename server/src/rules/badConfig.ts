@@ -1,0 +1,20 @@
+// bad-config: a workspace config or lexicon file that cannot be read as intended.
+import type { Rule } from './types';
+
+export const badConfig: Rule = {
+  id: 'bad-config',
+  summary: 'A config file (`.rungs.json`, `.rungs.yaml`, `.rungs.yml`) or lexicon it names cannot be read.',
+  defaultSeverity: 'error',
+  category: 'format',
+  docs: [
+    'Config files are JSON or YAML, never code. This rule reports, with the file, line and column:',
+    'a syntax error; a top-level value that is not an object; an unknown rule id under `rules`',
+    '(with the nearest id) or a severity other than error, warning, info, hint or off; a `ladder`',
+    'block with an unknown metric or a bad `maxStep`; a `lexicon` entry that is not a string or',
+    'names a file that does not exist. Settings keys and values in a config file are checked like',
+    'script settings and reported as `unknown-key` and `bad-value`. Whatever cannot be read is',
+    'ignored; the rest of the file still applies.',
+  ].join(' '),
+  // Reported by the config resolver (server/src/config/resolve.ts).
+  check() {},
+};

@@ -1,0 +1,55 @@
+// duplicate-item: the same sentence written twice in one script.
+import type { ItemAnalysis } from '../core/types';
+import type { Rule } from './types';
+import { itemRange, rungLabel } from './shared';
+
+/** Two items are the same when their spoken words match, ignoring case, punctuation and spacing. */
+export function itemKey(text: string): string {
+  return text
+    .toLowerCase()
+    .replace(/[’‘ʼ]/g, "'")
+    .replace(/[^\p{L}\p{N}'()]+/gu, ' ')
+    .trim();
+}
+
+export const duplicateItem: Rule = {
+  id: 'duplicate-item',
+  summary: 'An item repeats an earlier item of the script.',
+  defaultSeverity: 'warning',
+  category: 'item',
+  docs: [
+    'Compares the spoken text of every item (before any `|` trailer), ignoring case, punctuation',
+    'and spacing, so "Come in." and "come in!" are the same item. Each repeat is reported with the',
+    'line and rung of the first one. A repeated item counts twice in its rung\'s median and in',
+    'matched-set checks. The fix removes the repeated line (and only that line). When a repeat is',
+    'deliberate, allow it with a `// rungs: allow duplicate-item` line above it.',
+  ].join(' '),
+  check(ctx, report) {
+    const seen = new Map<string, ItemAnalysis>();
+    for (const it of ctx.analysis.items) {
+      const key = itemKey(it.node.text);
+      if (!key) continue;
+      const first = seen.get(key);
+      if (!first) {
+        seen.set(key, it);
+        continue;
+      }
+      const firstRung = ctx.analysis.rungs[first.rung];
+      const line = it.node.line;
+      const last = line + 1 >= ctx.lines.length;
+      report({
+        ...itemRange(it),
+        message: `"${it.node.text}" repeats line ${first.node.line + 1} in ${rungLabel(firstRung)}`,
+        related: [{ ...itemRange(first), message: `first written here, in ${rungLabel(firstRung)}` }],
+        fix: {
+          title: `Remove the repeated "${it.node.text}"`,
+          edits: [
+            last && line > 0
+              ? { line: line - 1, character: ctx.lines[line - 1].length, endLine: line, endCharacter: ctx.lines[line].length, newText: '' }
+              : { line, character: 0, endLine: line + 1, endCharacter: 0, newText: '' },
+          ],
+        },
+      });
+    }
+  },
+};

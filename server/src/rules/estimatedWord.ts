@@ -1,0 +1,50 @@
+// estimated-word: a word with no dictionary entry and no override, pronounced by estimate.
+import type { TextEdit } from '../core/types';
+import type { Rule, RuleContext } from './types';
+
+/** Where a new `@say` line goes: after the last header line above the first rung or item. */
+export function headerInsertEdit(ctx: RuleContext, line: string): TextEdit {
+  const { script } = ctx.analysis;
+  const firstBody = script.rungs.length ? script.rungs[0].line : ctx.lines.length;
+  let last = -1;
+  for (const s of script.header) if (s.line < firstBody) last = Math.max(last, s.line);
+  for (const o of script.overrides) if (o.line < firstBody) last = Math.max(last, o.line);
+  const eol = /\r\n/.test(ctx.text) ? '\r\n' : '\n';
+  if (last < 0) return { line: 0, character: 0, endLine: 0, endCharacter: 0, newText: line + eol };
+  if (last + 1 < ctx.lines.length) return { line: last + 1, character: 0, endLine: last + 1, endCharacter: 0, newText: line + eol };
+  const end = ctx.lines[last].length;
+  return { line: last, character: end, endLine: last, endCharacter: end, newText: eol + line };
+}
+
+export const estimatedWord: Rule = {
+  id: 'estimated-word',
+  summary: 'A word is not in the dictionary and has no override, so its pronunciation is estimated.',
+  defaultSeverity: 'warning',
+  category: 'item',
+  docs: [
+    'Words missing from the CMU Pronouncing Dictionary (names, new words) are pronounced by',
+    'morphology on a dictionary stem or by letter-to-sound rules, and their syllables, phonemes and',
+    'complexity are only as good as that estimate. Each such word is reported with the estimated',
+    'phones. The fix inserts a `@say word = PHONES` line with the estimate at the end of the',
+    'script header: check the phones, correct them if needed, and the word counts as confirmed.',
+    'A workspace lexicon file (`lexicon` in a config file) does the same for many scripts.',
+  ].join(' '),
+  check(ctx, report) {
+    for (const it of ctx.analysis.items) {
+      for (const w of it.words) {
+        if (w.source !== 'estimate' && w.source !== 'morphology') continue;
+        const phones = w.phones.join(' ');
+        const how = w.source === 'morphology' ? 'built from a dictionary stem' : 'estimated by letter-to-sound rules';
+        const say = `@say ${w.spoken} = ${phones}`;
+        report({
+          line: it.node.line,
+          character: w.start,
+          endLine: it.node.line,
+          endCharacter: w.end,
+          message: `"${w.spoken}" is not in the dictionary; ${how} as ${phones} (${w.syllables} syllable${w.syllables === 1 ? '' : 's'}): check it and add "${say}"`,
+          fix: phones ? { title: `Add "${say}" to the header`, edits: [headerInsertEdit(ctx, say)] } : undefined,
+        });
+      }
+    }
+  },
+};

@@ -1,0 +1,61 @@
+// Applies fixes to text. A fix is applied whole or not at all: when any of its edits overlaps an
+// edit already taken, the fix is skipped (a later run can pick it up). Identical edits from
+// different problems (e.g. two reports of one unknown word) are applied once. Text outside the
+// edits is copied unchanged, byte for byte.
+import type { Fix, TextEdit } from '../core/types';
+
+interface Span {
+  start: number;
+  end: number;
+  newText: string;
+}
+
+function lineStarts(text: string): number[] {
+  const starts = [0];
+  for (let i = 0; i < text.length; i++) {
+    const c = text[i];
+    if (c === '\n' || (c === '\r' && text[i + 1] !== '\n')) starts.push(i + 1);
+  }
+  return starts;
+}
+
+function offset(starts: number[], text: string, line: number, character: number): number {
+  if (line >= starts.length) return text.length;
+  return Math.min(starts[line] + character, text.length);
+}
+
+export function applyFixes(text: string, fixes: Fix[]): { text: string; applied: number; skipped: number } {
+  const starts = lineStarts(text);
+  const taken: Span[] = [];
+  const keys = new Set<string>();
+  let applied = 0;
+  let skipped = 0;
+  for (const fix of fixes) {
+    const spans = fix.edits.map((e: TextEdit) => ({
+      start: offset(starts, text, e.line, e.character),
+      end: offset(starts, text, e.endLine, e.endCharacter),
+      newText: e.newText,
+    }));
+    const fresh = spans.filter((s) => !keys.has(`${s.start}:${s.end}:${s.newText}`));
+    if (!fresh.length) {
+      applied++;
+      continue;
+    }
+    const clash = fresh.some((s) =>
+      taken.some((t) => s.start < t.end && t.start < s.end || (s.start === s.end && t.start === t.end && s.start === t.start)),
+    );
+    if (clash) {
+      skipped++;
+      continue;
+    }
+    for (const s of fresh) {
+      taken.push(s);
+      keys.add(`${s.start}:${s.end}:${s.newText}`);
+    }
+    applied++;
+  }
+  taken.sort((a, b) => b.start - a.start || b.end - a.end);
+  let out = text;
+  for (const s of taken) out = out.slice(0, s.start) + s.newText + out.slice(s.end);
+  return { text: out, applied, skipped };
+}

@@ -1,0 +1,126 @@
+// Small helpers the rules share: how rungs are named in messages, which number a ladder rule
+// reads (the composite difficulty or one metric), robust statistics, and where paces were set.
+import { formatNumber } from '../core/pace';
+import type { ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
+import type { LadderMetric, RuleContext } from './types';
+
+/** One decimal, as the score table shows difficulty. */
+export const fmt = (n: number): string => formatNumber(n, 1);
+
+/** How a metric is named in messages. */
+export const METRIC_NAMES: Record<LadderMetric, string> = {
+  difficulty: 'difficulty',
+  words: 'words',
+  syllables: 'syllables',
+  phonemes: 'phonemes',
+  wcm: 'WCM',
+  rarity: 'rarity (7 - mean Zipf)',
+};
+
+/** The number a ladder or outlier rule reads from an item. */
+export function metricOf(item: ItemAnalysis, metric: LadderMetric): number {
+  switch (metric) {
+    case 'words':
+      return item.wordCount;
+    case 'syllables':
+      return item.syllables;
+    case 'phonemes':
+      return item.phonemes;
+    case 'wcm':
+      return item.wcm;
+    case 'rarity':
+      return 7 - item.zipfMean;
+    default:
+      return item.difficulty;
+  }
+}
+
+export function median(xs: number[]): number {
+  if (!xs.length) return 0;
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+/** A rung summarised on the chosen metric; rungs without items are left out of ladder checks. */
+export interface RungStat {
+  rung: RungAnalysis;
+  values: number[];
+  median: number;
+  min: number;
+  max: number;
+}
+
+export function ladderMetric(ctx: RuleContext): LadderMetric {
+  return ctx.settings.ladder?.metric ?? 'difficulty';
+}
+
+export function rungStats(ctx: RuleContext): RungStat[] {
+  const metric = ladderMetric(ctx);
+  return ctx.analysis.rungs
+    .filter((r) => r.items.length > 0)
+    .map((rung) => {
+      const values = rung.items.map((i) => Number(metricOf(i, metric).toFixed(1)));
+      return { rung, values, median: median(values), min: Math.min(...values), max: Math.max(...values) };
+    });
+}
+
+/** `rung 3 "Back to short"`: 1-based, with the name, as every message writes it. */
+export function rungLabel(r: RungAnalysis): string {
+  return `rung ${r.index + 1} "${r.node.name}"`;
+}
+
+/** The rung header line (or the first item of an implicit rung), for reports and related info. */
+export function rungRange(ctx: RuleContext, r: RungAnalysis): Range {
+  const line = r.node.line;
+  const text = ctx.lines[line] ?? '';
+  const start = text.length - text.trimStart().length;
+  return { line, character: start, endLine: line, endCharacter: Math.max(start + 1, text.trimEnd().length) };
+}
+
+export function rungRelated(ctx: RuleContext, r: RungAnalysis, message: string): RelatedInfo {
+  return { ...rungRange(ctx, r), message };
+}
+
+export function itemRange(item: ItemAnalysis): Range {
+  return { line: item.node.line, character: item.node.textStart, endLine: item.node.line, endCharacter: item.node.textEnd };
+}
+
+/** Whether a rung is harder than the one before it, in the script's direction. */
+export function sign(ctx: RuleContext): 1 | -1 {
+  return ctx.analysis.options.direction === 'falling' ? -1 : 1;
+}
+
+/** The setting line a rung's paces came from (its own @pace, else the header's), if written. */
+export function paceSetting(ctx: RuleContext, r: RungAnalysis): Setting | null {
+  const own = r.node.settings.filter((s) => s.key === 'pace' || s.key === 'paces');
+  if (own.length) return own[own.length - 1];
+  const head = ctx.analysis.script.header.filter((s) => s.key === 'pace' || s.key === 'paces');
+  return head.length ? head[head.length - 1] : null;
+}
+
+export function settingRange(s: Setting): Range {
+  return { line: s.line, character: s.keyStart, endLine: s.line, endCharacter: Math.max(s.valueEnd, s.keyEnd) };
+}
+
+/** Where to report something about a rung's pace: the line that set it, else the rung header. */
+export function paceRange(ctx: RuleContext, r: RungAnalysis): Range {
+  const s = paceSetting(ctx, r);
+  return s ? settingRange(s) : rungRange(ctx, r);
+}
+
+/** Words per second a pace implies on a rung (sps paces depend on the rung's syllables per word). */
+export function rungWordRate(r: RungAnalysis, pace: Pace): number {
+  const words = r.items.reduce((n, i) => n + i.wordCount, 0);
+  const syllables = r.items.reduce((n, i) => n + i.syllables, 0);
+  if (pace.unit === 'wps') return pace.value;
+  return syllables > 0 ? (pace.value * words) / syllables : 0;
+}
+
+/** Syllables per second a pace implies on a rung. */
+export function rungSyllableRate(r: RungAnalysis, pace: Pace): number {
+  const words = r.items.reduce((n, i) => n + i.wordCount, 0);
+  const syllables = r.items.reduce((n, i) => n + i.syllables, 0);
+  if (pace.unit === 'sps') return pace.value;
+  return words > 0 ? (pace.value * syllables) / words : 0;
+}

@@ -1,0 +1,28 @@
+// thin-rung: a rung with fewer items than the script's minimum.
+import type { Rule } from './types';
+import { rungLabel, rungRange } from './shared';
+
+export const thinRung: Rule = {
+  id: 'thin-rung',
+  summary: 'A rung holds fewer items than `@min-items` (default 3).',
+  defaultSeverity: 'warning',
+  category: 'ladder',
+  docs: [
+    'A level needs enough items for practice and for a stable median. Every rung with fewer items',
+    'than `@min-items` (default 3; 0 turns the check off) is reported on its header with the count',
+    'and the minimum. An empty rung is reported too. Fix it by adding items or by merging the rung',
+    'into a neighbour.',
+  ].join(' '),
+  check(ctx, report) {
+    const min = ctx.analysis.options.minItems;
+    if (!(min > 0)) return;
+    for (const r of ctx.analysis.rungs) {
+      const n = r.items.length;
+      if (n >= min) continue;
+      report({
+        ...rungRange(ctx, r),
+        message: `${rungLabel(r)} has ${n === 0 ? 'no items' : `${n} item${n === 1 ? '' : 's'}`}; rungs need at least ${min} (@min-items)`,
+      });
+    }
+  },
+};

@@ -1,0 +1,195 @@
+// A small LSP client for protocol tests: spawns `rungs lsp --stdio`, speaks JSON-RPC through
+// vscode-languageserver-protocol's node client, answers the server's requests (configuration,
+// registrations, applyEdit) and lets tests wait for the notifications they need. No sleeps.
+import { spawn, type ChildProcess } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import {
+  createProtocolConnection,
+  StreamMessageReader,
+  StreamMessageWriter,
+  type ProtocolConnection,
+} from 'vscode-languageserver-protocol/node';
+import type {
+  Diagnostic,
+  InitializeResult,
+  PublishDiagnosticsParams,
+  TextDocumentContentChangeEvent,
+  TextEdit,
+  WorkspaceEdit,
+} from 'vscode-languageserver-protocol';
+
+export const ROOT = fileURLToPath(new URL('../..', import.meta.url));
+export const BIN = join(ROOT, 'server/bin/rungs.js');
+
+export function fileUri(path: string): string {
+  return pathToFileURL(path).href;
+}
+
+/** Applies LSP text edits to a text (edits must not overlap, as LSP requires). */
+export function applyTextEdits(text: string, edits: TextEdit[]): string {
+  const starts = [0];
+  for (let i = 0; i < text.length; i++) {
+    if (text[i] === '\r' && text[i + 1] === '\n') continue;
+    if (text[i] === '\n' || text[i] === '\r') starts.push(i + 1);
+  }
+  const offset = (p: { line: number; character: number }) =>
+    p.line >= starts.length ? text.length : Math.min(starts[p.line] + p.character, text.length);
+  const sorted = [...edits].sort((a, b) => offset(b.range.start) - offset(a.range.start));
+  let out = text;
+  for (const e of sorted) out = out.slice(0, offset(e.range.start)) + e.newText + out.slice(offset(e.range.end));
+  return out;
+}
+
+/** The edits a workspace edit makes to one document, whichever form it uses. */
+export function editsFor(edit: WorkspaceEdit, uri: string): TextEdit[] {
+  if (edit.changes?.[uri]) return edit.changes[uri];
+  const out: TextEdit[] = [];
+  for (const c of edit.documentChanges ?? []) {
+    if ('textDocument' in c && c.textDocument.uri === uri) out.push(...(c.edits as TextEdit[]));
+  }
+  return out;
+}
+
+type Waiter = { test: () => boolean; resolve: () => void };
+
+export class LspTestClient {
+  readonly connection: ProtocolConnection;
+  readonly proc: ChildProcess;
+  readonly diagnostics = new Map<string, PublishDiagnosticsParams>();
+  readonly analyzed: { uri: string; version: number }[] = [];
+  readonly logs: string[] = [];
+  readonly appliedEdits: WorkspaceEdit[] = [];
+  readonly texts = new Map<string, { version: number; text: string }>();
+  stderr = '';
+  /** What the client answers to workspace/configuration (section "rungs"). */
+  settings: Record<string, unknown> = {};
+  capabilities!: InitializeResult['capabilities'];
+  private waiters: Waiter[] = [];
+
+  constructor(args: string[] = ['lsp', '--stdio']) {
+    if (!existsSync(join(ROOT, 'dist/rungs.js'))) throw new Error('dist/rungs.js is missing: run `npm run build` first');
+    this.proc = spawn(process.execPath, [BIN, ...args], { cwd: ROOT, stdio: ['pipe', 'pipe', 'pipe'] });
+    this.proc.stderr!.on('data', (d) => (this.stderr += String(d)));
+    this.connection = createProtocolConnection(new StreamMessageReader(this.proc.stdout!), new StreamMessageWriter(this.proc.stdin!));
+    this.connection.onNotification('textDocument/publishDiagnostics', (p: PublishDiagnosticsParams) => {
+      this.diagnostics.set(p.uri, p);
+      this.wake();
+    });
+    this.connection.onNotification('rungs/didAnalyze', (p: { uri: string; version: number }) => {
+      this.analyzed.push(p);
+      this.wake();
+    });
+    this.connection.onNotification('window/logMessage', (p: { message: string }) => {
+      this.logs.push(p.message);
+      this.wake();
+    });
+    this.connection.onRequest('workspace/configuration', (p: { items: { section?: string }[] }) =>
+      p.items.map((i) => (i.section === 'rungs' ? this.settings : null)),
+    );
+    this.connection.onRequest('client/registerCapability', () => null);
+    this.connection.onRequest('workspace/inlayHint/refresh', () => null);
+    this.connection.onRequest('workspace/semanticTokens/refresh', () => null);
+    this.connection.onRequest('workspace/codeLens/refresh', () => null);
+    this.connection.onRequest('workspace/applyEdit', (p: { edit: WorkspaceEdit }) => {
+      this.appliedEdits.push(p.edit);
+      for (const [uri, doc] of this.texts) {
+        const edits = editsFor(p.edit, uri);
+        if (edits.length) doc.text = applyTextEdits(doc.text, edits);
+      }
+      this.wake();
+      return { applied: true };
+    });
+    this.connection.listen();
+  }
+
+  private wake(): void {
+    for (const w of [...this.waiters]) {
+      if (w.test()) {
+        this.waiters.splice(this.waiters.indexOf(w), 1);
+        w.resolve();
+      }
+    }
+  }
+
+  /** Resolves when `test` holds (checked now and after every message from the server). */
+  waitFor(test: () => boolean, what: string, ms = 20_000): Promise<void> {
+    if (test()) return Promise.resolve();
+    return new Promise((resolve, reject) => {
+      const timer = setTimeout(() => reject(new Error(`timed out waiting for ${what}; stderr: ${this.stderr}`)), ms);
+      this.waiters.push({ test, resolve: () => (clearTimeout(timer), resolve()) });
+    });
+  }
+
+  async initialize(rootPath = ROOT): Promise<InitializeResult> {
+    const r: InitializeResult = await this.connection.sendRequest('initialize', {
+      processId: process.pid,
+      rootUri: fileUri(rootPath),
+      workspaceFolders: [{ uri: fileUri(rootPath), name: 'root' }],
+      capabilities: {
+        workspace: {
+          configuration: true,
+          applyEdit: true,
+          workspaceEdit: { documentChanges: true },
+          didChangeConfiguration: { dynamicRegistration: true },
+          didChangeWatchedFiles: { dynamicRegistration: true },
+          inlayHint: { refreshSupport: true },
+          semanticTokens: { refreshSupport: true },
+          codeLens: { refreshSupport: true },
+        },
+        textDocument: {
+          synchronization: { dynamicRegistration: false },
+          hover: { contentFormat: ['markdown', 'plaintext'] },
+          publishDiagnostics: { relatedInformation: true, versionSupport: true, codeDescriptionSupport: true, tagSupport: { valueSet: [1, 2] } },
+          codeAction: { codeActionLiteralSupport: { codeActionKind: { valueSet: ['quickfix', 'refactor', 'refactor.rewrite', 'source'] } } },
+          inlayHint: {},
+          semanticTokens: { requests: { full: true }, tokenTypes: [], tokenModifiers: [], formats: ['relative'] },
+        },
+      },
+    });
+    this.capabilities = r.capabilities;
+    await this.connection.sendNotification('initialized', {});
+    return r;
+  }
+
+  async open(uri: string, text: string, version = 1): Promise<void> {
+    this.texts.set(uri, { version, text });
+    await this.connection.sendNotification('textDocument/didOpen', { textDocument: { uri, languageId: 'rungs', version, text } });
+  }
+
+  /** Sends incremental changes and keeps the client's copy of the text in step. */
+  async change(uri: string, changes: { range: TextEdit['range']; text: string }[]): Promise<number> {
+    const doc = this.texts.get(uri)!;
+    doc.version++;
+    for (const c of changes) doc.text = applyTextEdits(doc.text, [{ range: c.range, newText: c.text }]);
+    const contentChanges: TextDocumentContentChangeEvent[] = changes;
+    await this.connection.sendNotification('textDocument/didChange', { textDocument: { uri, version: doc.version }, contentChanges });
+    return doc.version;
+  }
+
+  /** Diagnostics published for exactly this version of the document. */
+  async diagnosticsFor(uri: string, version: number): Promise<Diagnostic[]> {
+    await this.waitFor(() => this.diagnostics.get(uri)?.version === version, `diagnostics of ${uri} v${version}`);
+    return this.diagnostics.get(uri)!.diagnostics;
+  }
+
+  request<R>(method: string, params: unknown): Promise<R> {
+    return this.connection.sendRequest(method, params) as Promise<R>;
+  }
+
+  async close(): Promise<void> {
+    try {
+      await Promise.race([this.connection.sendRequest('shutdown'), new Promise((r) => setTimeout(r, 2000))]);
+      await this.connection.sendNotification('exit');
+    } catch {
+      // The server may already be gone; the process is killed below either way.
+    }
+    await new Promise<void>((resolve) => {
+      if (this.proc.exitCode !== null) return resolve();
+      const t = setTimeout(() => (this.proc.kill(), resolve()), 3000);
+      this.proc.on('exit', () => (clearTimeout(t), resolve()));
+    });
+    this.connection.dispose();
+  }
+}

@@ -1,0 +1,20 @@
+import { it } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { LspTestClient, fileUri, ROOT } from '../helpers/lspClient';
+it('smoke', async () => {
+  const c = new LspTestClient();
+  await c.initialize();
+  const uri = fileUri(ROOT + 'sample-scripts/family-visits-draft.rungs');
+  await c.open(uri, readFileSync(ROOT + 'sample-scripts/family-visits-draft.rungs', 'utf8'));
+  const d = await c.diagnosticsFor(uri, 1);
+  console.log(d.map(x => `${x.range.start.line}:${x.range.start.character} ${x.code} ${x.message}`).join('\n'));
+  const h: any = await c.request('textDocument/hover', { textDocument: { uri }, position: { line: 21, character: 30 } });
+  console.log(h?.contents.value);
+  const h2: any = await c.request('textDocument/hover', { textDocument: { uri }, position: { line: 21, character: 2 } });
+  console.log(h2?.contents.value);
+  const h3: any = await c.request('textDocument/hover', { textDocument: { uri }, position: { line: 17, character: 4 } });
+  console.log(h3?.contents.value);
+  console.log(JSON.stringify(await c.request('rungs/ladder', { uri })).slice(0, 600));
+  console.log(c.logs.join('\n'), c.stderr);
+  await c.close();
+});
