@@ -26,7 +26,7 @@ export interface FallbackAccuracy {
   syllableExactRules: number;
   /** Mean time of one `estimatePronunciation` call, in microseconds. */
   microsecondsPerWord: number;
-  /** Up to 400 syllable-count misses, for inspection. */
+  /** Up to 40 syllable-count misses, for inspection. */
   misses: { word: string; expected: string; got: string; how: string }[];
 }
 
@@ -104,6 +104,7 @@ export function measureFallback(
   const sample = pool.slice(0, n);
   const hidden: { word: string | null } = { word: null };
   const data = makeWordData(prons, hidden);
+  data.count(''); // Builds the SUBTLEX table now, outside the timed calls.
 
   let syl = 0;
   let count = 0;
@@ -122,7 +123,7 @@ export function measureFallback(
     elapsed += performance.now() - start;
     const sylOk = syllableCount(estimate.phones) === syllableCount(expected);
     if (sylOk) syl++;
-    else if (misses.length < 400) {
+    else if (misses.length < 40) {
       misses.push({ word, expected: expected.join(' '), got: estimate.phones.join(' '), how: estimate.how });
     }
     if (estimate.phones.length === expected.length) count++;

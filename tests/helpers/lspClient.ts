@@ -63,6 +63,8 @@ export class LspTestClient {
   readonly appliedEdits: WorkspaceEdit[] = [];
   readonly texts = new Map<string, { version: number; text: string }>();
   stderr = '';
+  /** Number of publishDiagnostics notifications received so far. */
+  publishCount = 0;
   /** What the client answers to workspace/configuration (section "rungs"). */
   settings: Record<string, unknown> = {};
   capabilities!: InitializeResult['capabilities'];
@@ -75,6 +77,7 @@ export class LspTestClient {
     this.connection = createProtocolConnection(new StreamMessageReader(this.proc.stdout!), new StreamMessageWriter(this.proc.stdin!));
     this.connection.onNotification('textDocument/publishDiagnostics', (p: PublishDiagnosticsParams) => {
       this.diagnostics.set(p.uri, p);
+      this.publishCount++;
       this.wake();
     });
     this.connection.onNotification('rungs/didAnalyze', (p: { uri: string; version: number }) => {

@@ -2,6 +2,7 @@
 // (0 clean, 1 problems at error level, 2 usage error or unreadable input). A command that keeps
 // running on its own (the language server) returns null.
 import { EXIT_USAGE, UsageError, type CliIO } from './io';
+import { lintCommand } from './lint';
 import { scoreCommand } from './score';
 import { lspCommand } from './lspCommand';
 
@@ -14,7 +15,7 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];

@@ -1,9 +1,10 @@
 // `rungs score FILE... [--format table|csv|json]`: per-item scores of each script.
-import { basename, relative } from 'node:path';
+import { basename, join, relative } from 'node:path';
 import { analyze } from '../core/analyze';
 import { CAUTION } from '../core/caution';
 import { resolveScriptContext } from '../config/resolve';
 import { loadWordTable } from '../data/wordTable';
+import { lint } from '../rules/index';
 import { parseArgs } from './args';
 import { expandPaths } from './files';
 import { formatCsv, formatJson, formatTable, type ScoredFile } from './formatScore';
@@ -41,9 +42,9 @@ export const scoreCommand: Command = {
         code = EXIT_USAGE;
         continue;
       }
-      const ctx = resolveScriptContext(file === '-' ? io.cwd : file, io.fs);
+      const ctx = resolveScriptContext(file === '-' ? join(io.cwd, 'stdin.rungs') : file, io.fs);
       const analysis = analyze({ text, data, options: ctx.options, lexicon: ctx.lexicon });
-      scored.push({ file: shown, analysis, problems: analysis.problems });
+      scored.push({ file: shown, analysis, problems: lint(analysis, text, ctx.lint) });
     }
     if (!files.length && !missing.length) {
       io.stderr('rungs score: no *.rungs files found\n');

@@ -106,8 +106,8 @@ export function parseConfigText(text: string, file: string): ConfigLayer {
   const lc = new LineCounter();
   const doc = parseDocument(text, { lineCounter: lc, uniqueKeys: true, prettyErrors: false });
   const problems: Problem[] = doc.errors.map((e) => {
-    const p = e.linePos?.[0] ?? { line: 1, col: 1 };
-    const q = e.linePos?.[1] ?? { line: p.line, col: p.col + 1 };
+    const p = lc.linePos(e.pos[0]);
+    const q = lc.linePos(Math.max(e.pos[1], e.pos[0] + 1));
     const first = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
     return { rule: 'bad-config', severity: 'error', message: `cannot read the config file: ${first}`, line: p.line - 1, character: p.col - 1, endLine: q.line - 1, endCharacter: q.col - 1 };
   });

@@ -88,14 +88,15 @@ function wordActions(s: Snapshot, w: WordAnalysis, line: number): CodeAction[] {
 
 export function codeActions(s: Snapshot, params: CodeActionParams): CodeAction[] {
   const range = fromLspRange(params.range);
-  const only = params.context.only;
+  const only = Array.isArray(params.context?.only) ? params.context.only : undefined;
   const wants = (kind: string) => !only || only.some((k) => kind === k || kind.startsWith(`${k}.`));
   const actions: CodeAction[] = [];
 
   if (wants(CodeActionKind.QuickFix)) {
     for (const p of s.problems) {
       if (!p.fix || !rangesTouch(p, range)) continue;
-      const diagnostic = params.context.diagnostics.find((d) => sameDiagnostic(d, p)) ?? toLspDiagnostic(p, s.uri);
+      const sent = Array.isArray(params.context?.diagnostics) ? params.context.diagnostics : [];
+      const diagnostic = sent.find((d) => sameDiagnostic(d, p)) ?? toLspDiagnostic(p, s.uri);
       actions.push({
         title: p.fix.title,
         kind: CodeActionKind.QuickFix,
@@ -116,7 +117,8 @@ export function codeActions(s: Snapshot, params: CodeActionParams): CodeAction[]
   const rung = s.rungContaining(line);
   if (rung && wants(CodeActionKind.RefactorRewrite)) {
     const e = sortRung(s, rung);
-    if (e) actions.push({ title: `Sort rung "${rung.node.name}" by difficulty`, kind: CodeActionKind.RefactorRewrite, edit: edit(s, [e]) });
+    const dup = e && actions.some((a) => JSON.stringify(a.edit) === JSON.stringify(edit(s, [e])));
+    if (e && !dup) actions.push({ title: `Sort rung "${rung.node.name}" by difficulty`, kind: CodeActionKind.RefactorRewrite, edit: edit(s, [e]) });
   }
 
   if (only?.some((k) => FIX_ALL_KIND.startsWith(k) && k.startsWith(CodeActionKind.Source))) {

@@ -1,7 +1,7 @@
 // Completion of setting keys (header or rung, from the core's KEYS table), their values, set
 // labels (the usual ones plus every label already used in the script), pace units, and the
-// words of `@say` (words the script uses that had to be estimated). Signature help shows what
-// a key takes while its value is typed.
+// words of `@say` (words the script had to estimate) and lint directives ("// rungs: allow ID").
+// Signature help shows what a key takes while its value is typed.
 import {
   CompletionItemKind,
   InsertTextFormat,

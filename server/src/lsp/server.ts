@@ -108,7 +108,6 @@ export function startServer(): Connection {
       const doc = documents.get(uri);
       if (!doc) return;
       const s = store.get(doc);
-      if (published.get(uri) === s.version && !s.settings) return;
       published.set(uri, s.version);
       void connection.sendDiagnostics({ uri, version: s.version, diagnostics: s.problems.map((p) => toLspDiagnostic(p, uri)) });
     } catch (err) {

@@ -1,4 +1,6 @@
 // bad-directive: a `// rungs:` comment that names an unknown rule or is not understood.
+// Directives are read by lint() itself, so this file only holds the rule's metadata and docs;
+// the reading lives in directives.ts beside it.
 import type { Rule } from './types';
 
 export const badDirective: Rule = {

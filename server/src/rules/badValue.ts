@@ -1,4 +1,6 @@
 // bad-value: a setting value, or a line, that cannot be read.
+// The core reports it, so the table of keys and their readers stays in one place (core/options.ts);
+// this file holds the rule's metadata and docs.
 import type { Rule } from './types';
 
 export const badValue: Rule = {

@@ -1,4 +1,6 @@
 // bad-variant: a pronunciation number that the dictionary does not list for the word.
+// The core reports it while pronouncing, where the listed pronunciations are at hand; this file
+// holds the rule's metadata and docs, so the id has a docs page and a severity setting.
 import type { Rule } from './types';
 
 export const badVariant: Rule = {

@@ -6,9 +6,9 @@ import type { Rule, RuleContext } from './types';
 export function headerInsertEdit(ctx: RuleContext, line: string): TextEdit {
   const { script } = ctx.analysis;
   const firstBody = script.rungs.length ? script.rungs[0].line : ctx.lines.length;
+  // The last setting line above the body, including @say lines the core could not read.
   let last = -1;
-  for (const s of script.header) if (s.line < firstBody) last = Math.max(last, s.line);
-  for (const o of script.overrides) if (o.line < firstBody) last = Math.max(last, o.line);
+  for (let l = 0; l < Math.min(firstBody, ctx.lines.length); l++) if (ctx.lines[l].trimStart().startsWith('@')) last = l;
   const eol = /\r\n/.test(ctx.text) ? '\r\n' : '\n';
   if (last < 0) return { line: 0, character: 0, endLine: 0, endCharacter: 0, newText: line + eol };
   if (last + 1 < ctx.lines.length) return { line: last + 1, character: 0, endLine: last + 1, endCharacter: 0, newText: line + eol };
@@ -35,13 +35,14 @@ export const estimatedWord: Rule = {
         if (w.source !== 'estimate' && w.source !== 'morphology') continue;
         const phones = w.phones.join(' ');
         const how = w.source === 'morphology' ? 'built from a dictionary stem' : 'estimated by letter-to-sound rules';
-        const say = `@say ${w.spoken} = ${phones}`;
+        const word = w.surface.toLowerCase() === w.spoken ? w.surface : w.spoken;
+        const say = `@say ${word} = ${phones}`;
         report({
           line: it.node.line,
           character: w.start,
           endLine: it.node.line,
           endCharacter: w.end,
-          message: `"${w.spoken}" is not in the dictionary; ${how} as ${phones} (${w.syllables} syllable${w.syllables === 1 ? '' : 's'}): check it and add "${say}"`,
+          message: `"${word}" is not in the dictionary; ${how} as ${phones} (${w.syllables} syllable${w.syllables === 1 ? '' : 's'}): check it and add "${say}"`,
           fix: phones ? { title: `Add "${say}" to the header`, edits: [headerInsertEdit(ctx, say)] } : undefined,
         });
       }

@@ -39,8 +39,8 @@ export const paceSlowsDown: Rule = {
         report({
           ...paceRange(ctx, cur.rung),
           message:
-            `${rungLabel(cur.rung)}'s ${which} pace ${formatNumber(now, 3)} ${unit} is slower than ` +
-            `${formatNumber(was, 3)} ${unit} in ${rungLabel(prev.rung)}, while its median difficulty rises ` +
+            `the ${which} pace of ${rungLabel(cur.rung)}, ${formatNumber(now, 3)} ${unit}, is slower than ` +
+            `${formatNumber(was, 3)} ${unit} in ${rungLabel(prev.rung)}, while the median difficulty rises ` +
             `from ${fmt(prev.median)} to ${fmt(cur.median)}`,
           related: [rungRelated(ctx, prev.rung, `${rungLabel(prev.rung)}: ${which} pace ${formatNumber(was, 3)} ${unit}`)],
         });

@@ -4,8 +4,11 @@ import { formatNumber } from '../core/pace';
 import type { ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
 import type { LadderMetric, RuleContext } from './types';
 
-/** One decimal, as the score table shows difficulty. */
-export const fmt = (n: number): string => formatNumber(n, 1);
+/** One decimal, as the score table shows difficulty: 21.7, 24.0. */
+export const fmt = (n: number): string => (Math.abs(n) < 0.05 ? 0 : n).toFixed(1);
+
+/** A limit as the user wrote it: 12, 2.5. */
+export const fmtLimit = (n: number): string => formatNumber(n, 2);
 
 /** How a metric is named in messages. */
 export const METRIC_NAMES: Record<LadderMetric, string> = {

@@ -1,6 +1,6 @@
 // step-too-big: neighbouring rungs whose medians are further apart than the largest allowed step.
 import type { Rule } from './types';
-import { fmt, METRIC_NAMES, ladderMetric, rungLabel, rungRange, rungRelated, rungStats, sign } from './shared';
+import { fmt, fmtLimit, METRIC_NAMES, ladderMetric, rungLabel, rungRange, rungRelated, rungStats, sign } from './shared';
 
 export const stepTooBig: Rule = {
   id: 'step-too-big',
@@ -32,7 +32,7 @@ export const stepTooBig: Rule = {
         ...rungRange(ctx, cur.rung),
         message:
           `${rungLabel(cur.rung)} median${what} ${fmt(cur.median)} is ${fmt(step)} ${dir === 1 ? 'above' : 'below'} ` +
-          `${rungLabel(prev.rung)} (${fmt(prev.median)}); largest step is ${fmt(limit)}${source}`,
+          `${rungLabel(prev.rung)} (${fmt(prev.median)}); largest step is ${fmtLimit(limit)}${source}`,
         related: [rungRelated(ctx, prev.rung, `${rungLabel(prev.rung)}: median ${fmt(prev.median)}`)],
       });
     }

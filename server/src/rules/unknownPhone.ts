@@ -1,4 +1,6 @@
 // unknown-phone: a pronunciation override with a phone that is not CMU ARPAbet.
+// The core reports it while reading overrides (scripts and lexicon files alike); this file holds
+// the rule's metadata and docs.
 import type { Rule } from './types';
 
 export const unknownPhone: Rule = {

@@ -19,8 +19,8 @@ export function unifiedDiff(file: string, before: string, after: string, context
       ops.push({ t: ' ', s: a[i], ...at });
       i++;
       j++;
-    } else if (j < m && (i >= n || lcs[i][j + 1] >= lcs[i + 1][j])) ops.push({ t: '+', s: b[j++], ...at });
-    else ops.push({ t: '-', s: a[i++], ...at });
+    } else if (i < n && (j >= m || lcs[i + 1][j] >= lcs[i][j + 1])) ops.push({ t: '-', s: a[i++], ...at });
+    else ops.push({ t: '+', s: b[j++], ...at });
   }
   const out = [`--- a/${file}`, `+++ b/${file}`];
   let k = 0;

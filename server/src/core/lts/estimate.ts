@@ -65,6 +65,7 @@ function endsShortClosed(spelling: string): boolean {
  * a stem that lost its final e ("bak-ing" from "bake"), and a stem whose final consonant was
  * doubled ("runn-ing" from "run"). A short closed bare stem is tried after its e form, since
  * English doubles the consonant after a short vowel: "baking" comes from "bake", not "bak".
+ * A remainder ending in a vowel letter is taken as it is ("sne" + e would make "sneer" a snee-er).
  */
 function stemSpellings(base: string): string[] {
   const out: string[] = [];
@@ -90,7 +91,7 @@ function past(phones: string[]): string[] {
   return [...phones, 'D'];
 }
 
-/** Replaces a stem's final IY (the y of "happy") before a suffix spelt with i ("happier"). */
+/** Removes a stem's final IY (the y of "happy"), which a suffix spelt with i re-adds ("happier"). */
 function withoutFinalY(phones: string[]): string[] {
   const last = phones[phones.length - 1];
   return last !== undefined && last.startsWith('IY') ? phones.slice(0, -1) : phones;
@@ -170,13 +171,23 @@ function trySuffixes(word: string, data: WordData, depth: number): Analysis | un
   return undefined;
 }
 
-/** Two listed words of three letters or more, the longest first part preferred. */
+/** True when a cut between `first` and `second` splits a spelling digraph (s|h, t|h, c|h, p|h, w|h, g|h). */
+function splitsDigraph(first: string, second: string): boolean {
+  return second[0] === 'h' && /[cgpstw]$/.test(first);
+}
+
+/**
+ * Two listed words of three letters or more, the longest first part preferred; a cut that splits
+ * a digraph is taken only when no other cut works ("black" + "shire" before "blacks" + "hire",
+ * but "dog" + "house" when that is the only reading).
+ */
 function tryCompound(word: string, data: WordData): Analysis | undefined {
+  let fallback: Analysis | undefined;
   for (let cut = word.length - 3; cut >= 3; cut--) {
     const first = word.slice(0, cut);
     const second = word.slice(cut);
-    // Never split a digraph ("blacks" + "hire" is black-shire).
-    if (second[0] === 'h' && /[cgpstw]$/.test(first)) continue;
+    const digraph = splitsDigraph(first, second);
+    if (digraph && fallback !== undefined) continue;
     // Both parts must be words people say (seen in SUBTLEX-US): the dictionary also lists
     // fragments and rare names ("lep", "hege") that make false compounds.
     if (data.count(first) === 0 || data.count(second) === 0) continue;
@@ -184,9 +195,11 @@ function tryCompound(word: string, data: WordData): Analysis | undefined {
     if (a === undefined) continue;
     const b = stem(second, data);
     if (b === undefined) continue;
-    return { phones: [...a, ...secondary(b)], how: `compound '${first}' + '${second}'` };
+    const found = { phones: [...a, ...secondary(b)], how: `compound '${first}' + '${second}'` };
+    if (!digraph) return found;
+    fallback = found;
   }
-  return undefined;
+  return fallback;
 }
 
 function analyse(word: string, data: WordData, depth: number): Analysis | undefined {

@@ -201,7 +201,10 @@ function assignStress(phones: string[], starts: number[], letters: string): stri
   let prefixLength = 0;
   if (vowelIndexes.length > 1) {
     for (const prefix of UNSTRESSED_PREFIXES) {
-      if (letters.startsWith(prefix) && letters.length >= prefix.length + 3) prefixLength = prefix.length;
+      if (!letters.startsWith(prefix) || letters.length < prefix.length + 3) continue;
+      // A lone a- is a prefix only before one consonant and a vowel (about, alone; not apple).
+      if (prefix === 'A' && !/^A[^AEIOUY][AEIOUY]/.test(letters)) continue;
+      prefixLength = prefix.length;
     }
   }
   const candidates = vowelIndexes.filter((k) => !/\d$/.test(phones[k]));
@@ -214,12 +217,13 @@ function assignStress(phones: string[], starts: number[], letters: string): stri
   });
 }
 
+/** Reads a spelling letter by letter, as an abbreviation. */
 function spellOut(letters: string): string[] {
   const phones: string[] = [];
   const names = [...letters].filter((c) => LETTER_NAMES[c] !== undefined);
   names.forEach((c, k) => {
-    // The last letter name takes the primary stress, the others secondary ("dnc" = D IY1 EH2 N S IY2
-    // in CMU puts it first, but both patterns occur; the count of syllables is what matters here).
+    // The last letter name takes the primary stress and the others secondary, as in CMU's "cd"
+    // (S IY2 D IY1); CMU is not consistent here ("dnc" = D IY1 EH2 N S IY2).
     const last = k === names.length - 1;
     for (const phone of LETTER_NAMES[c]) phones.push(phone.replace('1', last ? '1' : '2'));
   });

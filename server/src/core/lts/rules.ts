@@ -21,8 +21,17 @@
 //   @    a consonant after which long U loses its glide (T S R D L Z N J TH CH SH)
 // Vowels are A E I O U; Y counts as a consonant in contexts.
 //
+// The table below has 312 rules: the report's rules written with its @ and & classes (some
+// transcriptions, such as J. A. Wasser's public-domain english.c that this one was checked
+// against, spell those classes out letter by letter). The report counts 329; the difference has
+// not been reconciled rule by rule against the scanned report.
+//
 // Departures from the report are kept apart, in `AMENDMENTS`, each with its reason; they are tried
-// before the published rules of the same letter. None of them names a particular word.
+// before the published rules of the same letter. None of them names a particular word. The rule
+// engine (letterToSound.ts) departs in four documented ways too: the % suffix must end the word,
+// Y after a consonant counts as a vowel in contexts, a doubled consonant sounds once, and a
+// spelling with no vowel letter is read as letter names. Each was kept because it raised the
+// syllable-count agreement with the CMU dictionary over all its plain words.
 
 /** One parsed rule. Letters are upper case; `phones` are CMU ARPAbet (see `NRL_TO_CMU`). */
 export interface LtsRule {

@@ -1,0 +1,161 @@
+// `rungs lint PATH|GLOB|- ...`: checks scripts against every rule, for people and for CI.
+// Exit codes: 0 clean, 1 an error-level problem or more warnings than --max-warnings, 2 a usage
+// error or an unreadable file (every other file is still linted and reported).
+import { join, relative, sep } from 'node:path';
+import { analyze } from '../core/analyze';
+import type { Problem, WordData } from '../core/types';
+import { resolveScriptContext, type ScriptContext } from '../config/resolve';
+import { loadWordTable } from '../data/wordTable';
+import { RULES, compareProblems, lint } from '../rules/index';
+import { applyFixes } from '../rules/fixes';
+import { parseArgs } from './args';
+import { expandPaths } from './files';
+import { unifiedDiff } from './formats/diff';
+import { formatGithub } from './formats/github';
+import { formatLintJson } from './formats/json';
+import { formatSarif } from './formats/sarif';
+import { formatText } from './formats/text';
+import type { LintFileResult, LintRun } from './formats/types';
+import { EXIT_OK, EXIT_PROBLEMS, EXIT_USAGE, UsageError, type CliIO } from './io';
+import { VERSION, type Command } from './main';
+
+export const FORMATS = ['text', 'json', 'sarif', 'github'] as const;
+/** Runs of at least this many files show a progress counter (on a terminal, outside CI). */
+export const PROGRESS_MIN_FILES = 10;
+/** Fixes can enable others (a sorted rung after a removed duplicate): re-lint up to this often. */
+const FIX_PASSES = 5;
+
+const USAGE = [
+  'Usage: rungs lint PATH|GLOB|- ... [--format text|json|sarif|github] [--max-warnings N]',
+  '                  [--fix | --fix-dry-run] [--quiet] [--color | --no-color] [--no-gitignore]',
+  '',
+  '  Folders are searched for *.rungs files (skipping .gitignore\'d, dot and node_modules paths);',
+  '  globs such as "scripts/**/*.rungs" are matched below their folder; "-" reads standard input.',
+  '  --format        text (default: file:line:col severity rule message), json, sarif (SARIF 2.1.0),',
+  '                  github (GitHub Actions annotations)',
+  '  --max-warnings  exit 1 when there are more warnings than N',
+  '  --fix           apply mechanical fixes in place, then report what is left',
+  '  --fix-dry-run   print the fixes as a unified diff; change nothing',
+  '  --quiet         report errors only, and no progress counter',
+  '  Exit codes: 0 clean, 1 errors (or too many warnings), 2 usage error or unreadable file.',
+].join('\n');
+
+interface Checked {
+  problems: Problem[];
+  text: string;
+}
+
+function check(text: string, data: WordData, ctx: ScriptContext): Checked {
+  const analysis = analyze({ text, data, options: ctx.options, lexicon: ctx.lexicon });
+  return { problems: lint(analysis, text, ctx.lint), text };
+}
+
+/** Applies fixes until none is left (or FIX_PASSES runs), re-linting between passes. */
+function fixAll(first: Checked, data: WordData, ctx: ScriptContext): Checked {
+  let cur = first;
+  for (let pass = 0; pass < FIX_PASSES; pass++) {
+    const fixes = cur.problems.flatMap((p) => (p.fix ? [p.fix] : []));
+    if (!fixes.length) break;
+    const { text } = applyFixes(cur.text, fixes);
+    if (text === cur.text) break;
+    cur = check(text, data, ctx);
+  }
+  return cur;
+}
+
+const shown = (cwd: string, file: string) => (file === '-' ? '<stdin>' : relative(cwd, file).split(sep).join('/') || file);
+
+export const lintCommand: Command = {
+  name: 'lint',
+  summary: 'check scripts: ladder shape, items, paces, format (text, JSON, SARIF, GitHub)',
+  usage: USAGE,
+  run(io: CliIO, argv: string[]): number {
+    const args = parseArgs(argv, {
+      format: { value: true, choices: [...FORMATS], alias: 'f' },
+      'max-warnings': { value: true },
+      fix: {},
+      'fix-dry-run': {},
+      quiet: { alias: 'q' },
+      color: {},
+      'no-color': {},
+      'no-gitignore': {},
+    });
+    if (!args.positionals.length) throw new UsageError('give at least one script, folder or glob (or "-" for standard input)');
+    const format = (args.flags.get('format') as (typeof FORMATS)[number] | undefined) ?? 'text';
+    const maxRaw = args.flags.get('max-warnings');
+    const maxWarnings = maxRaw === undefined ? Infinity : Number(maxRaw);
+    if (!Number.isInteger(maxWarnings) && maxWarnings !== Infinity) throw new UsageError(`--max-warnings takes a whole number, not "${String(maxRaw)}"`);
+    if (maxWarnings < 0) throw new UsageError('--max-warnings takes a number, 0 or more');
+    const fix = args.flags.has('fix');
+    const dryRun = args.flags.has('fix-dry-run');
+    if (fix && dryRun) throw new UsageError('use either --fix or --fix-dry-run');
+    if (fix && args.positionals.includes('-')) throw new UsageError('--fix cannot write to standard input; use --fix-dry-run');
+    const quiet = args.flags.has('quiet');
+    const env = io.env ?? {};
+    const colour = args.flags.has('color') || (!args.flags.has('no-color') && Boolean(io.isTTY) && !env.NO_COLOR && format === 'text');
+
+    const { files, missing } = expandPaths(args.positionals, io.cwd, io.fs, { gitignore: !args.flags.has('no-gitignore') });
+    let code = EXIT_OK;
+    for (const m of missing) {
+      io.stderr(`rungs lint: ${m}: no such file or folder, or no *.rungs file matches\n`);
+      code = EXIT_USAGE;
+    }
+    if (!files.length) {
+      if (!missing.length) io.stderr('rungs lint: no *.rungs files found\n');
+      return EXIT_USAGE;
+    }
+
+    const progress = Boolean(io.isTTY) && !env.CI && !quiet && files.length >= PROGRESS_MIN_FILES;
+    const data = loadWordTable();
+    const results: LintFileResult[] = [];
+    const configProblems = new Map<string, Map<string, Problem>>();
+    const diffs: string[] = [];
+    files.forEach((file, n) => {
+      if (progress) io.stderr(`\rrungs lint: ${n + 1}/${files.length} files`);
+      const name = shown(io.cwd, file);
+      let text: string;
+      try {
+        text = file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
+      } catch (err) {
+        io.stderr(`${progress ? '\r\u001b[K' : ''}rungs lint: ${name}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
+        code = EXIT_USAGE;
+        return;
+      }
+      const ctx = resolveScriptContext(file === '-' ? join(io.cwd, 'stdin.rungs') : file, io.fs);
+      for (const { file: cf, problem } of ctx.problems) {
+        const key = shown(io.cwd, cf);
+        const seen = configProblems.get(key) ?? new Map<string, Problem>();
+        seen.set(JSON.stringify(problem), problem);
+        configProblems.set(key, seen);
+      }
+      let checked = check(text, data, ctx);
+      if (fix || dryRun) {
+        const fixed = fixAll(checked, data, ctx);
+        if (fixed.text !== text) {
+          if (fix) io.fs.writeFile(file, fixed.text);
+          else diffs.push(unifiedDiff(name, text, fixed.text));
+        }
+        checked = fixed;
+      }
+      results.push({ file: name, problems: checked.problems });
+    });
+    if (progress) io.stderr('\r\u001b[K');
+    for (const [file, ps] of configProblems) results.push({ file, problems: [...ps.values()].sort(compareProblems) });
+    for (const r of results) if (quiet) r.problems = r.problems.filter((p) => p.severity === 'error');
+    results.sort((a, b) => (a.file === '<stdin>' ? 1 : b.file === '<stdin>' ? -1 : a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
+
+    const run: LintRun = { version: VERSION, results };
+    if (dryRun) io.stdout(diffs.join(''));
+    else if (format === 'json') io.stdout(formatLintJson(run));
+    else if (format === 'sarif') io.stdout(formatSarif(run, RULES));
+    else if (format === 'github') io.stdout(formatGithub(run));
+    else io.stdout(formatText(run, colour));
+
+    const all = results.flatMap((r) => r.problems);
+    const errors = all.filter((p) => p.severity === 'error').length;
+    const warnings = all.filter((p) => p.severity === 'warning').length;
+    if (warnings > maxWarnings) io.stderr(`rungs lint: ${warnings} warnings, more than --max-warnings ${maxWarnings}\n`);
+    if (code === EXIT_OK && (errors > 0 || warnings > maxWarnings)) code = EXIT_PROBLEMS;
+    return code;
+  },
+};

@@ -1,0 +1,108 @@
+// The config resolver: files found by walking up, nearer over farther, `root: true` stops the
+// walk, header over config over editor settings over defaults, and bad config reported with
+// file, line and column.
+import { describe, expect, it } from 'vitest';
+import { clearConfigCache, parseConfigText, resolveScriptContext } from '../../server/src/config/resolve';
+import { analyze } from '../../server/src/core/analyze';
+import { MemFs } from '../cli/memfs';
+import { words } from '../helpers/data';
+
+const at = (p: { file: string; problem: { line: number; character: number; rule: string; message: string } }) =>
+  `${p.file}:${p.problem.line + 1}:${p.problem.character + 1} ${p.problem.rule} ${p.problem.message}`;
+
+describe('resolveScriptContext', () => {
+  it('merges config files from the script folder up, the nearer winning', () => {
+    clearConfigCache();
+    const fs = new MemFs({
+      '/lib/.rungs.yaml': 'max-step: 20\nmin-items: 5\nrules:\n  thin-rung: error\n  item-outlier: off\n',
+      '/lib/clinic/.rungs.json': '{ "max-step": 9, "rules": { "thin-rung": "info" }, "ladder": { "metric": "syllables" } }',
+      '/lib/clinic/a.rungs': 'Hello.\n',
+    });
+    const ctx = resolveScriptContext('/lib/clinic/a.rungs', fs);
+    expect(ctx.problems).toEqual([]);
+    expect(ctx.configFiles).toEqual(['/lib/.rungs.yaml', '/lib/clinic/.rungs.json']);
+    expect(ctx.options.maxStep).toBe(9);
+    expect(ctx.options.minItems).toBe(5);
+    expect(ctx.lint).toEqual({ severities: { 'thin-rung': 'info', 'item-outlier': 'off' }, ladder: { metric: 'syllables' } });
+  });
+
+  it('stops at root: true and takes the first file name per folder', () => {
+    clearConfigCache();
+    const fs = new MemFs({
+      '/lib/.rungs.json': '{ "min-items": 7 }',
+      '/lib/team/.rungs.json': '{ "root": true, "max-step": 11 }',
+      '/lib/team/.rungs.yaml': 'max-step: 99\n',
+      '/lib/team/x/a.rungs': 'Hello.\n',
+    });
+    const ctx = resolveScriptContext('/lib/team/x/a.rungs', fs);
+    expect(ctx.configFiles).toEqual(['/lib/team/.rungs.json']);
+    expect(ctx.options.maxStep).toBe(11);
+    expect(ctx.options.minItems).toBe(3);
+  });
+
+  it('layers defaults < editor settings < config files < script header', () => {
+    clearConfigCache();
+    const fs = new MemFs({ '/w/.rungs.yml': 'min-items: 4\n', '/w/a.rungs': '@max-words 6\nHello.\n' });
+    const ctx = resolveScriptContext('/w/a.rungs', fs, {
+      editor: { settings: { 'min-items': 2, 'max-words': 3, 'max-syllables': 9, paces: [1, 2] }, baseDir: '/w' },
+    });
+    expect(ctx.options.minItems).toBe(4);
+    expect(ctx.options.maxWords).toBe(3);
+    expect(ctx.options.maxSyllables).toBe(9);
+    expect(ctx.options.paces.map((p) => p.label)).toEqual(['1 wps', '2 wps']);
+    const a = analyze({ text: fs.readFile('/w/a.rungs'), data: words, options: ctx.options });
+    expect(a.options.maxWords).toBe(6);
+    expect(a.options.minItems).toBe(4);
+  });
+
+  it('reads lexicon files relative to the config file, and reports a missing one', () => {
+    clearConfigCache();
+    const fs = new MemFs({
+      '/w/.rungs.json': '{\n  "lexicon": ["names.lexicon", "gone.lexicon"]\n}',
+      '/w/names.lexicon': '// clinic names\nTeodric = T EY1 OW0 D R IH0 K\nOkafor = OW0 K AA1 F NX\n',
+      '/w/a.rungs': 'Teodric is here.\n',
+    });
+    const ctx = resolveScriptContext('/w/a.rungs', fs);
+    expect(ctx.lexicon.map((o) => o.word)).toEqual(['teodric']);
+    expect(ctx.problems.map(at)).toEqual([
+      '/w/names.lexicon:3:22 unknown-phone "NX" is not a CMU ARPAbet phone: use one of the 39 phones, e.g. AE1, K, NG',
+      '/w/.rungs.json:2:14 bad-config lexicon file "gone.lexicon" does not exist (looked for /w/gone.lexicon)',
+    ]);
+  });
+
+  it('reports bad config with positions, checks values like header values and suggests keys', () => {
+    clearConfigCache();
+    const fs = new MemFs({
+      '/w/.rungs.yaml': 'max-stp: 12\npaces: 90 wpm\nrules:\n  step-backward: error\n  thin-rung: loud\nladder:\n  metric: length\ntitle: nope\n',
+      '/w/a.rungs': 'Hello.\n',
+    });
+    const ctx = resolveScriptContext('/w/a.rungs', fs);
+    expect(ctx.problems.map(at)).toEqual([
+      '/w/.rungs.yaml:1:1 unknown-key unknown key "max-stp"; did you mean "max-step"?',
+      '/w/.rungs.yaml:4:3 bad-config unknown rule "step-backward"; did you mean "step-backwards"?',
+      '/w/.rungs.yaml:5:14 bad-config the severity of "thin-rung" is one of error, warning, info, hint, off, not "loud"',
+      '/w/.rungs.yaml:7:11 bad-config ladder metric is one of difficulty, words, syllables, phonemes, wcm, rarity, not "length"',
+      '/w/.rungs.yaml:8:1 bad-value "title" belongs in a script, not in a config file',
+      '/w/.rungs.yaml:2:8 bad-value pace 90 is not a plausible speech rate (above 20 per second)',
+    ]);
+    const fix = ctx.problems[0].problem.fix!;
+    expect(fix.edits).toEqual([{ line: 0, character: 0, endLine: 0, endCharacter: 7, newText: 'max-step' }]);
+    expect(ctx.options.paces.map((p) => p.label)).toEqual(['1 wps', '1.5 wps', '2 wps']);
+  });
+
+  it('reports a YAML syntax error at its line and column and keeps the defaults', () => {
+    const layer = parseConfigText('max-step: 12\nrules: [unclosed\n', '/w/.rungs.yaml');
+    expect(layer.problems.map((p) => `${p.line + 1}:${p.character + 1} ${p.rule} ${p.message}`)).toEqual([
+      '3:1 bad-config cannot read the config file: Flow sequence in block collection must be sufficiently indented and end with a ]',
+    ]);
+    expect(layer.settings).toEqual([]);
+  });
+
+  it('parses a changed file again but reuses an unchanged one', () => {
+    clearConfigCache();
+    const fs = new MemFs({ '/w/.rungs.json': '{"max-step": 5}', '/w/a.rungs': 'Hello.\n' });
+    expect(resolveScriptContext('/w/a.rungs', fs).options.maxStep).toBe(5);
+    fs.files.set('/w/.rungs.json', '{"max-step": 6}');
+    expect(resolveScriptContext('/w/a.rungs', fs).options.maxStep).toBe(6);
+  });
+});
