@@ -2,17 +2,8 @@
 // script of the workspace into the Problems panel.
 import * as vscode from 'vscode';
 import { ExecuteCommandRequest, type LanguageClient } from 'vscode-languageclient/node';
-import { LadderRequest, SERVER_SORT_RUNG, type Ladder } from './protocol';
-
-/** The header line of the rung that holds `line`: the last rung starting at or above it. */
-export function rungLineAt(ladder: Ladder | null, line: number): number | null {
-  let best: number | null = null;
-  for (const r of ladder?.rungs ?? []) {
-    const start = Math.min(r.line, ...r.items.map((i) => i.line));
-    if (start <= line && (best === null || r.line > best)) best = r.line;
-  }
-  return best;
-}
+import { rungLineAt } from './present';
+import { LadderRequest, SERVER_SORT_RUNG } from './protocol';
 
 export async function sortCurrentRung(client: LanguageClient, editor: vscode.TextEditor): Promise<void> {
   const uri = client.code2ProtocolConverter.asUri(editor.document.uri);

@@ -3,17 +3,8 @@
 // that are not items.
 import * as vscode from 'vscode';
 import type { LanguageClient } from 'vscode-languageclient/node';
+import { describeItem } from './present';
 import { ItemAtRequest, type ItemAt } from './protocol';
-
-/** The status bar text and tooltip for an item (pure, so it is unit-tested). */
-export function describeItem(item: ItemAt): { text: string; tooltip: string } {
-  const d = item.difficulty.toFixed(1);
-  const s = item.seconds < 10 ? item.seconds.toFixed(1) : Math.round(item.seconds).toString();
-  return {
-    text: `$(graph-line) ${d} · ${s} s @ ${item.pace}`,
-    tooltip: `Difficulty ${d} (rank ${item.rank} in "${item.rungName}"), ${s} seconds at ${item.pace}. Click to show the ladder.`,
-  };
-}
 
 export class ItemStatus implements vscode.Disposable {
   private readonly item: vscode.StatusBarItem;

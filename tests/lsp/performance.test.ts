@@ -1,5 +1,6 @@
 // Over the protocol: a 10,000-item script opened in the server, one character typed, then a
-// hover. The hover must answer for the new text (never a stale analysis). Times are printed.
+// hover. The hover must answer for the new text (never a stale analysis). Times are printed for
+// people; speed targets belong to `npm run bench`, so nothing here asserts a time.
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -41,5 +42,4 @@ it('a 10,000-item script stays responsive: edit then hover', async () => {
     `10,000 items over LSP: open to first diagnostics ${openMs.toFixed(0)} ms; one-character edit then hover ` +
       `${median.toFixed(0)} ms (median of 5, includes re-analysis and lint); hover on an unchanged version ${cachedMs.toFixed(1)} ms`,
   );
-  expect(median).toBeLessThan(3000);
 });

@@ -33,11 +33,31 @@ export interface AnalyzeInput {
    * per document so unchanged words are not scored again). Used only when its key matches.
    */
   reuse?: { key: string; pronouncer: Pronouncer };
+  /**
+   * Item analyses of the previous run of the same document. Items whose text, indentation and
+   * paces are unchanged are taken from it instead of being tokenised and scored again, so a
+   * one-character edit of a 10,000-item script re-scores one item.
+   */
+  itemCache?: ItemCache;
 }
 
 export interface AnalyzeOutput extends Analysis {
   /** The pronouncer used, with a key for reuse on the next analysis. */
   pronouncer: { key: string; pronouncer: Pronouncer };
+  /** The item cache to pass to the next analysis of the same document. */
+  itemCache: ItemCache;
+}
+
+interface CachedItem {
+  item: ItemAnalysis;
+  /** Problems found while scoring the item (their line is rewritten on reuse). */
+  problems: Problem[];
+}
+
+export interface ItemCache {
+  /** Everything besides an item's own text that its analysis depends on. */
+  context: string;
+  entries: Map<string, CachedItem>;
 }
 
 /**
@@ -182,6 +202,13 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
     }
   }
 
+  const context = `${key}|${options.baseline}|${options.readingNormWps}|${JSON.stringify(options.weights)}`;
+  const previous =
+    input.itemCache && input.itemCache.context === context && pronouncer === input.reuse?.pronouncer
+      ? input.itemCache.entries
+      : undefined;
+  const entries = new Map<string, CachedItem>();
+
   const rungs: RungAnalysis[] = [];
   const items: ItemAnalysis[] = [];
   script.rungs.forEach((node, index) => {
@@ -190,7 +217,21 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
     const explicitPaces = node.settings.some((s) => s.key === 'pace' || s.key === 'paces');
     const paces = explicitPaces ? rungSettings.options.paces : options.paces;
     node.paces = explicitPaces ? paces : null;
-    const rungItems = node.items.map((it) => analyzeItem(it, index, paces, options, pronouncer, problems));
+    const pacesKey = paces.map((p) => p.label).join(',');
+    const rungItems = node.items.map((it) => {
+      const itemKey = `${pacesKey}\u0001${it.textStart}\u0001${it.text}`;
+      const hit = entries.get(itemKey) ?? previous?.get(itemKey);
+      if (hit) {
+        entries.set(itemKey, hit);
+        for (const p of hit.problems) problems.push({ ...p, line: it.line, endLine: it.line });
+        return { ...hit.item, node: it, rung: index, rank: 0 };
+      }
+      const own: Problem[] = [];
+      const item = analyzeItem(it, index, paces, options, pronouncer, own);
+      entries.set(itemKey, { item, problems: own });
+      problems.push(...own);
+      return item;
+    });
     rankItems(rungItems);
     const ds = rungItems.map((i) => i.difficulty);
     rungs.push({
@@ -199,13 +240,13 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
       paces,
       items: rungItems,
       median: median(ds),
-      min: ds.length ? Math.min(...ds) : 0,
-      max: ds.length ? Math.max(...ds) : 0,
+      min: ds.reduce((m, d) => Math.min(m, d), ds.length ? Infinity : 0),
+      max: ds.reduce((m, d) => Math.max(m, d), ds.length ? -Infinity : 0),
       totalSeconds: paces.map((_, pi) => rungItems.reduce((sum, it) => sum + it.timings[pi].seconds, 0)),
     });
     items.push(...rungItems);
   });
 
   problems.sort((a, b) => a.line - b.line || a.character - b.character);
-  return { script, options, rungs, items, problems, pronouncer: { key, pronouncer } };
+  return { script, options, rungs, items, problems, pronouncer: { key, pronouncer }, itemCache: { context, entries } };
 }
