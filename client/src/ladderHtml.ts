@@ -40,7 +40,7 @@ export function renderLadderBody(ladder: Ladder | null): string {
   const out: string[] = [];
   const label = ladder.title ? `Difficulty ladder of ${ladder.title}` : 'Difficulty ladder';
   out.push(
-    `<svg class="ladder" viewBox="0 0 ${width} ${PLOT.height}" width="${width}" height="${PLOT.height}" role="img" aria-label="${escapeHtml(label)}">`,
+    `<svg class="ladder" viewBox="0 0 ${width} ${PLOT.height}" width="100%" preserveAspectRatio="xMinYMin meet" role="img" aria-label="${escapeHtml(label)}">`,
   );
 
   // Grid and axis: difficulty runs 0-100 bottom to top.
@@ -134,7 +134,8 @@ export function renderLadderBody(ladder: Ladder | null): string {
 const STYLE = `
 body { font-family: var(--vscode-font-family); font-size: var(--vscode-font-size); color: var(--vscode-foreground); background: var(--vscode-editor-background); padding: 8px 16px; }
 h1 { font-size: 1.1em; font-weight: 600; margin: 4px 0 8px; }
-.chart { overflow-x: auto; }
+.chart { max-width: 1100px; }
+svg.ladder { display: block; max-height: 70vh; }
 svg.ladder text { fill: var(--vscode-foreground); font-size: 11px; }
 svg.ladder .axis { fill: var(--vscode-descriptionForeground); }
 svg.ladder .grid { stroke: var(--vscode-editorWidget-border, var(--vscode-panel-border)); stroke-width: 1; opacity: 0.5; }

@@ -41,3 +41,37 @@ describe('SARIF output', () => {
     expect(run.results.filter((r: { level: string }) => r.level === 'note').map((r: { ruleId: string }) => r.ruleId)).toEqual(Array(5).fill('unsorted-rung'));
   });
 });
+
+// The SARIF 2.1.0 JSON schema as published on SchemaStore (sarif-2.1.0-rtm.5.json, the schema the
+// SARIF 2.1.0 standard's logs reference), shipped in the npm package @microsoft/jest-sarif@1.0.0-beta.0
+// (lib/schemas/). It is draft-04, so it is read with ajv-draft-04 plus ajv-formats.
+import Ajv04 from 'ajv-draft-04';
+import addFormats from 'ajv-formats';
+
+describe('SARIF output against the SARIF 2.1.0 JSON schema', () => {
+  const schemaPath = join(__dirname, '..', '..', 'node_modules', '@microsoft', 'jest-sarif', 'lib', 'schemas', 'sarif-2.1.0-rtm.5.json');
+  const schema = JSON.parse(readFileSync(schemaPath, 'utf8'));
+  // One pattern in the published schema (language tags) is not a valid Unicode-mode regular expression.
+  const ajv = new Ajv04({ allErrors: true, strict: false, unicodeRegExp: false });
+  addFormats(ajv);
+  const validate = ajv.compile(schema);
+
+  it('the schema is the SARIF 2.1.0 one and rejects a broken log', () => {
+    expect(schema.title).toContain('SARIF) Version 2.1.0');
+    expect(validate({ version: '2.1.0', runs: [{ tool: { driver: {} } }] })).toBe(false);
+    expect(validate({ version: '2.0.0', runs: [] })).toBe(false);
+  });
+
+  it('validates the demo script\'s log, fixes and related locations included', async () => {
+    const { log } = await sarif({ 'scripts/family visits.rungs': demo });
+    const ok = validate(log);
+    expect(validate.errors ?? []).toEqual([]);
+    expect(ok).toBe(true);
+  });
+
+  it('validates a clean run too', async () => {
+    const { code, log } = await sarif({ 'a.rungs': '== One\nThank you.\nGood morning.\nSee you soon.\n' });
+    expect(code).toBe(0);
+    expect(validate(log)).toBe(true);
+  });
+});

@@ -11,11 +11,13 @@ export const thinRung: Rule = {
     'A level needs enough items for practice and for a stable median. Every rung with fewer items',
     'than `@min-items` (default 3; 0 turns the check off) is reported on its header with the count',
     'and the minimum. An empty rung is reported too. Fix it by adding items or by merging the rung',
-    'into a neighbour.',
+    'into a neighbour. A script without rung headers is a plain list, not a ladder, and is not checked.',
   ].join(' '),
   check(ctx, report) {
     const min = ctx.analysis.options.minItems;
     if (!(min > 0)) return;
+    // A file of bare sentences is one implicit rung: a list to score, not a ladder to grade.
+    if (ctx.analysis.rungs.length === 1 && ctx.analysis.rungs[0].node.implicit) return;
     for (const r of ctx.analysis.rungs) {
       const n = r.items.length;
       if (n >= min) continue;
