@@ -60,11 +60,13 @@ export class WorkspaceCheck implements vscode.Disposable {
         }
       },
     );
-    const choice = await vscode.window.showInformationMessage(
-      `Rungs: scored ${files.length} script${files.length === 1 ? '' : 's'}; their problems are in the Problems panel.`,
-      'Show Problems',
-    );
-    if (choice) await vscode.commands.executeCommand('workbench.actions.view.problems');
+    // Not awaited: the message stays until dismissed, and the command is done already.
+    void vscode.window
+      .showInformationMessage(
+        `Rungs: scored ${files.length} script${files.length === 1 ? '' : 's'}; their problems are in the Problems panel.`,
+        'Show Problems',
+      )
+      .then((choice) => choice && vscode.commands.executeCommand('workbench.actions.view.problems'));
     return files.length;
   }
 

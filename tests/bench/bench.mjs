@@ -48,10 +48,11 @@ for (let i = 0; i < RUNS; i++) {
 
 // 2. Analysis of the generated script in-process, after the tables are loaded, vs the floor's
 //    lookups of every word of the same script (in its own process, after its load).
-const { analyze } = requireCore();
+const { analyze, lint } = requireCore();
 const { loadWordTable } = requireData();
 const text = generateScript(ITEMS);
 const analysis = [];
+const linting = [];
 const floorLookups = [];
 let items = 0;
 let words = 0;
@@ -61,6 +62,9 @@ for (let i = 0; i < RUNS; i++) {
   const t = performance.now();
   const a = analyze({ text, data: table });
   analysis.push(performance.now() - t);
+  const tl = performance.now();
+  lint(a, text);
+  linting.push(performance.now() - tl);
   items = a.items.length;
   words = a.items.reduce((n, it) => n + it.wordCount, 0);
   floorLookups.push(JSON.parse(wall([join(root, 'tests/bench/floor.mjs'), big]).out).lookupMs);
@@ -82,3 +86,4 @@ console.log(row('start-up minus bare node', median(startup) - nodeMs, median(flo
 console.log(`${'  (floor load inside its process)'.padEnd(34)} ${median(floorLoadInner).toFixed(1).padStart(8)} ms;  bare \`node -e 0\` ${nodeMs.toFixed(1)} ms`);
 console.log(row('analysis of the whole script', median(analysis), median(floorLookups), '2x'));
 console.log(`${'  per item'.padEnd(34)} ${((1000 * median(analysis)) / items).toFixed(2).padStart(8)} µs`);
+console.log(row('every rule on the analysis (lint)', median(linting), median(floorLookups)));

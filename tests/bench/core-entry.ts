@@ -1,3 +1,4 @@
 // What the benchmark needs from the server, bundled to dist/bench-core.js by the build.
 export { analyze } from '../../server/src/core/analyze';
 export { loadWordTable } from '../../server/src/data/wordTable';
+export { lint } from '../../server/src/rules/index';

@@ -11,15 +11,28 @@ export function mulberry32(seed) {
   };
 }
 
-const SUBJECTS = ['I', 'We', 'My sister', 'The nurse', 'Our neighbour', 'Grandpa', 'The children', 'You'];
-const VERBS = ['want', 'need', 'like', 'bought', 'found', 'carried', 'remember', 'cooked', 'painted', 'washed'];
+const SUBJECTS = [
+  'I', 'We', 'My sister', 'The nurse', 'Our neighbour', 'Grandpa', 'The children', 'You', 'My brother',
+  'The driver', 'Aunt Rosa', 'The therapist', 'Our son', 'The baker', 'My friend', 'The twins',
+];
+const VERBS = [
+  'want', 'need', 'like', 'bought', 'found', 'carried', 'remember', 'cooked', 'painted', 'washed',
+  'ordered', 'forgot', 'borrowed', 'packed', 'fixed', 'dropped', 'wrapped', 'picked up', 'chose', 'counted',
+];
 const OBJECTS = [
   'the bread', 'a cup of tea', 'the blue umbrella', 'some oranges', 'the newspaper', 'my glasses',
   'a warm blanket', 'the telephone', 'two tickets', 'the vegetables', 'a birthday cake', 'the keys',
+  'the heavy suitcase', 'a jar of honey', 'the photographs', 'some fresh flowers', 'the red scarf',
+  'a pair of gloves', 'the grocery list', 'three envelopes', 'the old radio', 'a loaf of bread',
+  'the garden hose', 'my medicine', 'the crossword', 'a basket of apples', 'the television remote',
+  'a new toothbrush', 'the library books', 'the spare batteries',
 ];
 const TAILS = [
   '', 'today', 'this morning', 'at 3:30', 'after lunch', 'before the appointment', 'with Dr. Patel',
   'for the grandchildren', 'on Saturday afternoon', 'near the library', 'in the garden', 'again',
+  'yesterday', 'last week', 'at the market', 'for the picnic', 'before dinner', 'by the front door',
+  'on the way home', 'at 10:15', 'for Mrs. Okafor', 'in the kitchen', 'after the rain', 'quickly',
+  'on Tuesday',
 ];
 
 export function generateScript(items, seed = 20261201) {

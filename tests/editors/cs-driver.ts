@@ -58,7 +58,7 @@ export interface DriverReport {
   runDir: string;
 }
 
-const freePort = (): Promise<number> =>
+export const freePort = (): Promise<number> =>
   new Promise((resolve, reject) => {
     const s = net.createServer();
     s.unref();
@@ -81,7 +81,7 @@ const status = (url: string): Promise<number> =>
   });
 
 /** Waits for code-server's /healthz, polling its port (the only way to know it is listening). */
-async function waitHealthy(server: ChildProcess, port: number, logFile: string, ms = 60_000): Promise<void> {
+export async function waitHealthy(server: ChildProcess, port: number, logFile: string, ms = 60_000): Promise<void> {
   const t0 = Date.now();
   for (;;) {
     if ((await status(`http://127.0.0.1:${port}/healthz`)) === 200) return;
@@ -150,35 +150,8 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
   const udd = join(run, 'user-data');
   const ext = join(run, 'extensions');
   // Keep code-server (config.yaml, logs) and Chromium (crash reports) out of $HOME.
-  const env: NodeJS.ProcessEnv = { ...process.env, VSCODE_PROXY_URI: '' };
-  for (const k of ['CONFIG', 'DATA', 'CACHE', 'STATE']) env[`XDG_${k}_HOME`] = join(run, 'xdg', k.toLowerCase());
-  mkdirSync(join(udd, 'User'), { recursive: true });
-  writeFileSync(
-    join(udd, 'User', 'settings.json'),
-    JSON.stringify(
-      {
-        'workbench.startupEditor': 'none',
-        'security.workspace.trust.enabled': false,
-        'telemetry.telemetryLevel': 'off',
-        'update.mode': 'none',
-        'extensions.autoCheckUpdates': false,
-        'extensions.autoUpdate': false,
-        'extensions.ignoreRecommendations': true,
-        'workbench.enableExperiments': false,
-        'workbench.tips.enabled': false,
-        'chat.commandCenter.enabled': false,
-        'editor.hover.delay': 100,
-        'editor.minimap.enabled': false,
-        'window.restoreWindows': 'none',
-        'workbench.colorTheme': 'Default Dark Modern',
-        // The scratch workspace sits inside the project's git work tree; keep git quiet about it.
-        'git.enabled': false,
-        'git.openRepositoryInParentFolders': 'never',
-      },
-      null,
-      2,
-    ),
-  );
+  const env = isolatedEnv(run);
+  writeUserSettings(udd);
   const common = ['--config', join(run, 'config.yaml'), '--user-data-dir', udd, '--extensions-dir', ext];
   const installed = execFileSync(o.codeServer, [...common, '--install-extension', o.vsix], { encoding: 'utf8', env })
     .trim()
@@ -186,31 +159,13 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
     .pop()!;
   log('install-extension:', installed);
   lap('installExtension');
-
-  const port = await freePort();
-  const logFile = join(run, 'code-server.log');
-  const server = spawn(
-    o.codeServer,
-    [...common, '--bind-addr', `127.0.0.1:${port}`, '--auth', 'none', '--disable-telemetry', '--disable-update-check',
-      '--disable-workspace-trust', '--disable-getting-started-override', '--ignore-last-opened', o.workspace],
-    { stdio: ['ignore', 'pipe', 'pipe'], env },
-  );
-  const srvLog = createWriteStream(logFile);
-  server.stdout!.pipe(srvLog);
-  server.stderr!.pipe(srvLog);
+  const { server, port, logFile } = await startCodeServer(o.codeServer, common, o.workspace, env, run);
   let ctx: BrowserContext | undefined;
   const consoleLines: string[] = [];
   const screenshots: string[] = [];
   try {
-    await waitHealthy(server, port, logFile);
     lap('serverUp');
-    ctx = await chromium.launchPersistentContext(join(run, 'chrome'), {
-      executablePath: o.chromium,
-      headless: true,
-      viewport: { width: 1440, height: 900 },
-      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-        '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-    });
+    ctx = await launchChromium(o.chromium, run);
     const page = ctx.pages()[0] ?? (await ctx.newPage());
     page.on('console', (m) => consoleLines.push(`${m.type()}: ${m.text()}`));
     page.on('pageerror', (e) => consoleLines.push(`pageerror: ${e.message}`));
@@ -334,18 +289,98 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
   } finally {
     writeFileSync(join(run, 'browser-console.log'), consoleLines.join('\n'));
     if (ctx) await ctx.close().catch(() => undefined);
-    if (server.exitCode === null) {
-      server.kill('SIGTERM');
-      await new Promise<void>((resolve) => {
-        const k = setTimeout(() => {
-          server.kill('SIGKILL');
-          resolve();
-        }, 5000);
-        server.on('exit', () => {
-          clearTimeout(k);
-          resolve();
-        });
-      });
-    }
+    await stopCodeServer(server);
+  }}
+
+/** Environment for code-server and its extension host with config, data and logs kept in `run`. */
+export function isolatedEnv(run: string): NodeJS.ProcessEnv {
+  const env: NodeJS.ProcessEnv = { ...process.env, VSCODE_PROXY_URI: '' };
+  for (const k of ['CONFIG', 'DATA', 'CACHE', 'STATE']) env[`XDG_${k}_HOME`] = join(run, 'xdg', k.toLowerCase());
+  return env;
+}
+
+/** User settings that silence the welcome page, trust prompts, telemetry, updates and git. */
+export function writeUserSettings(udd: string): void {
+  mkdirSync(join(udd, 'User'), { recursive: true });
+  writeFileSync(
+    join(udd, 'User', 'settings.json'),
+    JSON.stringify(
+      {
+        'workbench.startupEditor': 'none',
+        'security.workspace.trust.enabled': false,
+        'telemetry.telemetryLevel': 'off',
+        'update.mode': 'none',
+        'extensions.autoCheckUpdates': false,
+        'extensions.autoUpdate': false,
+        'extensions.ignoreRecommendations': true,
+        'workbench.enableExperiments': false,
+        'workbench.tips.enabled': false,
+        'chat.commandCenter.enabled': false,
+        'editor.hover.delay': 100,
+        'editor.minimap.enabled': false,
+        'window.restoreWindows': 'none',
+        'workbench.colorTheme': 'Default Dark Modern',
+        // The scratch workspace sits inside the project's git work tree; keep git quiet about it.
+        'git.enabled': false,
+        'git.openRepositoryInParentFolders': 'never',
+      },
+      null,
+      2,
+    ),
+  );
+}
+
+/** Starts code-server on a free loopback port, auth none, and waits until it answers. */
+export async function startCodeServer(
+  bin: string,
+  common: string[],
+  workspace: string,
+  env: NodeJS.ProcessEnv,
+  run: string,
+): Promise<{ server: ChildProcess; port: number; logFile: string }> {
+  const port = await freePort();
+  const logFile = join(run, 'code-server.log');
+  const server = spawn(
+    bin,
+    [...common, '--bind-addr', `127.0.0.1:${port}`, '--auth', 'none', '--disable-telemetry', '--disable-update-check',
+      '--disable-workspace-trust', '--disable-getting-started-override', '--ignore-last-opened', workspace],
+    { stdio: ['ignore', 'pipe', 'pipe'], env },
+  );
+  const srvLog = createWriteStream(logFile);
+  server.stdout!.pipe(srvLog);
+  server.stderr!.pipe(srvLog);
+  try {
+    await waitHealthy(server, port, logFile);
+  } catch (e) {
+    server.kill('SIGKILL');
+    throw e;
   }
+  return { server, port, logFile };
+}
+
+/** Headless Debian Chromium with the flags this closed network needs. */
+export function launchChromium(bin: string, run: string): Promise<BrowserContext> {
+  return chromium.launchPersistentContext(join(run, 'chrome'), {
+    executablePath: bin,
+    headless: true,
+    viewport: { width: 1440, height: 900 },
+    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
+      '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+}
+
+/** Stops code-server: SIGTERM, then SIGKILL after 5 s. */
+export async function stopCodeServer(server: ChildProcess): Promise<void> {
+  if (server.exitCode !== null) return;
+  server.kill('SIGTERM');
+  await new Promise<void>((resolve) => {
+    const k = setTimeout(() => {
+      server.kill('SIGKILL');
+      resolve();
+    }, 5000);
+    server.on('exit', () => {
+      clearTimeout(k);
+      resolve();
+    });
+  });
 }
