@@ -71,7 +71,10 @@ export class WorkspaceCheck implements vscode.Disposable {
   }
 
   /** Opens documents and waits (up to 20 s) until the server reports each one analysed. */
-  private async open(uris: vscode.Uri[]): Promise<void> {
+  private async open(all: vscode.Uri[]): Promise<void> {
+    // Documents already open have been analysed and stay so; only the others are waited for.
+    const uris = all.filter((u) => !isOpen(u));
+    for (const u of all) this.checked.add(u.toString());
     const done = uris.map(
       (uri) =>
         new Promise<void>((resolve) => {

@@ -31,8 +31,17 @@ const common = {
   sourcemap: process.env.RUNGS_SOURCEMAP === '1',
   logLevel: 'warning',
 };
+// The CLI loads the language server from its own bundle, only when `rungs lsp` runs.
+const serverAsSibling = {
+  name: 'server-as-sibling',
+  setup(b) {
+    b.onResolve({ filter: /\/lsp\/server$/ }, (args) =>
+      args.importer.includes(`${'cli'}`) ? { path: './server.js', external: true } : undefined,
+    );
+  },
+};
 const entries = [
-  { in: 'server/src/cli/bin.ts', out: 'rungs.js' },
+  { in: 'server/src/cli/bin.ts', out: 'rungs.js', plugins: [serverAsSibling] },
   { in: 'server/src/lsp/main.ts', out: 'server.js' },
   { in: 'client/src/extension.ts', out: 'extension.js', external: ['vscode'] },
   // The benchmark calls the core in-process through this small bundle (not shipped).
@@ -47,6 +56,7 @@ await Promise.all(
         entryPoints: [join(root, e.in)],
         outfile: join(dist, e.out),
         external: e.external ?? [],
+        plugins: e.plugins ?? [],
       }),
     ),
 );

@@ -159,7 +159,7 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
     .pop()!;
   log('install-extension:', installed);
   lap('installExtension');
-  const { server, port, logFile } = await startCodeServer(o.codeServer, common, o.workspace, env, run);
+  const { server, port } = await startCodeServer(o.codeServer, common, o.workspace, env, run);
   let ctx: BrowserContext | undefined;
   const consoleLines: string[] = [];
   const screenshots: string[] = [];
@@ -290,7 +290,8 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
     writeFileSync(join(run, 'browser-console.log'), consoleLines.join('\n'));
     if (ctx) await ctx.close().catch(() => undefined);
     await stopCodeServer(server);
-  }}
+  }
+}
 
 /** Environment for code-server and its extension host with config, data and logs kept in `run`. */
 export function isolatedEnv(run: string): NodeJS.ProcessEnv {

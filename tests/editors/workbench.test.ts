@@ -10,6 +10,7 @@ import { copyFileSync, existsSync, mkdirSync, readdirSync, rmSync, statSync } fr
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { runWorkbench, type DriverReport } from './cs-driver';
+import { runExtensionSuite } from './cs-driver-suite';
 import { askServer, type Oracle } from './workbench-oracle';
 
 const root = join(__dirname, '..', '..');
@@ -129,4 +130,29 @@ describe.skipIf(skip)('VS Code workbench (code-server + Chromium)', () => {
     expect(report.screenshots.length).toBeGreaterThanOrEqual(3);
     for (const s of report.screenshots) expect(statSync(s).size).toBeGreaterThan(10_000);
   });
+});
+
+// The extension-host suite of `npm run test:extension` (activation, commands, settings
+// round-trip), run here in code-server's extension host since no desktop VS Code build can be
+// downloaded on this project's machines.
+describe.skipIf(skip)('extension-host suite in code-server', () => {
+  it('passes every test of tests/extension/suite', async () => {
+    if (missing.length) throw new Error(`RUNGS_REQUIRE_EDITORS=1 but missing ${missing.join(' and ')}`);
+    const scratch = join(root, '.cache', 'workbench-suite');
+    rmSync(scratch, { recursive: true, force: true });
+    const ws = join(scratch, 'ws');
+    mkdirSync(ws, { recursive: true });
+    for (const f of readdirSync(join(root, 'sample-scripts'))) copyFileSync(join(root, 'sample-scripts', f), join(ws, f));
+    const r = await runExtensionSuite({
+      codeServer,
+      chromium: chromiumBin,
+      extension: root,
+      suite: join(root, 'tests', 'extension', 'suite', 'index.cjs'),
+      workspace: ws,
+      scratch,
+    });
+    console.log('[extension suite]\n  ' + r.lines.join('\n  '));
+    expect(r.failed, r.lines.join('\n')).toBe(0);
+    expect(r.passed).toBeGreaterThanOrEqual(7);
+  }, 180_000);
 });

@@ -1,5 +1,4 @@
 // `rungs lsp [--stdio]`: the language server on standard input and output, for any LSP editor.
-import { startServer } from '../lsp/server';
 import type { Command } from './main';
 
 export const lspCommand: Command = {
@@ -12,6 +11,10 @@ export const lspCommand: Command = {
     '  --stdio is accepted for editors that pass it). Logs go to the editor, never to stdout.',
   ].join('\n'),
   run() {
+    // Loaded only for this command: in the bundle the server is its own file (dist/server.js),
+    // so `rungs score` and `rungs lint` do not pay for parsing the protocol code at start-up.
+    // eslint-disable-next-line @typescript-eslint/no-require-imports
+    const { startServer } = require('../lsp/server') as typeof import('../lsp/server');
     startServer();
     return null;
   },
