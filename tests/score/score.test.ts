@@ -64,6 +64,16 @@ describe('rungs score --format json', () => {
     expect(p).toMatchObject({ line: 2, column: 1, severity: 'error' });
   });
 
+  it('gives each pace its ratio to the baseline and the reading-aloud flag', async () => {
+    const r = await run(['score', '-f', 'json', 'p.rungs'], { '/w/p.rungs': '@paces 0.96, 3.2 wps, 4 sps\n@baseline 0.8 wps\nThank you.\n' });
+    const facts = JSON.parse(r.out).rungs[0].paceFacts;
+    // 0.96 / 0.8 = 1.2: the 20 % gain used as the mark of a meaningful benefit (common practice).
+    expect(facts['0.96 wps']).toEqual({ baselineRatio: 1.2, aboveReadingNorm: false });
+    // 3.2 words/s is above adult reading aloud, 183 wpm = 3.05 words/s (Brysbaert 2019).
+    expect(facts['3.2 wps']).toEqual({ baselineRatio: 4, aboveReadingNorm: true });
+    expect(facts['4 sps']).toEqual({ baselineRatio: null, aboveReadingNorm: null });
+  });
+
   it('reads standard input with "-"', async () => {
     const r = await run(['score', '--format=json', '-'], {}, 'Thank you.\n');
     expect(JSON.parse(r.out).rungs[0].items[0]).toMatchObject({ text: 'Thank you.', words: 2 });

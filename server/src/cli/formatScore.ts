@@ -1,5 +1,5 @@
 // Formatters for `rungs score`: one result type in, one string out (table, CSV, JSON).
-import type { Analysis, ItemAnalysis, Problem } from '../core/types';
+import type { Analysis, ItemAnalysis, Pace, Problem } from '../core/types';
 import { formatNumber } from '../core/pace';
 
 export interface ScoredFile {
@@ -27,6 +27,7 @@ export function scoreJson(s: ScoredFile): unknown {
       min: r.min,
       max: r.max,
       totalSeconds: Object.fromEntries(r.paces.map((p, i) => [p.label, round(r.totalSeconds[i], 2)])),
+      paceFacts: Object.fromEntries(r.paces.map((p) => [p.label, paceFacts(analysis, p)])),
       items: r.items.map((it) => itemJson(it)),
     })),
     problems: s.problems.map((p) => ({
@@ -39,6 +40,26 @@ export function scoreJson(s: ScoredFile): unknown {
       message: p.message,
     })),
   };
+}
+
+/**
+ * Facts about a pace itself: its ratio to the client's baseline (word paces; null without a
+ * baseline) and whether it is faster than adult reading aloud (Brysbaert 2019, 3.05 words/s).
+ */
+function paceFacts(a: Analysis, p: Pace): { baselineRatio: number | null; aboveReadingNorm: boolean | null } {
+  if (p.unit !== 'wps') return { baselineRatio: null, aboveReadingNorm: null };
+  return {
+    baselineRatio: a.options.baseline ? round(p.value / a.options.baseline, 3) : null,
+    aboveReadingNorm: p.value > a.options.readingNormWps,
+  };
+}
+
+function paceNote(a: Analysis, p: Pace): string {
+  const f = paceFacts(a, p);
+  const bits = [];
+  if (f.baselineRatio !== null) bits.push(`${formatNumber(f.baselineRatio)}× baseline`);
+  if (f.aboveReadingNorm) bits.push('above reading-aloud rate');
+  return bits.length ? ` (${bits.join(', ')})` : '';
 }
 
 function itemJson(it: ItemAnalysis): unknown {
@@ -127,7 +148,7 @@ export function formatTable(files: ScoredFile[], caution: string): string {
       ]);
       const widths = cols.map((c, i) => Math.max(c.length, ...rows.map((row) => row[i].length)));
       const paceNotes = r.paces
-        .map((p, i) => `${formatNumber(r.totalSeconds[i], 1)} s at ${p.label}`)
+        .map((p, i) => `${formatNumber(r.totalSeconds[i], 1)} s at ${p.label}${paceNote(a, p)}`)
         .join(', ');
       out.push('');
       out.push(`  == ${r.node.name} (line ${r.node.line + 1}): ${r.items.length} item${r.items.length === 1 ? '' : 's'}, median ${r.median.toFixed(1)}, range ${r.min.toFixed(1)}-${r.max.toFixed(1)}; total ${paceNotes || '—'}`);
