@@ -67,7 +67,8 @@ describe.skipIf(skip)('VS Code workbench (code-server + Chromium)', () => {
         problems: expectedProblems,
         hoverLine: '== Back to short',
         hoverLineNumber: back.line,
-        hoverTexts: [`median ${fmt1(back.median)}`, signed(backStep.delta)],
+        // The first text is one only the server's rung hover has (diagnostics share the line).
+        hoverTexts: [`${signed(backStep.delta)} (largest allowed ${fmt1(oracle.ladder.maxStep)}`, `median ${fmt1(back.median)}`],
         fixLine: '@pacse',
         fixLineNumber: oracle.diagnostics.find((d) => d.code === 'unknown-key')!.range.start.line,
         fixTitle: 'Change "@pacse" to "@paces"',
