@@ -29,6 +29,8 @@ const common = {
   target: 'node20',
   format: 'cjs',
   sourcemap: process.env.RUNGS_SOURCEMAP === '1',
+  // `npm run package` minifies the bundles that go into the .vsix; other builds stay readable.
+  minify: process.env.RUNGS_MINIFY === '1',
   logLevel: 'warning',
 };
 // The CLI loads the language server from its own bundle, only when `rungs lsp` runs.

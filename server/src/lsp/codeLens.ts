@@ -4,8 +4,9 @@ import type { CodeLens } from 'vscode-languageserver/node';
 import type { Snapshot } from './documents';
 import { diff, secs } from './format';
 import { sortRung } from './sortRung';
+import { SORT_RUNG_COMMAND } from './contract';
 
-export const SORT_RUNG_COMMAND = 'rungs.sortRung';
+export { SORT_RUNG_COMMAND };
 
 export function codeLenses(s: Snapshot): CodeLens[] {
   const lenses: CodeLens[] = [];

@@ -2,61 +2,15 @@
 // a contract with client/ (keep them): `rungs/ladder`, `rungs/itemAt`, and the notification
 // `rungs/didAnalyze` sent after every analysis.
 import { NotificationType, RequestType } from 'vscode-languageserver/node';
-import type { Direction, Severity } from '../core/types';
+import { DID_ANALYZE_METHOD, ITEM_AT_METHOD, LADDER_METHOD, type ItemAt, type Ladder, type LadderStep } from './contract';
 import { RULES } from '../rules/index';
 import type { Snapshot } from './documents';
 
-export interface LadderItem {
-  line: number;
-  text: string;
-  difficulty: number;
-  rank: number;
-}
+export type { Ladder, LadderItem, LadderRung, LadderStep, ItemAt as ItemAtResult } from './contract';
 
-export interface LadderRung {
-  name: string;
-  /** 0-based line of the header (of the first item for the implicit rung). */
-  line: number;
-  median: number;
-  min: number;
-  max: number;
-  paces: string[];
-  items: LadderItem[];
-}
-
-export interface LadderStep {
-  /** Rung indices into `rungs`. */
-  from: number;
-  to: number;
-  /** Median of `to` minus median of `from`, difficulty points. */
-  delta: number;
-  /** Id of the ladder rule that reports this step, or null. */
-  problem: string | null;
-}
-
-export interface Ladder {
-  title: string | null;
-  direction: Direction;
-  maxStep: number;
-  rungs: LadderRung[];
-  steps: LadderStep[];
-  problems: { rule: string; severity: Severity; line: number; message: string }[];
-}
-
-export interface ItemAtResult {
-  line: number;
-  difficulty: number;
-  rank: number;
-  rungName: string;
-  /** The rung's first pace, e.g. "1 wps". */
-  pace: string;
-  /** Projected seconds at that pace. */
-  seconds: number;
-}
-
-export const LadderRequest = new RequestType<{ uri: string }, Ladder | null, void>('rungs/ladder');
-export const ItemAtRequest = new RequestType<{ uri: string; line: number }, ItemAtResult | null, void>('rungs/itemAt');
-export const DidAnalyzeNotification = new NotificationType<{ uri: string; version: number }>('rungs/didAnalyze');
+export const LadderRequest = new RequestType<{ uri: string }, Ladder | null, void>(LADDER_METHOD);
+export const ItemAtRequest = new RequestType<{ uri: string; line: number }, ItemAt | null, void>(ITEM_AT_METHOD);
+export const DidAnalyzeNotification = new NotificationType<{ uri: string; version: number }>(DID_ANALYZE_METHOD);
 
 const round1 = (n: number) => Math.round(n * 10) / 10;
 
@@ -100,7 +54,7 @@ export function ladder(s: Snapshot): Ladder {
   };
 }
 
-export function itemAt(s: Snapshot, line: number): ItemAtResult | null {
+export function itemAt(s: Snapshot, line: number): ItemAt | null {
   const item = s.itemAt(line);
   if (!item) return null;
   const rung = s.analysis.rungs[item.rung];

@@ -1,0 +1,66 @@
+// The custom parts of the Rungs protocol, shared by the server (server/src/lsp) and the VS Code
+// client (client/src): payload types and method names only, no runtime code, so each side builds
+// its own RequestType from its own library. Lines are 0-based, as everywhere in LSP.
+
+export interface LadderItem {
+  line: number;
+  text: string;
+  /** Composite difficulty, 0-100. */
+  difficulty: number;
+  /** 1-based rank of the item's difficulty within its rung. */
+  rank: number;
+}
+
+export interface LadderRung {
+  name: string;
+  /** 0-based line of the header (of the first item for the implicit rung). */
+  line: number;
+  median: number;
+  min: number;
+  max: number;
+  paces: string[];
+  items: LadderItem[];
+}
+
+export interface LadderStep {
+  /** Rung indices into `rungs`: the lower rung of the step, and the next one. */
+  from: number;
+  to: number;
+  /** Median of `to` minus median of `from`, in difficulty points. */
+  delta: number;
+  /** Id of the ladder rule that reports this step, or null when the step is fine. */
+  problem: string | null;
+}
+
+export interface LadderProblem {
+  rule: string;
+  severity: 'error' | 'warning' | 'info' | 'hint';
+  line: number;
+  message: string;
+}
+
+export interface Ladder {
+  title: string | null;
+  direction: 'rising' | 'falling';
+  maxStep: number;
+  rungs: LadderRung[];
+  steps: LadderStep[];
+  problems: LadderProblem[];
+}
+
+export interface ItemAt {
+  line: number;
+  difficulty: number;
+  rank: number;
+  rungName: string;
+  /** The rung's first pace as written, e.g. "1 wps". */
+  pace: string;
+  /** Projected duration at that pace, in seconds. */
+  seconds: number;
+}
+
+export const LADDER_METHOD = 'rungs/ladder';
+export const ITEM_AT_METHOD = 'rungs/itemAt';
+export const DID_ANALYZE_METHOD = 'rungs/didAnalyze';
+/** The server's command that sorts one rung (arguments: document uri, rung header line). */
+export const SORT_RUNG_COMMAND = 'rungs.sortRung';
