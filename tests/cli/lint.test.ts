@@ -17,7 +17,7 @@ const ERROR = '@pacse 1 wps\n== One\nSee you soon.\nHi there.\nThank you.\n';
 async function run(argv: string[], fs: MemFs, extra: Partial<CliIO> = {}) {
   let out = '';
   let err = '';
-  const code = await main({ argv, cwd: '/work', fs, stdout: (t) => (out += t), stderr: (t) => (err += t), env: {}, ...extra });
+  const code = await main({ argv, cwd: '/clinic', fs, stdout: (t) => (out += t), stderr: (t) => (err += t), env: {}, ...extra });
   return { code, out, err };
 }
 
@@ -57,7 +57,7 @@ describe('rungs lint, in-process', () => {
 
   it('still lints and reports the other files when one is unreadable or missing, and exits 2', async () => {
     const fs = new MemFs({ 'a.rungs': ERROR, 'z.rungs': WARN });
-    fs.unreadable.add('/work/locked.rungs');
+    fs.unreadable.add('/clinic/locked.rungs');
     const r = await run(['lint', 'a.rungs', 'locked.rungs', 'missing.rungs', 'z.rungs'], fs);
     expect(r.code).toBe(2);
     expect(r.err).toContain('rungs lint: missing.rungs: no such file or folder');
@@ -110,7 +110,7 @@ describe('rungs lint, in-process', () => {
     expect(fs.writes).toEqual([]);
     const r = await run(['lint', '--fix', 'a.rungs'], fs);
     expect(r.code).toBe(0);
-    expect(fs.files.get('/work/a.rungs')).toBe('== One\nCome in.\nSit down.\n');
+    expect(fs.files.get('/clinic/a.rungs')).toBe('== One\nCome in.\nSit down.\n');
     expect(r.out).toBe(
       'a.rungs:1:1 warning thin-rung rung 1 "One" has 2 items; rungs need at least 3 (@min-items)\n\n1 problem (0 errors, 1 warning, 0 info) in 1 of 1 file\n',
     );

@@ -7,7 +7,7 @@ export class MemFs implements CliFs {
   readonly unreadable = new Set<string>();
   readonly writes: string[] = [];
 
-  constructor(files: Record<string, string> = {}, root = '/work') {
+  constructor(files: Record<string, string> = {}, root = '/clinic') {
     for (const [p, text] of Object.entries(files)) this.files.set(resolve(root, p), text);
   }
 

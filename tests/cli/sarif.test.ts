@@ -12,7 +12,7 @@ const demo = readFileSync(join(__dirname, '..', '..', 'sample-scripts', 'family-
 
 async function sarif(files: Record<string, string>): Promise<{ code: number | null; log: any }> {
   let out = '';
-  const code = await main({ argv: ['lint', '--format', 'sarif', '.'], cwd: '/work', fs: new MemFs(files), stdout: (t) => (out += t), stderr: () => {}, env: {} });
+  const code = await main({ argv: ['lint', '--format', 'sarif', '.'], cwd: '/clinic', fs: new MemFs(files), stdout: (t) => (out += t), stderr: () => {}, env: {} });
   return { code, log: JSON.parse(out) };
 }
 
