@@ -106,7 +106,7 @@ export function syllableStarts(phones: string[]): number[] {
   return starts;
 }
 
-/** IPA transcription with stress marks before stressed syllables (ˈ primary, ˌ secondary). */
+/** The IPA form of a pronunciation, with stress marks before stressed syllables (ˈ primary, ˌ secondary). */
 export function toIpa(phones: string[]): string {
   const starts = new Set(syllableStarts(phones));
   const syllableStress = new Map<number, number>();

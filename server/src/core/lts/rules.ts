@@ -22,8 +22,8 @@
 // Vowels are A E I O U; Y counts as a consonant in contexts.
 //
 // The table below has 312 rules: the report's rules written with its @ and & classes (some
-// transcriptions, such as J. A. Wasser's public-domain english.c that this one was checked
-// against, spell those classes out letter by letter). The report counts 329; the difference has
+// public-domain renderings of the rules in C, such as J. A. Wasser's english.c that this one was
+// checked against, spell those classes out letter by letter). The report counts 329; the difference has
 // not been reconciled rule by rule against the scanned report.
 //
 // Departures from the report are kept apart, in `AMENDMENTS`, each with its reason; they are tried
