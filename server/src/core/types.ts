@@ -20,6 +20,11 @@ export interface TextEdit extends Range {
 export interface Fix {
   title: string;
   edits: TextEdit[];
+  /**
+   * False for fixes a person must choose one by one (they remove an item or turn an estimate into
+   * an override): offered as editor quick fixes only, never applied by `--fix` or fix-all.
+   */
+  batch?: boolean;
 }
 
 export interface RelatedInfo extends Range {
