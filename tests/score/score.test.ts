@@ -42,7 +42,8 @@ describe('rungs score --format json', () => {
     });
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out);
-    expect(Object.keys(j)).toEqual(['file', 'title', 'paces', 'baseline', 'rungs', 'problems']);
+    expect(Object.keys(j)).toEqual(['file', 'title', 'paces', 'baseline', 'rungs', 'problems', 'caution']);
+    expect(j.caution).toMatch(/support clinical judgement; they are not a diagnosis and defer to the treating clinician/);
     expect(j.file).toBe('plain.txt');
     expect(j.rungs).toHaveLength(1);
     expect(j.rungs[0]).toMatchObject({ name: 'Items', line: 1, paces: ['1 wps', '1.5 wps', '2 wps'] });
@@ -50,7 +51,8 @@ describe('rungs score --format json', () => {
     for (const k of ['line', 'text', 'words', 'syllables', 'phonemes', 'wcm', 'zipfMean', 'zipfMin', 'difficulty', 'durations']) {
       expect(item).toHaveProperty(k);
     }
-    // DOMAIN.md worked example (computed): 6 words, 14 syllables; 6 s at 1 wps, 4 s at 1.5 wps.
+    // Computed from the CMU Pronouncing Dictionary (npm cmu-pronouncing-dictionary@3.0.0): 6 words,
+    // 14 syllables; 6 s at 1 wps, 4 s at 1.5 wps (words / pace).
     expect(item).toMatchObject({ line: 1, words: 6, syllables: 14 });
     expect(item.durations).toEqual({ '1 wps': 6, '1.5 wps': 4, '2 wps': 3 });
     // Only the informational "not in difficulty order" note: a plain list is not held to ladder rules.
@@ -85,7 +87,7 @@ describe('rungs score, other formats and errors', () => {
     const r = await run(['score', '--format', 'csv', 'a.rungs'], { '/w/a.rungs': 'Pass the bread, please.\n' });
     const rows = r.out.trim().split('\n');
     expect(rows).toHaveLength(2);
-    expect(rows[0].startsWith('file,rung,line,id,text,words,syllables')).toBe(true);
+    expect(rows[0].startsWith('file,rung,line,id,sets,text,words,syllables')).toBe(true);
     expect(rows[1]).toContain('"Pass the bread, please."');
   });
 

@@ -1,6 +1,7 @@
 // Formatters for `rungs score`: one result type in, one string out (table, CSV, JSON).
 import type { Analysis, ItemAnalysis, Pace, Problem } from '../core/types';
 import { formatNumber } from '../core/pace';
+import { CAUTION } from '../core/caution';
 
 export interface ScoredFile {
   file: string;
@@ -23,6 +24,7 @@ export function scoreJson(s: ScoredFile): unknown {
       name: r.node.name,
       line: r.node.line + 1,
       paces: r.paces.map((p) => p.label),
+      sets: r.node.sets,
       median: r.median,
       min: r.min,
       max: r.max,
@@ -39,6 +41,7 @@ export function scoreJson(s: ScoredFile): unknown {
       rule: p.rule,
       message: p.message,
     })),
+    caution: CAUTION,
   };
 }
 
@@ -68,7 +71,7 @@ function itemJson(it: ItemAnalysis): unknown {
     text: it.node.text,
     id: it.node.id,
     note: it.node.note,
-    sets: it.node.sets,
+    sets: it.sets,
     words: it.wordCount,
     syllables: it.syllables,
     phonemes: it.phonemes,
@@ -101,14 +104,14 @@ function csvCell(v: string | number | null): string {
 export function formatCsv(files: ScoredFile[]): string {
   const paceLabels: string[] = [];
   for (const f of files) for (const r of f.analysis.rungs) for (const p of r.paces) if (!paceLabels.includes(p.label)) paceLabels.push(p.label);
-  const head = ['file', 'rung', 'line', 'id', 'text', 'words', 'syllables', 'phonemes', 'wcm', 'zipf_mean', 'zipf_min', 'low_frequency_words', 'estimated_words', 'difficulty', 'rank', ...paceLabels.map((l) => `seconds_at_${l.replace(' ', '_')}`)];
+  const head = ['file', 'rung', 'line', 'id', 'sets', 'text', 'words', 'syllables', 'phonemes', 'wcm', 'zipf_mean', 'zipf_min', 'low_frequency_words', 'estimated_words', 'difficulty', 'rank', ...paceLabels.map((l) => `seconds_at_${l.replace(' ', '_')}`)];
   const rows = [head.join(',')];
   for (const f of files) {
     for (const r of f.analysis.rungs) {
       for (const it of r.items) {
         const byLabel = new Map(it.timings.map((t) => [t.pace.label, round(t.seconds, 3)]));
         rows.push(
-          [f.file, r.node.name, it.node.line + 1, it.node.id, it.node.text, it.wordCount, it.syllables, it.phonemes, it.wcm, round(it.zipfMean, 4), round(it.zipfMin, 4), it.lowFrequencyWords, it.estimatedWords, it.difficulty, it.rank, ...paceLabels.map((l) => byLabel.get(l) ?? null)]
+          [f.file, r.node.name, it.node.line + 1, it.node.id, it.sets.join(' '), it.node.text, it.wordCount, it.syllables, it.phonemes, it.wcm, round(it.zipfMean, 4), round(it.zipfMin, 4), it.lowFrequencyWords, it.estimatedWords, it.difficulty, it.rank, ...paceLabels.map((l) => byLabel.get(l) ?? null)]
             .map(csvCell)
             .join(','),
         );

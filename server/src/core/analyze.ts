@@ -4,7 +4,7 @@ import { composite, difficultyComponents, median } from './difficulty';
 import { LOW_FREQUENCY_ZIPF } from './frequency';
 import { applySettings, defaultOptions } from './options';
 import { timeAt } from './pace';
-import { parseScript } from './parse';
+import { parseScript, splitLabels } from './parse';
 import { Pronouncer, type WordScore } from './pronounce';
 import { tokenize } from './tokenize';
 import type {
@@ -112,10 +112,16 @@ export function analyzeItem(
   let zipfMin = Infinity;
   let low = 0;
   let estimated = 0;
+  let counted = 0;
   for (const t of tokens) {
-    for (const spoken of t.words) {
-      const s = pronouncer.score(spoken, t.variant);
-      if (s.variantError && t.variant !== null) {
+    const last = t.words.length - 1;
+    for (let wi = 0; wi <= last; wi++) {
+      const spoken = t.words[wi];
+      // A variant mark stands after the token, so it chooses for its last word only:
+      // "well-read(2)" picks the second "read", not a second "well".
+      const variant = wi === last ? t.variant : null;
+      const s = pronouncer.score(spoken, variant);
+      if (s.variantError && variant !== null) {
         problems.push({
           rule: 'bad-variant',
           severity: 'warning',
@@ -131,15 +137,28 @@ export function analyzeItem(
       phonemes += s.phonemes;
       wcm += s.wcm.total;
       addWcmParts(parts, s.wcm.parts);
+      if (s.source === 'estimate' || s.source === 'morphology') estimated++;
+      // A word the script spells out itself (an override, typically a name) and that the
+      // subtitle corpus never saw says nothing about how familiar it is to the client, so it is
+      // left out of the frequency figures; an item of nothing else keeps it (see below).
+      if (s.source === 'override' && s.count === 0) continue;
+      counted++;
       zipfSum += s.zipf;
       if (s.zipf < zipfMin) zipfMin = s.zipf;
       if (s.zipf < LOW_FREQUENCY_ZIPF) low++;
-      if (s.source === 'estimate' || s.source === 'morphology') estimated++;
     }
   }
   const wordCount = words.length;
-  const zipfMean = wordCount ? zipfSum / wordCount : 0;
-  if (!wordCount) zipfMin = 0;
+  if (counted === 0 && wordCount > 0) {
+    for (const w of words) {
+      zipfSum += w.zipf;
+      if (w.zipf < zipfMin) zipfMin = w.zipf;
+      if (w.zipf < LOW_FREQUENCY_ZIPF) low++;
+    }
+    counted = wordCount;
+  }
+  const zipfMean = counted ? zipfSum / counted : 0;
+  if (!counted) zipfMin = 0;
   const components = difficultyComponents({ syllables, words: wordCount, wcm, zipfMean, zipfMin });
   return {
     node,
@@ -158,6 +177,7 @@ export function analyzeItem(
     components,
     rank: 0,
     timings: paces.map((p) => timeAt(p, wordCount, syllables, options.baseline, options.readingNormWps)),
+    sets: node.sets,
   };
 }
 
@@ -209,6 +229,7 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
       : undefined;
   const entries = new Map<string, CachedItem>();
 
+  const scriptSets = script.header.filter((h) => h.key === 'set' || h.key === 'sets').flatMap((h) => splitLabels(h.value));
   const rungs: RungAnalysis[] = [];
   const items: ItemAnalysis[] = [];
   script.rungs.forEach((node, index) => {
@@ -232,6 +253,8 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
       problems.push(...own);
       return item;
     });
+    const inherited = node.sets.length ? node.sets : scriptSets;
+    for (const it of rungItems) it.sets = it.node.sets.length ? it.node.sets : inherited;
     rankItems(rungItems);
     const ds = rungItems.map((i) => i.difficulty);
     rungs.push({

@@ -263,7 +263,7 @@ export function parseScript(text: string): ParsedScript {
   });
 
   for (const r of rungs) {
-    for (const s of r.settings) if (s.key === 'set') r.sets.push(...splitLabels(s.value));
+    for (const s of r.settings) if (s.key === 'set' || s.key === 'sets') r.sets.push(...splitLabels(s.value));
   }
   return { header, rungs, comments, overrides, problems, lineCount: lines.length };
 }

@@ -10,7 +10,7 @@ export const CONSONANTS = new Set([
   'TH', 'V', 'W', 'Y', 'Z', 'ZH',
 ]);
 
-/** IPA for each phone (DOMAIN: ARPAbet to IPA); unstressed AH and ER have their own symbols. */
+/** IPA for each phone (the usual General American values, from memory); unstressed AH and ER have their own symbols. */
 export const IPA: Readonly<Record<string, string>> = {
   AA: 'ɑ', AE: 'æ', AH: 'ʌ', AH0: 'ə', AO: 'ɔ', AW: 'aʊ', AY: 'aɪ', EH: 'ɛ', ER: 'ɝ', ER0: 'ɚ',
   EY: 'eɪ', IH: 'ɪ', IY: 'i', OW: 'oʊ', OY: 'ɔɪ', UH: 'ʊ', UW: 'u',

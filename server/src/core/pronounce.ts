@@ -78,13 +78,19 @@ export class Pronouncer {
     };
   }
 
-  /** SUBTLEX counts are of word forms; a possessive not listed falls back to its base form. */
+  /**
+   * SUBTLEX-US counts word forms as its corpus was tokenised: at apostrophes, so "don't" is
+   * counted as "don" + "t" and "John's" as "john" + "s". A word with an apostrophe that is not
+   * listed whole takes the smallest count among its parts (the stem's, since the clitic parts
+   * "t", "s", "ll" are counted from every contraction); 0 when a part is unseen.
+   */
   private frequencyCount(spoken: string): number {
     const c = this.data.count(spoken);
-    if (c > 0) return c;
-    if (spoken.endsWith("'s")) return this.data.count(spoken.slice(0, -2));
-    if (spoken.endsWith("'")) return this.data.count(spoken.slice(0, -1));
-    return 0;
+    if (c > 0 || !spoken.includes("'")) return c;
+    const parts = spoken.split("'").filter(Boolean);
+    let min = Infinity;
+    for (const part of parts) min = Math.min(min, this.data.count(part));
+    return parts.length && Number.isFinite(min) ? min : 0;
   }
 
   pronounce(spoken: string, variant: number | null): Pronunciation {

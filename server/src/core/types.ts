@@ -230,6 +230,11 @@ export interface ItemAnalysis {
   /** 1 = easiest item in its rung. */
   rank: number;
   timings: PaceTiming[];
+  /**
+   * Set labels in force for the item: its own `@set` labels, else its rung's, else the script
+   * header's (an item's own labels replace the rung's rather than add to them).
+   */
+  sets: string[];
 }
 
 export interface RungAnalysis {

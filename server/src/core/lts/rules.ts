@@ -21,10 +21,8 @@
 //   @    a consonant after which long U loses its glide (T S R D L Z N J TH CH SH)
 // Vowels are A E I O U; Y counts as a consonant in contexts.
 //
-// The table below has 312 rules: the report's rules written with its @ and & classes (some
-// public-domain renderings of the rules in C, such as J. A. Wasser's english.c that this one was
-// checked against, spell those classes out letter by letter). The report counts 329; the difference has
-// not been reconciled rule by rule against the scanned report.
+// The table below has 312 rules: the report's rules written with its @ and & classes. The report
+// counts 329; the difference has not been reconciled rule by rule against the scanned report.
 //
 // Departures from the report are kept apart, in `AMENDMENTS`, each with its reason; they are tried
 // before the published rules of the same letter. None of them names a particular word. The rule
