@@ -1,5 +1,5 @@
 // `rungs lint` scenarios, in-process on an in-memory file system and as a spawned process.
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -181,5 +181,40 @@ describe('rungs lint, spawned', () => {
     const r = spawnSync(process.execPath, [join(root, 'server', 'bin', 'rungs.js'), 'lint', 'sample-scripts/kitchen-sets.rungs', 'sample-scripts/morning-routine.rungs'], { cwd: root, encoding: 'utf8' });
     expect(r.status).toBe(0);
     expect(r.stdout).toBe('2 files checked: no problems\n');
+  });
+
+  // A reader that stops early (`rungs lint | head -c 200`): the output is far larger than a pipe
+  // holds, so the CLI's later writes fail with EPIPE once the reader has closed its end.
+  function closeEarly(args: string[], input: string): Promise<{ code: number | null; stderr: string; got: number }> {
+    return new Promise((done, fail) => {
+      const child = spawn(process.execPath, [join(root, 'server', 'bin', 'rungs.js'), ...args], { cwd: root, env: { ...process.env, CI: 'true' } });
+      let stderr = '';
+      let got = 0;
+      child.stderr.setEncoding('utf8').on('data', (t: string) => (stderr += t));
+      child.stdout.once('data', (chunk: Buffer) => {
+        got = chunk.length;
+        child.stdout.destroy();
+      });
+      child.on('error', fail);
+      child.on('close', (code) => done({ code, stderr, got }));
+      child.stdin.end(input);
+    });
+  }
+
+  // 4000 repeats of one item: 3999 duplicate-item warnings (exit 0), some 250 kB of text.
+  const MANY = `== One\n${'Come in.\n'.repeat(4000)}`;
+
+  it('exits quietly with its own exit code when the reader closes the pipe early (lint)', async () => {
+    const r = await closeEarly(['lint', '-'], MANY);
+    expect(r.got).toBeGreaterThan(0);
+    expect(r.stderr).toBe('');
+    expect(r.code).toBe(0);
+  });
+
+  it('exits quietly with its own exit code when the reader closes the pipe early (score)', async () => {
+    const r = await closeEarly(['score', '--format', 'json', '-'], MANY);
+    expect(r.got).toBeGreaterThan(0);
+    expect(r.stderr).toBe('');
+    expect(r.code).toBe(0);
   });
 });

@@ -7,7 +7,7 @@ import type { Problem, WordData } from '../core/types';
 import { resolveScriptContext, type ScriptContext } from '../config/resolve';
 import { loadWordTable } from '../data/wordTable';
 import { RULES, compareProblems, lint } from '../rules/index';
-import { applyFixes } from '../rules/fixes';
+import { applyFixes, batchFixes } from '../rules/fixes';
 import { parseArgs } from './args';
 import { expandPaths } from './files';
 import { unifiedDiff } from './formats/diff';
@@ -50,11 +50,14 @@ function check(text: string, data: WordData, ctx: ScriptContext): Checked {
   return { problems: lint(analysis, text, ctx.lint), text };
 }
 
-/** Applies fixes until none is left (or FIX_PASSES runs), re-linting between passes. */
+/**
+ * Applies batch fixes until none is left (or FIX_PASSES runs), re-linting between passes. Fixes a
+ * person must choose one by one (`batch: false`) are left for the editor's quick fixes.
+ */
 function fixAll(first: Checked, data: WordData, ctx: ScriptContext): Checked {
   let cur = first;
   for (let pass = 0; pass < FIX_PASSES; pass++) {
-    const fixes = cur.problems.flatMap((p) => (p.fix ? [p.fix] : []));
+    const fixes = batchFixes(cur.problems);
     if (!fixes.length) break;
     const { text } = applyFixes(cur.text, fixes);
     if (text === cur.text) break;
@@ -141,6 +144,10 @@ export const lintCommand: Command = {
     });
     if (progress) io.stderr('\r\u001b[K');
     for (const [file, ps] of configProblems) results.push({ file, problems: [...ps.values()].sort(compareProblems) });
+    // Count before --quiet hides warnings, so --quiet changes the output, never the exit code.
+    const all = results.flatMap((r) => r.problems);
+    const errors = all.filter((p) => p.severity === 'error').length;
+    const warnings = all.filter((p) => p.severity === 'warning').length;
     for (const r of results) if (quiet) r.problems = r.problems.filter((p) => p.severity === 'error');
     results.sort((a, b) => (a.file === '<stdin>' ? 1 : b.file === '<stdin>' ? -1 : a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
 
@@ -151,9 +158,6 @@ export const lintCommand: Command = {
     else if (format === 'github') io.stdout(formatGithub(run));
     else io.stdout(formatText(run, colour));
 
-    const all = results.flatMap((r) => r.problems);
-    const errors = all.filter((p) => p.severity === 'error').length;
-    const warnings = all.filter((p) => p.severity === 'warning').length;
     if (warnings > maxWarnings) io.stderr(`rungs lint: ${warnings} warnings, more than --max-warnings ${maxWarnings}\n`);
     if (code === EXIT_OK && (errors > 0 || warnings > maxWarnings)) code = EXIT_PROBLEMS;
     return code;

@@ -8,13 +8,7 @@ import {
   type TextEdit as LspTextEdit,
 } from 'vscode-languageserver/node';
 import type { Problem, Range, Severity, TextEdit } from '../core/types';
-
-/** Where rule documentation lives; the id is appended as the anchor (README "Rules" section). */
-export const RULE_DOCS_BASE = 'https://github.com/rungs-project/rungs/blob/main/README.md#rule-';
-
-export function ruleDocsUrl(rule: string): string {
-  return `${RULE_DOCS_BASE}${encodeURIComponent(rule)}`;
-}
+import { ruleDocsUrl } from '../rules/docs';
 
 export function toLspRange(r: Range): LspRange {
   return { start: { line: r.line, character: r.character }, end: { line: r.endLine, character: r.endCharacter } };

@@ -2,7 +2,7 @@
 // item cache, so a request always gets the analysis of the text it was sent against (analysed
 // synchronously when the text or the settings moved on) and an edit re-scores only what changed.
 import { readFileSync, statSync } from 'node:fs';
-import { dirname, join, sep } from 'node:path';
+import { dirname, isAbsolute, join, normalize, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { TextDocument } from 'vscode-languageserver-textdocument';
 import type { AnalyzeOutput } from '../core/analyze';
@@ -36,6 +36,24 @@ interface DocState {
   settingsGeneration: number;
   cache?: ItemCache;
   reuse?: AnalyzeOutput['pronouncer'];
+  /** Every file the resolver read or looked for (config files and lexicons, found or missing), by pathKey. */
+  dependencies: Map<string, string>;
+  /** Problems in config and lexicon files (absolute paths) from the last analysis. */
+  fileProblems: { file: string; problem: Problem }[];
+}
+
+/** A path as a comparison key: normalised, and case-folded where the file system ignores case. */
+export function pathKey(path: string): string {
+  const n = normalize(path);
+  return process.platform === 'win32' || process.platform === 'darwin' ? n.toLowerCase() : n;
+}
+
+/** A ConfigFs that remembers every path it was asked about, so the server knows what to watch. */
+function recordingFs(fs: ConfigFs, seen: Map<string, string>): ConfigFs {
+  return {
+    readFile: (p) => (seen.set(pathKey(p), p), fs.readFile(p)),
+    exists: (p) => (seen.set(pathKey(p), p), fs.exists(p)),
+  };
 }
 
 export const nodeConfigFs: ConfigFs = {
@@ -96,6 +114,9 @@ function makeSnapshot(
   };
 }
 
+/** The resolver's name for the editor-settings layer (it has no file). */
+const EDITOR_LAYER = 'editor settings (rungs.*)';
+
 export interface StoreHooks {
   log(message: string): void;
   error(message: string): void;
@@ -142,11 +163,41 @@ export class AnalysisStore {
     this.settings.delete(uri);
   }
 
+  /** True when an open script's last analysis read or looked for this file. */
+  dependsOn(path: string): boolean {
+    const key = pathKey(path);
+    for (const st of this.states.values()) if (st.dependencies.has(key)) return true;
+    return false;
+  }
+
+  /** The files open scripts read or looked for, other than config files (those are watched by name). */
+  lexiconPaths(isConfigFile: (path: string) => boolean): string[] {
+    const out = new Set<string>();
+    for (const st of this.states.values()) for (const p of st.dependencies.values()) if (!isConfigFile(p)) out.add(p);
+    return [...out].sort();
+  }
+
+  /**
+   * Problems in config and lexicon files, by file, over every open script's last analysis. A file
+   * shared by several scripts reports each problem once.
+   */
+  fileProblems(): Map<string, Problem[]> {
+    const byFile = new Map<string, Map<string, Problem>>();
+    for (const st of this.states.values()) {
+      for (const { file, problem } of st.fileProblems) {
+        let m = byFile.get(file);
+        if (!m) byFile.set(file, (m = new Map()));
+        m.set(JSON.stringify([problem.line, problem.character, problem.endLine, problem.endCharacter, problem.rule, problem.message]), problem);
+      }
+    }
+    return new Map([...byFile].map(([file, m]) => [file, [...m.values()]]));
+  }
+
   /** The analysis of exactly this document version, computed now if needed. Never throws. */
   get(doc: TextDocument): Snapshot {
     let state = this.states.get(doc.uri);
     if (!state) {
-      state = { settingsGeneration: -1 };
+      state = { settingsGeneration: -1, dependencies: new Map(), fileProblems: [] };
       this.states.set(doc.uri, state);
     }
     const s = state.snapshot;
@@ -167,9 +218,11 @@ export class AnalysisStore {
       // Editor settings are the resolver's lowest layer above the defaults; workspace config
       // files and the script header win over them, as in `rungs lint`.
       const baseDir = this.folderOf(path);
-      const ctx = resolveScriptContext(path ?? join(baseDir, 'untitled.rungs'), nodeConfigFs, {
-        editor: { settings: toConfigObject(settings), baseDir, name: 'editor settings (rungs.*)' },
+      const dependencies = new Map<string, string>();
+      const ctx = resolveScriptContext(path ?? join(baseDir, 'untitled.rungs'), recordingFs(nodeConfigFs, dependencies), {
+        editor: { settings: toConfigObject(settings), baseDir, name: EDITOR_LAYER },
       });
+      state.dependencies = dependencies;
       const { output, cache } = analyzeIncremental(
         { text, data: this.data, options: ctx.options, lexicon: ctx.lexicon, reuse: state.reuse },
         state.cache,
@@ -177,13 +230,19 @@ export class AnalysisStore {
       state.cache = cache;
       state.reuse = output.pronouncer;
       const problems = lint(output, text, ctx.lint);
-      this.logConfigProblems(ctx.problems.map((c) => `${c.file}:${c.problem.line + 1}: ${c.problem.message}`));
+      // Problems in files become diagnostics on those files; editor settings have no file to
+      // show them in, so those are logged.
+      state.fileProblems = ctx.problems.filter((c) => c.file !== EDITOR_LAYER && isAbsolute(c.file));
+      this.logConfigProblems(
+        ctx.problems.filter((c) => !state.fileProblems.includes(c)).map((c) => `${c.file}: ${c.problem.message}`),
+      );
       return makeSnapshot(doc.uri, doc.version, text, output, problems, settings, performance.now() - t0);
     } catch (err) {
       // A bad document (or a bug) becomes a diagnostic, never a crash of the server.
       this.hooks.error(`analysis of ${doc.uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
       state.cache = undefined;
       state.reuse = undefined;
+      state.fileProblems = [];
       const empty = analyzeIncremental({ text: '', data: this.data }, undefined).output;
       const problem: Problem = {
         rule: 'internal-error',
@@ -198,7 +257,7 @@ export class AnalysisStore {
     }
   }
 
-  /** Config and lexicon problems are logged once each, not on every keystroke. */
+  /** Problems in editor settings are logged once each, not on every keystroke. */
   private logConfigProblems(messages: string[]): void {
     for (const m of messages) {
       if (this.logged.has(m)) continue;

@@ -21,8 +21,10 @@ export const duplicateItem: Rule = {
     'Compares the spoken text of every item (before any `|` trailer), ignoring case, punctuation',
     'and spacing, so "Come in." and "come in!" are the same item. Each repeat is reported with the',
     'line and rung of the first one. A repeated item counts twice in its rung\'s median and in',
-    'matched-set checks. The fix removes the repeated line (and only that line). When a repeat is',
-    'deliberate, allow it with a `// rungs: allow duplicate-item` line above it.',
+    'matched-set checks. The repeat is marked unnecessary (shown faded in editors). The quick fix',
+    'removes the repeated line (and only that line, with its note, id and sets); `rungs lint --fix`',
+    'and fix-all never apply it, because a repeat can be deliberate (a probe rung may repeat an',
+    'item). When it is, allow it with a `// rungs: allow duplicate-item` line above it.',
   ].join(' '),
   check(ctx, report) {
     const seen = new Map<string, ItemAnalysis>();
@@ -41,8 +43,11 @@ export const duplicateItem: Rule = {
         ...itemRange(it),
         message: `"${it.node.text}" repeats line ${first.node.line + 1} in ${rungLabel(firstRung)}`,
         related: [{ ...itemRange(first), message: `first written here, in ${rungLabel(firstRung)}` }],
+        unnecessary: true,
         fix: {
           title: `Remove the repeated "${it.node.text}"`,
+          // Removing an item (with its note, id and sets) is a person's choice, one repeat at a time.
+          batch: false,
           edits: [
             last && line > 0
               ? { line: line - 1, character: ctx.lines[line - 1].length, endLine: line, endCharacter: ctx.lines[line].length, newText: '' }

@@ -25,25 +25,31 @@ export const estimatedWord: Rule = {
     'Words missing from the CMU Pronouncing Dictionary (names, new words) are pronounced by',
     'morphology on a dictionary stem or by letter-to-sound rules, and their syllables, phonemes and',
     'complexity are only as good as that estimate. Each such word is reported with the estimated',
-    'phones. The fix inserts a `@say word = PHONES` line with the estimate at the end of the',
-    'script header: check the phones, correct them if needed, and the word counts as confirmed.',
-    'A workspace lexicon file (`lexicon` in a config file) does the same for many scripts.',
+    'phones. The quick fix inserts a `@say word = PHONES` line with the estimate at the end of the',
+    'script header: check the phones and correct them if needed. `rungs lint --fix` and fix-all',
+    'never apply it, because once written as an override the guess no longer shows as estimated.',
+    'A word no English letter-to-sound rule applies to (Greek or Chinese script, for example) has',
+    'no estimate: it is reported with no fix, and counts as 0 syllables until a `@say` line gives',
+    'its phones. A workspace lexicon file (`lexicon` in a config file) does the same for many scripts.',
   ].join(' '),
   check(ctx, report) {
     for (const it of ctx.analysis.items) {
       for (const w of it.words) {
         if (w.source !== 'estimate' && w.source !== 'morphology') continue;
         const phones = w.phones.join(' ');
-        const how = w.source === 'morphology' ? 'built from a dictionary stem' : 'estimated by letter-to-sound rules';
         const word = w.surface.toLowerCase() === w.spoken ? w.surface : w.spoken;
+        const at = { line: it.node.line, character: w.start, endLine: it.node.line, endCharacter: w.end };
+        if (!phones) {
+          report({ ...at, message: `no English letter-to-sound rule applies to "${word}"; add a pronunciation with @say ${word} = PHONES` });
+          continue;
+        }
+        const how = w.source === 'morphology' ? 'built from a dictionary stem' : 'estimated by letter-to-sound rules';
         const say = `@say ${word} = ${phones}`;
         report({
-          line: it.node.line,
-          character: w.start,
-          endLine: it.node.line,
-          endCharacter: w.end,
+          ...at,
           message: `"${word}" is not in the dictionary; ${how} as ${phones} (${w.syllables} syllable${w.syllables === 1 ? '' : 's'}): check it and add "${say}"`,
-          fix: phones ? { title: `Add "${say}" to the header`, edits: [headerInsertEdit(ctx, say)] } : undefined,
+          // Writing a guess as an override hides that it is a guess: a person confirms each one.
+          fix: { title: `Add "${say}" to the header`, edits: [headerInsertEdit(ctx, say)], batch: false },
         });
       }
     }

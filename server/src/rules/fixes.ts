@@ -2,7 +2,20 @@
 // edit already taken, the fix is skipped (a later run can pick it up). Identical edits from
 // different problems (e.g. two reports of one unknown word) are applied once. Text outside the
 // edits is copied unchanged, byte for byte.
-import type { Fix, TextEdit } from '../core/types';
+import type { Fix, Problem, TextEdit } from '../core/types';
+
+/**
+ * Whether a fix may be applied without a person looking at it (`--fix`, fix-all). Fixes marked
+ * `batch: false` remove an item or turn an estimate into an override: editor quick fixes only.
+ */
+export function isBatchFix(fix: Fix | undefined): fix is Fix {
+  return fix !== undefined && fix.batch !== false;
+}
+
+/** The fixes `--fix` and fix-all apply: every batch fix of the problems, in their order. */
+export function batchFixes(problems: Problem[]): Fix[] {
+  return problems.flatMap((p) => (isBatchFix(p.fix) ? [p.fix] : []));
+}
 
 interface Span {
   start: number;

@@ -1,6 +1,7 @@
 // The compact human format: one line per problem, `file:line:col severity rule message`, then a
 // summary line. Colour (ANSI) only when asked, i.e. on a terminal.
 import type { Severity } from '../../core/types';
+import { isBatchFix } from '../../rules/fixes';
 import { counts, type LintRun } from './types';
 
 const COLOURS: Record<Severity, string> = { error: '31', warning: '33', info: '36', hint: '90' };
@@ -15,7 +16,8 @@ export function formatText(run: LintRun, colour = false): string {
     }
   }
   const c = counts(all);
-  const fixable = all.filter((p) => p.fix).length;
+  // Only fixes --fix would apply; quick-fix-only ones (batch: false) are left to the editor.
+  const fixable = all.filter((p) => isBatchFix(p.fix)).length;
   const files = run.results.filter((r) => r.problems.length).length;
   const plural = (n: number, w: string) => `${n} ${w}${n === 1 ? '' : 's'}`;
   if (!all.length) lines.push(`${plural(run.results.length, 'file')} checked: no problems`);
