@@ -2,7 +2,8 @@
 // Pure functions from the server's `rungs/ladder` payload to markup, so they are unit-tested
 // without an editor. Every string that came from the script is escaped here; colours come from
 // the editor theme's CSS variables, so the view follows light, dark and high-contrast themes.
-import type { Ladder, LadderProblem, LadderStep } from './protocol';
+import { estimatedMark, estimatedNote } from './present';
+import type { Ladder, LadderProblem, LadderRung, LadderStep } from './protocol';
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
 
@@ -12,6 +13,9 @@ export function escapeHtml(text: string): string {
 }
 
 const fmt = (n: number): string => (Number.isFinite(n) ? n.toFixed(1) : '–');
+
+/** Words with estimated pronunciations in a whole rung (its median and range rest on them). */
+const rungEstimated = (r: LadderRung): number => r.items.reduce((n, it) => n + (it.estimatedWords ?? 0), 0);
 
 function truncate(text: string, max: number): string {
   return text.length > max ? `${text.slice(0, max - 1)}…` : text;
@@ -66,9 +70,12 @@ export function renderLadderBody(ladder: Ladder | null): string {
     r.items.forEach((it) => {
       const spread = count > 1 ? ((it.rank - 1) / (count - 1) - 0.5) * PLOT.band * 0.55 : 0;
       const cx = x(i) + spread;
+      // A point whose difficulty rests on estimated pronunciations is drawn hollow.
+      const est = it.estimatedWords ?? 0;
+      const note = estimatedNote(est);
       out.push(
-        `<circle class="item" data-line="${it.line}" tabindex="0" role="button" cx="${cx.toFixed(1)}" cy="${y(it.difficulty).toFixed(1)}" r="4.5">` +
-          `<title>${escapeHtml(it.text)} — difficulty ${fmt(it.difficulty)}, rank ${it.rank} of ${count} (line ${it.line + 1})</title></circle>`,
+        `<circle class="item" data-line="${it.line}"${est ? ` data-estimated="${est}"` : ''} tabindex="0" role="button" cx="${cx.toFixed(1)}" cy="${y(it.difficulty).toFixed(1)}" r="4.5">` +
+          `<title>${escapeHtml(it.text)} — difficulty ${estimatedMark(est)}${fmt(it.difficulty)}, rank ${it.rank} of ${count} (line ${it.line + 1})${note ? `; ${note}` : ''}</title></circle>`,
       );
     });
   });
@@ -115,19 +122,24 @@ export function renderLadderBody(ladder: Ladder | null): string {
   out.push('</svg>');
 
   // The same facts as a table, for screen readers and for reading exact numbers.
-  out.push('<table class="summary"><thead><tr><th>Rung</th><th>Items</th><th>Median</th><th>Range</th><th>Step</th><th>Problem</th></tr></thead><tbody>');
+  out.push('<table class="summary"><thead><tr><th>Rung</th><th>Items</th><th>Median</th><th>Range</th><th>Estimated</th><th>Step</th><th>Problem</th></tr></thead><tbody>');
   ladder.rungs.forEach((r, i) => {
     const step = ladder.steps.find((s) => s.to === i);
     const prob = step ? problemForStep(ladder, step) : undefined;
+    const est = rungEstimated(r);
+    const mark = estimatedMark(est);
+    const estCell = est ? `<td class="estimated" title="${escapeHtml(estimatedNote(est))}">${mark}${est}</td>` : '<td></td>';
     out.push(
-      `<tr data-line="${r.line}" tabindex="0"><td>${escapeHtml(r.name)}</td><td>${r.items.length}</td><td>${fmt(r.median)}</td>` +
-        `<td>${fmt(r.min)}-${fmt(r.max)}</td><td>${step ? (step.delta >= 0 ? '+' : '') + fmt(step.delta) : ''}</td>` +
+      `<tr data-line="${r.line}" tabindex="0"><td>${escapeHtml(r.name)}</td><td>${r.items.length}</td><td>${mark}${fmt(r.median)}</td>` +
+        `<td>${mark}${fmt(r.min)}-${mark}${fmt(r.max)}</td>${estCell}<td>${step ? (step.delta >= 0 ? '+' : '') + fmt(step.delta) : ''}</td>` +
         `<td class="${step?.problem ? 'problem' : ''}">${step?.problem ? escapeHtml(prob?.message ?? step.problem) : ''}</td></tr>`,
     );
   });
   out.push('</tbody></table>');
   const dir = ladder.direction === 'falling' ? 'falling' : 'rising';
-  out.push(`<p class="legend">Direction ${dir}; allowed step ${fmt(ladder.maxStep)} points (shaded). Click a point, a mark or a rung to go to its line.</p>`);
+  const anyEstimated = ladder.rungs.some((r) => rungEstimated(r) > 0);
+  const estimatedLegend = anyEstimated ? ` Hollow points and ${estimatedMark(1)} mark difficulties that rest on words with an estimated pronunciation.` : '';
+  out.push(`<p class="legend">Direction ${dir}; allowed step ${fmt(ladder.maxStep)} points (shaded).${estimatedLegend} Click a point, a mark or a rung to go to its line.</p>`);
   return out.join('\n');
 }
 
@@ -141,6 +153,7 @@ svg.ladder .axis { fill: var(--vscode-descriptionForeground); }
 svg.ladder .grid { stroke: var(--vscode-editorWidget-border, var(--vscode-panel-border)); stroke-width: 1; opacity: 0.5; }
 svg.ladder .allowed { fill: var(--vscode-charts-green); opacity: 0.14; }
 svg.ladder .item { fill: var(--vscode-charts-blue); opacity: 0.85; cursor: pointer; }
+svg.ladder .item[data-estimated] { fill: var(--vscode-editor-background); stroke: var(--vscode-charts-blue); stroke-width: 2; opacity: 1; }
 svg.ladder .median { fill: var(--vscode-foreground); stroke: var(--vscode-editor-background); stroke-width: 1.5; cursor: pointer; }
 svg.ladder .step { stroke: var(--vscode-foreground); stroke-width: 2; }
 svg.ladder .step.problem { stroke: var(--vscode-errorForeground); stroke-width: 3; stroke-dasharray: 6 3; }

@@ -31,7 +31,8 @@ describe('rungs lint, in-process', () => {
         'a.rungs:1:1 error unknown-key unknown setting "@pacse"; did you mean "@paces"?',
         'b.rungs:3:1 warning duplicate-item "Come in." repeats line 2 in rung 1 "One"',
         '',
-        '2 problems (1 error, 1 warning, 0 info) in 2 of 3 files; 2 fixable with --fix',
+        // The duplicate's fix is a quick fix only (batch: false), so only the unknown key counts.
+        '2 problems (1 error, 1 warning, 0 info) in 2 of 3 files; 1 fixable with --fix',
         '',
       ].join('\n'),
     );
@@ -104,16 +105,31 @@ describe('rungs lint, in-process', () => {
   });
 
   it('--fix rewrites files and reports what is left; --fix-dry-run prints a diff and writes nothing', async () => {
-    const fs = new MemFs({ 'a.rungs': WARN });
+    const fs = new MemFs({ 'a.rungs': `@pacse 1 wps\n${WARN}` });
     const dry = await run(['lint', '--fix-dry-run', 'a.rungs'], fs);
-    expect(dry.out).toBe(['--- a/a.rungs', '+++ b/a.rungs', '@@ -1,5 +1,4 @@', ' == One', ' Come in.', '-Come in.', ' Sit down.', ' ', ''].join('\n'));
+    expect(dry.out).toBe(['--- a/a.rungs', '+++ b/a.rungs', '@@ -1,4 +1,4 @@', '-@pacse 1 wps', '+@paces 1 wps', ' == One', ' Come in.', ' Come in.', ''].join('\n'));
     expect(fs.writes).toEqual([]);
     const r = await run(['lint', '--fix', 'a.rungs'], fs);
     expect(r.code).toBe(0);
-    expect(fs.files.get('/clinic/a.rungs')).toBe('== One\nCome in.\nSit down.\n');
-    expect(r.out).toBe(
-      'a.rungs:1:1 warning thin-rung rung 1 "One" has 2 items; rungs need at least 3 (@min-items)\n\n1 problem (0 errors, 1 warning, 0 info) in 1 of 1 file\n',
-    );
+    expect(fs.files.get('/clinic/a.rungs')).toBe(`@paces 1 wps\n${WARN}`);
+    expect(r.out).toBe('a.rungs:4:1 warning duplicate-item "Come in." repeats line 3 in rung 1 "One"\n\n1 problem (0 errors, 1 warning, 0 info) in 1 of 1 file\n');
+  });
+
+  it('--fix never removes a repeated item or writes an estimate as an override', async () => {
+    // duplicate-item and estimated-word fixes are quick fixes only: nothing for --fix to do.
+    const text = '== One\nCome in.\nCome in.\nTeodric is here.\n';
+    const fs = new MemFs({ 'a.rungs': text });
+    const dry = await run(['lint', '--fix-dry-run', 'a.rungs'], fs);
+    expect(dry.out).toBe('');
+    const r = await run(['lint', '--fix', 'a.rungs'], fs);
+    expect(fs.writes).toEqual([]);
+    expect(fs.files.get('/clinic/a.rungs')).toBe(text);
+    expect(r.out.split('\n').filter((l) => l.includes(' warning ')).map((l) => l.split(' ')[2])).toEqual(['duplicate-item', 'estimated-word']);
+    expect(r.out).toContain('\n2 problems (0 errors, 2 warnings, 0 info) in 1 of 1 file\n');
+    expect(r.out).not.toContain('fixable');
+    // JSON output marks those fixes so tools do not apply them in bulk either.
+    const json = JSON.parse((await run(['lint', '--format', 'json', 'a.rungs'], fs)).out);
+    expect(json[0].problems.map((p: { rule: string; fix?: { batch?: boolean } }) => `${p.rule} ${p.fix?.batch}`)).toEqual(['duplicate-item false', 'estimated-word false']);
   });
 
   it('--quiet reports errors only', async () => {
@@ -121,6 +137,15 @@ describe('rungs lint, in-process', () => {
     const r = await run(['lint', '--quiet', '.'], fs);
     expect(r.out).toContain('unknown-key');
     expect(r.out).not.toContain('duplicate-item');
+  });
+
+  it('--quiet hides warnings but still counts them for --max-warnings', async () => {
+    const fs = new MemFs({ 'b.rungs': WARN });
+    const r = await run(['lint', '--quiet', '--max-warnings', '0', 'b.rungs'], fs);
+    expect(r.code).toBe(1);
+    expect(r.out).toBe('1 file checked: no problems\n');
+    expect(r.err).toBe('rungs lint: 1 warnings, more than --max-warnings 0\n');
+    expect((await run(['lint', '--quiet', 'b.rungs'], fs)).code).toBe(0);
   });
 
   it('colours only on a terminal and shows progress only on a terminal outside CI', async () => {

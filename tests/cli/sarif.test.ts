@@ -25,7 +25,7 @@ describe('SARIF output', () => {
     const rules = run.tool.driver.rules;
     expect(rules.map((r: { id: string }) => r.id)).toEqual(RULES.map((r) => r.id));
     for (const r of rules) expect(r.helpUri).toBe(ruleDocsUrl(r.id));
-    expect(run.results.length).toBe(23);
+    expect(run.results.length).toBe(24);
     for (const res of run.results) {
       expect(rules[res.ruleIndex].id).toBe(res.ruleId);
       expect(res.locations[0].physicalLocation.artifactLocation.uri).toBe('scripts/family%20visits.rungs');
@@ -38,7 +38,8 @@ describe('SARIF output', () => {
     expect(key.fixes[0].artifactChanges[0].replacements).toEqual([
       { deletedRegion: { startLine: 8, startColumn: 1, endLine: 8, endColumn: 7 }, insertedContent: { text: '@paces' } },
     ]);
-    expect(run.results.filter((r: { level: string }) => r.level === 'note').map((r: { ruleId: string }) => r.ruleId)).toEqual(Array(5).fill('unsorted-rung'));
+    // Info-level rules become SARIF notes: the pace below the baseline (line 9) and five unsorted rungs.
+    expect(run.results.filter((r: { level: string }) => r.level === 'note').map((r: { ruleId: string }) => r.ruleId)).toEqual(['pace-below-baseline', ...Array(5).fill('unsorted-rung')]);
   });
 });
 

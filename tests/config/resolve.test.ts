@@ -90,12 +90,48 @@ describe('resolveScriptContext', () => {
     expect(ctx.options.paces.map((p) => p.label)).toEqual(['1 wps', '1.5 wps', '2 wps']);
   });
 
-  it('reports a YAML syntax error at its line and column and keeps the defaults', () => {
+  const shown = (l: { problems: { line: number; character: number; rule: string; message: string }[] }) =>
+    l.problems.map((p) => `${p.line + 1}:${p.character + 1} ${p.rule} ${p.message}`);
+  const values = (l: { settings: { key: string; value: string }[] }) => l.settings.map((s) => `${s.key}=${s.value}`);
+
+  it('reports an unclosed YAML bracket where it opens, and the rest of the file still applies', () => {
+    // The parser gives up at the end of the file (3:1); the "[" of line 2, column 8 is never closed.
     const layer = parseConfigText('max-step: 12\nrules: [unclosed\n', '/w/.rungs.yaml');
-    expect(layer.problems.map((p) => `${p.line + 1}:${p.character + 1} ${p.rule} ${p.message}`)).toEqual([
-      '3:1 bad-config cannot read the config file: Flow sequence in block collection must be sufficiently indented and end with a ]',
+    expect(shown(layer)).toEqual([
+      '2:8 bad-config cannot read the config file: Flow sequence in block collection must be sufficiently indented and end with a ]',
     ]);
-    expect(layer.settings).toEqual([]);
+    expect(values(layer)).toEqual(['max-step=12']);
+    expect(layer.rules).toEqual({});
+  });
+
+  it('leaves out only the top-level YAML entry a syntax error falls in', () => {
+    const layer = parseConfigText('max-step: 12\nrules:\n  thin-rung: off\n bad: indent\nmin-items: 4\n', '/w/.rungs.yaml');
+    expect(shown(layer)).toEqual(['4:1 bad-config cannot read the config file: All mapping items must start at the same column']);
+    expect(values(layer)).toEqual(['max-step=12', 'min-items=4']);
+    expect(layer.rules).toEqual({ 'thin-rung': 'off' });
+  });
+
+  it('reports a trailing comma in .rungs.json at its line and column, and ignores the file', () => {
+    const layer = parseConfigText('{\n  "max-step": 9,\n}\n', '/w/.rungs.json');
+    expect(shown(layer)).toEqual([
+      '3:1 bad-config cannot read the config file: Expected double-quoted property name (JSON allows no comma after the last entry)',
+    ]);
+    expect(values(layer)).toEqual([]);
+    // The same text is a valid YAML flow mapping: only a .json file is held to JSON.
+    expect(values(parseConfigText('{\n  "max-step": 9,\n}\n', '/w/.rungs.yaml'))).toEqual(['max-step=9']);
+  });
+
+  it('locates JSON errors that JSON.parse names without a position, and comments', () => {
+    // "Unexpected token ']'" carries no offset; the "]" is at column 17.
+    expect(shown(parseConfigText('{"paces": [1, 2,], "max-step": 4}', '/w/.rungs.json'))).toEqual([
+      "1:17 bad-config cannot read the config file: Unexpected token ']' (JSON allows no comma after the last entry)",
+    ]);
+    expect(shown(parseConfigText('{\n  // note\n  "max-step": 9\n}', '/w/.rungs.json'))).toEqual([
+      "2:3 bad-config cannot read the config file: Expected property name or '}' (JSON allows no comments; use .rungs.yaml for comments)",
+    ]);
+    const ok = parseConfigText('\uFEFF{"max-step": 3}', '/w/.rungs.json');
+    expect([shown(ok), values(ok)]).toEqual([[], ['max-step=3']]);
+    expect(shown(parseConfigText('\n', '/w/.rungs.json'))).toEqual([]);
   });
 
   it('parses a changed file again but reuses an unchanged one', () => {

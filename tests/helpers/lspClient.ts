@@ -65,6 +65,8 @@ export class LspTestClient {
   stderr = '';
   /** Number of publishDiagnostics notifications received so far. */
   publishCount = 0;
+  /** Capabilities the server registered and has not unregistered, by registration id. */
+  readonly registrations = new Map<string, { method: string; registerOptions?: unknown }>();
   /** What the client answers to workspace/configuration (section "rungs"). */
   settings: Record<string, unknown> = {};
   capabilities!: InitializeResult['capabilities'];
@@ -91,7 +93,17 @@ export class LspTestClient {
     this.connection.onRequest('workspace/configuration', (p: { items: { section?: string }[] }) =>
       p.items.map((i) => (i.section === 'rungs' ? this.settings : null)),
     );
-    this.connection.onRequest('client/registerCapability', () => null);
+    type Registration = { id: string; method: string; registerOptions?: unknown };
+    this.connection.onRequest('client/registerCapability', (p: { registrations: Registration[] }) => {
+      for (const r of p.registrations) this.registrations.set(r.id, { method: r.method, registerOptions: r.registerOptions });
+      this.wake();
+      return null;
+    });
+    this.connection.onRequest('client/unregisterCapability', (p: { unregisterations: { id: string }[] }) => {
+      for (const r of p.unregisterations) this.registrations.delete(r.id);
+      this.wake();
+      return null;
+    });
     this.connection.onRequest('workspace/inlayHint/refresh', () => null);
     this.connection.onRequest('workspace/semanticTokens/refresh', () => null);
     this.connection.onRequest('workspace/codeLens/refresh', () => null);
@@ -136,7 +148,8 @@ export class LspTestClient {
           applyEdit: true,
           workspaceEdit: { documentChanges: true },
           didChangeConfiguration: { dynamicRegistration: true },
-          didChangeWatchedFiles: { dynamicRegistration: true },
+          didChangeWatchedFiles: { dynamicRegistration: true, relativePatternSupport: true },
+          workspaceFolders: true,
           inlayHint: { refreshSupport: true },
           semanticTokens: { refreshSupport: true },
           codeLens: { refreshSupport: true },

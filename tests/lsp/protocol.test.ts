@@ -8,7 +8,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CodeAction, CompletionItem, Diagnostic, DocumentSymbol, Hover, InlayHint } from 'vscode-languageserver-protocol';
 import { CancellationTokenSource } from 'vscode-languageserver-protocol/node';
 import { analyze } from '../../server/src/core/analyze';
+import * as convert from '../../server/src/lsp/convert';
 import { lint } from '../../server/src/rules/index';
+import { ruleDocsUrl } from '../../server/src/rules/docs';
+import { bigScript } from './bigScript';
 import { words } from '../helpers/data';
 import { applyTextEdits, editsFor, fileUri, LspTestClient, ROOT } from '../helpers/lspClient';
 
@@ -77,7 +80,9 @@ describe('diagnostics', () => {
     expect(unknown.range).toEqual({ start: { line: 3, character: 0 }, end: { line: 3, character: 6 } });
     expect(unknown.severity).toBe(1);
     expect(unknown.source).toBe('rungs');
-    expect(unknown.codeDescription?.href).toMatch(/unknown-key$/);
+    // The one docs base (rules/docs.ts), as in SARIF output; the LSP edge keeps no copy of it.
+    expect(unknown.codeDescription?.href).toBe(ruleDocsUrl('unknown-key'));
+    expect('RULE_DOCS_BASE' in convert).toBe(false);
     expect(c.analyzed).toContainEqual({ uri, version: 1 });
   });
 
@@ -192,10 +197,57 @@ describe('inlay hints, code lens, symbols, folding, tokens', () => {
   });
 });
 
+describe('estimated pronunciations are marked wherever numbers show', () => {
+  // "Teodric" is in no dictionary: its pronunciation, and so the item's difficulty, is estimated.
+  const text = '== Names\nTeodric plays the clarinet.\nHi.\n';
+  const u = fileUri(join(dir, 'estimated.rungs'));
+  const a = analyze({ text, data: words });
+  beforeAll(async () => {
+    await c.open(u, text);
+    await c.diagnosticsFor(u, 1);
+  });
+
+  it('the analysis agrees: one estimated word in the first item, none in the second', () => {
+    expect(words.pronunciations('teodric')).toBeUndefined();
+    expect(a.items.map((i) => i.estimatedWords)).toEqual([1, 0]);
+  });
+
+  it('inlay hints: "≈" before the difficulty and "estimated pronunciation" in the tooltip', async () => {
+    const hints = await c.request<InlayHint[]>('textDocument/inlayHint', {
+      textDocument: { uri: u },
+      range: { start: { line: 0, character: 0 }, end: { line: 3, character: 0 } },
+    });
+    expect(hints.map((h) => h.label)).toEqual([`4 s @ 1 wps · D ≈${a.items[0].difficulty}`, `1 s @ 1 wps · D ${a.items[1].difficulty}`]);
+    const tip = (h: InlayHint) => (typeof h.tooltip === 'object' ? h.tooltip.value : String(h.tooltip ?? ''));
+    expect(tip(hints[0])).toContain('≈ 1 word with an estimated pronunciation (teodric)');
+    expect(tip(hints[1])).not.toContain('estimated');
+  });
+
+  it('code lens: the rung summary is marked and counts the estimated words', async () => {
+    const lenses = await c.request<{ command: { title: string } }[]>('textDocument/codeLens', { textDocument: { uri: u } });
+    const r = a.rungs[0];
+    const d = (n: number) => Number(n.toFixed(1));
+    expect(lenses[0].command.title).toBe(
+      `2 items · difficulty ≈${d(r.min)}–≈${d(r.max)}, median ≈${d(r.median)} · 5 s at 1 wps, 3.33 s at 1.5 wps, 2.5 s at 2 wps · ≈ 1 estimated pronunciation`,
+    );
+  });
+
+  it('rungs/itemAt and rungs/ladder carry the count; hovers say so', async () => {
+    expect(await c.request('rungs/itemAt', { uri: u, line: 1 })).toMatchObject({ line: 1, estimatedWords: 1 });
+    expect(await c.request('rungs/itemAt', { uri: u, line: 2 })).toMatchObject({ line: 2, estimatedWords: 0 });
+    const ladder = await c.request<{ rungs: { items: { estimatedWords?: number }[] }[] }>('rungs/ladder', { uri: u });
+    expect(ladder.rungs[0].items.map((i) => i.estimatedWords)).toEqual([1, 0]);
+    expect(hoverText(await hoverAt(1, 2, u))).toContain('≈ estimated pronunciation');
+    const item = hoverText(await hoverAt(1, 27, u));
+    expect(item).toContain(`difficulty **≈${a.items[0].difficulty}**`);
+    expect(item).toContain('≈ 1 word with an estimated pronunciation: teodric');
+  });
+});
+
 describe('code actions', () => {
-  const actionsAt = (line: number, character: number, diagnostics: Diagnostic[] = []) =>
+  const actionsAt = (line: number, character: number, diagnostics: Diagnostic[] = [], u = uri) =>
     c.request<CodeAction[]>('textDocument/codeAction', {
-      textDocument: { uri },
+      textDocument: { uri: u },
       range: { start: { line, character }, end: { line, character } },
       context: { diagnostics },
     });
@@ -226,6 +278,30 @@ describe('code actions', () => {
     const withSay = applyTextEdits(TEXT, editsFor(say.edit!, uri)).split('\n');
     expect(withSay[4]).toBe('@say record = R AH0 K AO1 R D');
     expect(withSay.filter((_, i) => i !== 4)).toEqual(TEXT.split('\n'));
+  });
+
+  it('"use listed pronunciation" only on a plain one-word token', async () => {
+    // "Dr." (doctor) and "read-only" start with a word with listed variants, "$5" (five dollars)
+    // ends with one; a "(n)" after them would be read aloud or apply to more than one word.
+    const text = '== Tokens\nDr. Lee paid $5 for a read-only copy.\nRead it.\n';
+    const u = fileUri(join(dir, 'variants.rungs'));
+    await c.open(u, text);
+    await c.diagnosticsFor(u, 1);
+    expect(words.pronunciations('doctor')!.length).toBeGreaterThan(1);
+    expect(words.pronunciations('dollars')!.length).toBeGreaterThan(1);
+    expect(words.pronunciations('read')!.length).toBeGreaterThan(1);
+    const use = (actions: CodeAction[]) => actions.filter((a) => a.title.startsWith('Use listed pronunciation'));
+    const line = text.split('\n')[1];
+    for (const written of ['Dr.', '$5', 'read-only']) {
+      expect(use(await actionsAt(1, line.indexOf(written) + 1, [], u)), written).toEqual([]);
+    }
+    // "Read" (dictionary variant 1, R EH1 D) offers variant 2, written right after the word.
+    const read = use(await actionsAt(2, 2, [], u));
+    expect(read.map((a) => a.title)).toEqual(['Use listed pronunciation 2 of "read": R IY1 D']);
+    const after = applyTextEdits(text, editsFor(read[0].edit!, u));
+    expect(after.split('\n')[2]).toBe('Read(2) it.');
+    const reread = analyze({ text: after, data: words });
+    expect(reread.items[1].words[0].phones.join(' ')).toBe('R IY1 D');
   });
 
   it('sort rung by difficulty (command via workspace/applyEdit) keeps every line', async () => {
@@ -282,7 +358,7 @@ describe('completion, formatting, custom requests', () => {
     expect(ladder.problems).toContainEqual(expect.objectContaining({ rule: 'unknown-key', line: 3 }));
     const item = await c.request('rungs/itemAt', { uri, line: 6 });
     const a = analyze({ text: TEXT, data: words });
-    expect(item).toEqual({ line: 6, difficulty: a.items[0].difficulty, rank: a.items[0].rank, rungName: 'Breakfast', pace: '1 wps', seconds: 4 });
+    expect(item).toEqual({ line: 6, difficulty: a.items[0].difficulty, rank: a.items[0].rank, rungName: 'Breakfast', pace: '1 wps', seconds: 4, estimatedWords: 0 });
     expect(await c.request('rungs/itemAt', { uri, line: 5 })).toBeNull();
   });
 
@@ -333,10 +409,14 @@ describe('settings and robustness', () => {
     expect(await c.request('rungs/ladder', { uri: 'file:///nowhere.rungs' })).toBeNull();
     expect(await c.request('workspace/executeCommand', { command: 'rungs.sortRung', arguments: ['x', 'y'] })).toEqual({ applied: false });
     for (let line = 0; line < 9; line++) await hoverAt(line, 3, u);
+    // A request cancelled while still queued is answered RequestCancelled without being run. The
+    // server is kept busy analysing a big script meanwhile, so the hover and its cancellation
+    // are both waiting when it next reads.
+    await c.open(fileUri(join(dir, 'busy.rungs')), bigScript(3000));
     const source = new CancellationTokenSource();
     const pending = c.connection.sendRequest('textDocument/hover', { textDocument: { uri: u }, position: { line: 1, character: 0 } }, source.token);
     source.cancel();
-    await pending.catch((e: { code?: number }) => expect(e.code).toBe(-32800));
+    await expect(pending).rejects.toMatchObject({ code: -32800 });
     expect(hoverText(await hoverAt(6, 5))).toContain('5.28');
     expect(c.proc.exitCode).toBeNull();
   });

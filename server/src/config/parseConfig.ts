@@ -1,11 +1,14 @@
-// Reads one config file (JSON or YAML; JSON is read by the YAML 1.2 parser, so it may carry
-// comments) or an editor-settings object into a layer the resolver merges. Pure: text in, data out.
-// Every problem has a position in the file, and whatever cannot be read is left out.
+// Reads one config file (JSON or YAML) or an editor-settings object into a layer the resolver
+// merges. Pure: text in, data out. A `.json` file must be JSON as JSON.parse reads it (no comments,
+// no trailing commas); its keys and values are then located with the YAML 1.2 parser, which reads
+// every JSON text. Every problem has a position in the file, and whatever cannot be read is left
+// out: in YAML, the top-level entry a syntax error falls in; in JSON, the whole file.
 import { dirname, isAbsolute, join } from 'node:path';
-import { isMap, isScalar, isSeq, LineCounter, parseDocument, type Node as YamlNode } from 'yaml';
+import { isCollection, isMap, isScalar, LineCounter, parseDocument, visit, type Document, type Node as YamlNode } from 'yaml';
 import { editDistance, KEYS, keySpec } from '../core/options';
 import type { Problem, Range, Setting } from '../core/types';
 import { RULE_IDS } from '../rules/index';
+import { jsonSyntaxError } from './jsonError';
 import { LADDER_METRICS, type LadderMetric, type LadderSettings, type SeverityOverrides } from '../rules/types';
 
 /** Looked for in each folder, in this order; the first found is the folder's config. */
@@ -102,25 +105,80 @@ function settingText(v: unknown): string | null {
   return null;
 }
 
+function syntaxProblem(message: string, start: Range, end: Range): Problem {
+  return { rule: 'bad-config', severity: 'error', message: `cannot read the config file: ${message}`, line: start.line, character: start.character, endLine: end.line, endCharacter: end.character };
+}
+
+/** 0-based line and character of an offset, counting \n, \r\n and \r as line breaks. */
+function positionOf(text: string, offset: number): Range {
+  let line = 0;
+  let start = 0;
+  for (let i = 0; i < offset && i < text.length; i++) {
+    if (text[i] === '\n' || (text[i] === '\r' && text[i + 1] !== '\n')) {
+      line++;
+      start = i + 1;
+    }
+  }
+  const character = Math.min(offset, text.length) - start;
+  return { line, character, endLine: line, endCharacter: character };
+}
+
+/**
+ * Where to report a YAML error. The parser puts an unclosed flow collection's error where it gave
+ * up (often the end of the file); the bracket that was never closed is the useful place.
+ */
+function yamlErrorStart(doc: Document, pos: number, message: string): number {
+  if (!/^Flow (sequence|map)/.test(message)) return pos;
+  let opened = pos;
+  visit(doc, (_key, node) => {
+    if (isCollection(node) && node.flow && node.range && node.range[1] === pos && node.range[0] < opened) opened = node.range[0];
+  });
+  return opened;
+}
+
 export function parseConfigText(text: string, file: string): ConfigLayer {
+  if (/\.json$/i.test(file)) {
+    const bad = jsonSyntaxError(text);
+    if (bad) {
+      const at = positionOf(text, bad.offset);
+      const end = positionOf(text, Math.min(text.length, bad.offset + 1));
+      return parseConfigObject({}, file, dirname(file), [syntaxProblem(bad.message, at, end.line === at.line ? end : { ...at, character: at.character + 1 })]);
+    }
+  }
   const lc = new LineCounter();
   const doc = parseDocument(text, { lineCounter: lc, uniqueKeys: true, prettyErrors: false });
+  const at = (offset: number): Range => {
+    const p = lc.linePos(offset);
+    return { line: p.line - 1, character: p.col - 1, endLine: p.line - 1, endCharacter: p.col - 1 };
+  };
+  const errorAt: number[] = [];
   const problems: Problem[] = doc.errors.map((e) => {
-    const p = lc.linePos(e.pos[0]);
-    const q = lc.linePos(Math.max(e.pos[1], e.pos[0] + 1));
     const first = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
-    return { rule: 'bad-config', severity: 'error', message: `cannot read the config file: ${first}`, line: p.line - 1, character: p.col - 1, endLine: q.line - 1, endCharacter: q.col - 1 };
+    const start = yamlErrorStart(doc, e.pos[0], first);
+    errorAt.push(e.pos[0], start);
+    return syntaxProblem(first, at(start), at(start === e.pos[0] ? Math.max(e.pos[1], e.pos[0] + 1) : start + 1));
   });
-  if (problems.length) return parseConfigObject({}, file, dirname(file), problems);
   const contents = doc.contents;
-  if (contents === null || (isScalar(contents) && contents.value === null)) return parseConfigObject({}, file, dirname(file));
+  if (contents === null || (isScalar(contents) && contents.value === null)) return parseConfigObject({}, file, dirname(file), problems);
   const entries = fromYaml(contents, text, lc);
   if (!entries) {
+    if (problems.length) return parseConfigObject({}, file, dirname(file), problems);
     return parseConfigObject({}, file, dirname(file), [
       { rule: 'bad-config', severity: 'error', message: 'a config file holds an object of settings, e.g. {"max-step": 12}', line: 0, character: 0, endLine: 0, endCharacter: 1 },
     ]);
   }
-  return interpret(entries, file, dirname(file), true, []);
+  // After a syntax error the parser still gives a document; each top-level entry spans from the
+  // start of its key's line to the start of the next key's line, and an entry an error falls in
+  // is left out (it may be misread), so the rest of the file applies.
+  const items = isMap(contents) ? contents.items : [];
+  const lineStart = (offset: number) => text.lastIndexOf('\n', offset - 1) + 1;
+  const kept = entries.filter((_e, i) => {
+    const from = lineStart((items[i].key as YamlNode | null)?.range?.[0] ?? 0);
+    const nextKey = (items[i + 1]?.key as YamlNode | null | undefined)?.range?.[0];
+    const to = nextKey === undefined ? Infinity : lineStart(nextKey);
+    return !errorAt.some((pos) => pos >= from && pos < to);
+  });
+  return interpret(kept, file, dirname(file), true, problems);
 }
 
 /** A layer from a plain object (editor settings); positions are line 1, column 1. */

@@ -8,7 +8,8 @@ import {
   type Diagnostic,
   type WorkspaceEdit,
 } from 'vscode-languageserver/node';
-import type { Problem, TextEdit, WordAnalysis } from '../core/types';
+import { tokenize, type Token } from '../core/tokenize';
+import type { ItemAnalysis, Problem, TextEdit, WordAnalysis } from '../core/types';
 import { fromLspRange, rangesTouch, toLspDiagnostic, toLspTextEdit } from './convert';
 import type { Snapshot } from './documents';
 import { eolOf, sortRung } from './sortRung';
@@ -29,11 +30,14 @@ function sameDiagnostic(d: Diagnostic, p: Problem): boolean {
   );
 }
 
-/** Non-overlapping fixes in document order (a later fix overlapping an earlier one waits). */
+/**
+ * Non-overlapping fixes in document order (a later fix overlapping an earlier one waits). Fixes
+ * marked `batch: false` need a person's choice each time, so they are quick fixes only.
+ */
 export function compatibleFixes(problems: Problem[]): TextEdit[] {
   const chosen: TextEdit[] = [];
   for (const p of problems) {
-    if (!p.fix) continue;
+    if (!p.fix || p.fix.batch === false) continue;
     if (p.fix.edits.some((e) => chosen.some((c) => rangesTouch(c, e)))) continue;
     chosen.push(...p.fix.edits);
   }
@@ -54,7 +58,12 @@ function overrideInsertLine(s: Snapshot): number {
   return line;
 }
 
-function wordActions(s: Snapshot, w: WordAnalysis, line: number): CodeAction[] {
+/** The written token a word comes from (words of one token share its offsets). */
+function tokenOf(item: ItemAnalysis, w: WordAnalysis): Token | undefined {
+  return tokenize(item.node.text, item.node.textStart).find((t) => t.start === w.start && t.end === w.end);
+}
+
+function wordActions(s: Snapshot, item: ItemAnalysis, w: WordAnalysis, line: number): CodeAction[] {
   const actions: CodeAction[] = [];
   const scriptOverride = s.analysis.script.overrides.find((o) => o.word === w.spoken);
   if (!scriptOverride && w.phones.length) {
@@ -67,15 +76,15 @@ function wordActions(s: Snapshot, w: WordAnalysis, line: number): CodeAction[] {
       edit: edit(s, [{ line: at, character: 0, endLine: at, endCharacter: 0, newText: `@say ${w.spoken} = ${w.phones.join(' ')}${eol}` }]),
     });
   }
-  if (w.variants.length > 1) {
-    const token = s.lines[line].slice(w.start, w.end);
-    const mark = /\(\d+\)$/.exec(token);
+  // A variant mark "(n)" is read only after a plain word, and applies to every word of its token:
+  // after "Dr." or "$5" it would be read aloud, after "well-read" it would apply to both parts.
+  const token = w.variants.length > 1 ? tokenOf(item, w) : undefined;
+  if (token && token.kind === 'word' && token.words.length === 1) {
+    const markStart = token.variant === null ? w.end : w.end - '(n)'.length;
     w.variants.forEach((v, i) => {
       const n = i + 1;
       if (w.source === 'dictionary' && n === w.variant) return;
-      const e: TextEdit = mark
-        ? { line, character: w.end - mark[0].length, endLine: line, endCharacter: w.end, newText: `(${n})` }
-        : { line, character: w.end, endLine: line, endCharacter: w.end, newText: `(${n})` };
+      const e: TextEdit = { line, character: markStart, endLine: line, endCharacter: w.end, newText: `(${n})` };
       actions.push({
         title: `Use listed pronunciation ${n} of "${w.spoken}": ${v.join(' ')}`,
         kind: CodeActionKind.RefactorRewrite,
@@ -111,7 +120,7 @@ export function codeActions(s: Snapshot, params: CodeActionParams): CodeAction[]
   const item = s.itemAt(line);
   if (item && (wants(CodeActionKind.QuickFix) || wants(CodeActionKind.RefactorRewrite))) {
     const w = item.words.find((x) => range.character >= x.start && range.character <= x.end);
-    if (w) actions.push(...wordActions(s, w, line).filter((a) => wants(a.kind!)));
+    if (w) actions.push(...wordActions(s, item, w, line).filter((a) => wants(a.kind!)));
   }
 
   const rung = s.rungContaining(line);

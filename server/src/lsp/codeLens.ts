@@ -1,8 +1,9 @@
-// Code lenses on rung headers: the rung summary, and "Sort by difficulty" when the rung is not
-// in order (it runs the server command `rungs.sortRung`).
+// Code lenses on rung headers: the rung summary (difficulties marked "≈" when they rest on
+// estimated pronunciations), and "Sort by difficulty" when the rung is not in order (it runs the
+// server command `rungs.sortRung`).
 import type { CodeLens } from 'vscode-languageserver/node';
 import type { Snapshot } from './documents';
-import { diff, secs } from './format';
+import { diffMarked, ESTIMATED_MARK, secs } from './format';
 import { sortRung } from './sortRung';
 import { SORT_RUNG_COMMAND } from './contract';
 
@@ -15,8 +16,11 @@ export function codeLenses(s: Snapshot): CodeLens[] {
     const range = { start: { line, character: 0 }, end: { line, character: 0 } };
     const n = rung.items.length;
     const times = rung.paces.map((p, i) => `${secs(rung.totalSeconds[i])} at ${p.label}`).join(', ');
+    const est = rung.items.reduce((sum, it) => sum + it.estimatedWords, 0);
+    const d = (x: number) => diffMarked(x, est);
+    const estimated = est ? ` · ${ESTIMATED_MARK} ${est} estimated pronunciation${est === 1 ? '' : 's'}` : '';
     const title = n
-      ? `${n} item${n === 1 ? '' : 's'} · difficulty ${diff(rung.min)}–${diff(rung.max)}, median ${diff(rung.median)} · ${times}`
+      ? `${n} item${n === 1 ? '' : 's'} · difficulty ${d(rung.min)}–${d(rung.max)}, median ${d(rung.median)} · ${times}${estimated}`
       : 'no items';
     lenses.push({ range, command: { title, command: '' } });
     if (sortRung(s, rung)) {

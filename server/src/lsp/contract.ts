@@ -9,6 +9,8 @@ export interface LadderItem {
   difficulty: number;
   /** 1-based rank of the item's difficulty within its rung. */
   rank: number;
+  /** Words of the item whose pronunciation is estimated (no dictionary entry or override). */
+  estimatedWords?: number;
 }
 
 export interface LadderRung {
@@ -57,7 +59,15 @@ export interface ItemAt {
   pace: string;
   /** Projected duration at that pace, in seconds. */
   seconds: number;
+  /** Words of the item whose pronunciation is estimated (no dictionary entry or override). */
+  estimatedWords?: number;
 }
+
+/**
+ * The mark both sides put before a number that rests on estimated pronunciations ("D ≈42"),
+ * with the words "estimated pronunciation" in the tooltip or hover that explains it.
+ */
+export const ESTIMATED_MARK = '≈';
 
 export const LADDER_METHOD = 'rungs/ladder';
 export const ITEM_AT_METHOD = 'rungs/itemAt';

@@ -1,5 +1,8 @@
 // Number formatting shared by hovers, hints and lenses, so every view shows the same digits.
 import { formatNumber } from '../core/pace';
+import { ESTIMATED_MARK } from './contract';
+
+export { ESTIMATED_MARK };
 
 /** Seconds: "2 s", "1.33 s". */
 export const secs = (n: number): string => `${formatNumber(n, 2)} s`;
@@ -8,6 +11,10 @@ export const diff = (n: number): string => formatNumber(n, 1);
 /** Zipf and Lg10WF, two decimals always ("5.28"). */
 export const two = (n: number): string => n.toFixed(2);
 export const rate = (n: number): string => formatNumber(n, 2);
+/** A difficulty, marked "≈" when it rests on `estimated` estimated pronunciations (0: unmarked). */
+export const diffMarked = (n: number, estimated: number): string => `${estimated > 0 ? ESTIMATED_MARK : ''}${diff(n)}`;
+/** "1 word with an estimated pronunciation", "3 words with an estimated pronunciation". */
+export const estimatedWords = (n: number): string => `${n} word${n === 1 ? '' : 's'} with an estimated pronunciation`;
 /** Signed difference: "+12.3", "-4". */
 export const signed = (n: number): string => `${n >= 0 ? '+' : ''}${formatNumber(n, 1)}`;
 /** Minutes and seconds for long totals: "95 s (1 min 35 s)". */

@@ -8,7 +8,7 @@ import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
 import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
 import { WCM_PARAMETER_NAMES } from '../core/wcm';
 import type { Snapshot } from './documents';
-import { diff, md, rate, secs, signed, total, two } from './format';
+import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, rate, secs, signed, total, two } from './format';
 
 const markdown = (value: string, line: number, start: number, end: number): Hover => ({
   contents: { kind: MarkupKind.Markdown, value },
@@ -32,7 +32,7 @@ function wcmBreakdown(parts: WcmParts): string {
 function sourceText(s: Snapshot, w: WordAnalysis, how: string): string {
   if (w.source === 'dictionary') return how;
   if (w.source === 'override') return how;
-  return `estimate (${how}): check it, or add a pronunciation override`;
+  return `${ESTIMATED_MARK} estimated pronunciation (${how}): check it, or add a pronunciation override`;
 }
 
 export function wordHoverText(s: Snapshot, w: WordAnalysis, variantMark: number | null): string {
@@ -80,7 +80,7 @@ export function itemHoverText(s: Snapshot, item: ItemAnalysis): string {
   const o = s.analysis.options;
   const lines: string[] = [];
   lines.push(
-    `**Item** in rung "${md(rung.node.name)}" · difficulty **${diff(item.difficulty)}**, rank ${item.rank} of ${rung.items.length} (1 = easiest)`,
+    `**Item** in rung "${md(rung.node.name)}" · difficulty **${diffMarked(item.difficulty, item.estimatedWords)}**, rank ${item.rank} of ${rung.items.length} (1 = easiest)`,
   );
   lines.push('');
   lines.push('| words | syllables | phonemes | WCM | Zipf mean | Zipf min |');
@@ -97,7 +97,7 @@ export function itemHoverText(s: Snapshot, item: ItemAnalysis): string {
   ];
   if (item.lowFrequencyWords) notes.push(`${item.lowFrequencyWords} low-frequency word${item.lowFrequencyWords === 1 ? '' : 's'}`);
   const est = item.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => w.spoken);
-  if (est.length) notes.push(`estimated: ${est.map(md).join(', ')}`);
+  if (est.length) notes.push(`${ESTIMATED_MARK} ${estimatedWords(est.length)}: ${[...new Set(est)].map(md).join(', ')}`);
   if (item.timings.some((t) => t.aboveReadingNorm)) notes.push(`⚠ faster than adult reading aloud (${rate(o.readingNormWps)} words/s)`);
   lines.push(notes.join('; '));
   return lines.join('\n');

@@ -1,8 +1,9 @@
 // Inlay hints at the end of item lines: projected duration at the rung's first pace and the
-// composite difficulty. Off with `rungs.inlayHints.enabled: false`.
+// composite difficulty, marked "≈" when it rests on estimated pronunciations. Off with
+// `rungs.inlayHints.enabled: false`.
 import { InlayHintKind, MarkupKind, type InlayHint, type Range } from 'vscode-languageserver/node';
 import type { Snapshot } from './documents';
-import { diff, secs } from './format';
+import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, secs } from './format';
 
 export function inlayHints(s: Snapshot, range: Range): InlayHint[] {
   if (!s.settings.inlayHints.enabled) return [];
@@ -14,14 +15,17 @@ export function inlayHints(s: Snapshot, range: Range): InlayHint[] {
       if (line < range.start.line || line > range.end.line) continue;
       const t = item.timings[0];
       const raw = s.lines[line] ?? '';
+      const n = item.estimatedWords;
+      const estimated = item.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => md(w.spoken));
+      const note = n ? ` ${ESTIMATED_MARK} ${estimatedWords(n)} (${[...new Set(estimated)].join(', ')}), so the difficulty is approximate.` : '';
       hints.push({
         position: { line, character: raw.trimEnd().length },
-        label: `${secs(t.seconds)} @ ${pace.label} · D ${diff(item.difficulty)}`,
+        label: `${secs(t.seconds)} @ ${pace.label} · D ${diffMarked(item.difficulty, n)}`,
         kind: InlayHintKind.Type,
         paddingLeft: true,
         tooltip: {
           kind: MarkupKind.Markdown,
-          value: `Projected ${secs(t.seconds)} at ${pace.label} (no pauses); difficulty ${diff(item.difficulty)}, rank ${item.rank} of ${rung.items.length} in "${rung.node.name}".`,
+          value: `Projected ${secs(t.seconds)} at ${pace.label} (no pauses); difficulty ${diff(item.difficulty)}, rank ${item.rank} of ${rung.items.length} in "${md(rung.node.name)}".${note}`,
         },
       });
     }

@@ -25,7 +25,13 @@ export function ladder(s: Snapshot): Ladder {
     min: r.min,
     max: r.max,
     paces: r.paces.map((p) => p.label),
-    items: r.items.map((it) => ({ line: it.node.line, text: it.node.text, difficulty: it.difficulty, rank: it.rank })),
+    items: r.items.map((it) => ({
+      line: it.node.line,
+      text: it.node.text,
+      difficulty: it.difficulty,
+      rank: it.rank,
+      estimatedWords: it.estimatedWords,
+    })),
   }));
   const steps: LadderStep[] = [];
   const withItems = a.rungs.filter((r) => r.items.length > 0);
@@ -66,5 +72,6 @@ export function itemAt(s: Snapshot, line: number): ItemAt | null {
     rungName: rung.node.name,
     pace: t?.pace.label ?? '',
     seconds: t?.seconds ?? 0,
+    estimatedWords: item.estimatedWords,
   };
 }

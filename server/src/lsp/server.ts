@@ -15,8 +15,12 @@ import {
   TextDocuments,
   type ClientCapabilities,
   type Connection,
+  type Disposable,
+  type FileSystemWatcher,
   type InitializeResult,
 } from 'vscode-languageserver/node';
+import { basename, dirname } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { TextDocument } from 'vscode-languageserver-textdocument';
 import { CONFIG_FILE_NAMES } from '../config/resolve';
 import type { WordData } from '../core/types';
@@ -25,7 +29,7 @@ import { codeActions, FIX_ALL_KIND } from './codeActions';
 import { codeLenses, SORT_RUNG_COMMAND } from './codeLens';
 import { completion, signatureHelp } from './completion';
 import { toLspDiagnostic, toLspTextEdit } from './convert';
-import { AnalysisStore, type Snapshot } from './documents';
+import { AnalysisStore, uriToPath, type Snapshot } from './documents';
 import { formatDocument } from './formatting';
 import { hover } from './hover';
 import { inlayHints } from './inlay';
@@ -38,8 +42,37 @@ import { documentSymbols, foldingRanges } from './symbols';
 /** Quiet time after the last keystroke before diagnostics are published again. */
 export const PUBLISH_DELAY_MS = 150;
 
-/** Workspace files whose change re-checks every open script: config files and lexicons. */
-export const WATCHED_GLOBS = [`**/{${CONFIG_FILE_NAMES.join(',')}}`, '**/*lexicon*', '**/*.lex'];
+/**
+ * Config files are watched by name everywhere (a new one in any folder may apply to a script);
+ * lexicons are watched by the paths the open scripts' configs resolved them to (fileWatchers).
+ */
+export const CONFIG_GLOB = `**/{${CONFIG_FILE_NAMES.join(',')}}`;
+
+const isConfigFile = (path: string): boolean => CONFIG_FILE_NAMES.includes(basename(path));
+
+/** Glob metacharacters in a file name matched literally. */
+const globLiteral = (name: string): string => name.replace(/[*?[\]{}]/g, (c) => `[${c}]`);
+
+/**
+ * The watchers to register: config files by name, and each lexicon file the open scripts use.
+ * Without relative-pattern support a lexicon is watched by its name anywhere in the workspace;
+ * the server then checks the full path of every change (AnalysisStore.dependsOn).
+ */
+export function fileWatchers(lexiconPaths: string[], relativePatterns: boolean): FileSystemWatcher[] {
+  const lexicons = lexiconPaths.map((p): FileSystemWatcher =>
+    relativePatterns
+      ? { globPattern: { baseUri: pathToFileURL(dirname(p)).href, pattern: globLiteral(basename(p)) } }
+      : { globPattern: `**/${globLiteral(basename(p))}` },
+  );
+  return [{ globPattern: CONFIG_GLOB }, ...lexicons];
+}
+
+function folderPaths(uris: string[]): string[] {
+  return uris.flatMap((u) => {
+    const p = uriToPath(u);
+    return p ? [p] : [];
+  });
+}
 
 const TRANSPORT_FLAGS = ['--stdio', '--node-ipc', '--socket', '--pipe', '--clientProcessId'];
 
@@ -83,13 +116,15 @@ export function startServer(): Connection {
   const published = new Map<string, number>();
 
   const cancelled = () => new ResponseError(LSPErrorCodes.RequestCancelled, 'request cancelled');
-  function guard<P, R>(name: string, fallback: R, fn: (p: P, token: CancellationToken) => R) {
+  // Handlers run synchronously, so a `$/cancelRequest` can only be seen before one starts: the
+  // connection marks a request cancelled when its cancellation arrives while it is still queued
+  // (typing fast queues several), and such a request is answered RequestCancelled unrun. A check
+  // after or inside a synchronous handler could never fire, so there is none.
+  function guard<P, R>(name: string, fallback: R, fn: (p: P) => R) {
     return (p: P, token?: CancellationToken): R | ResponseError<void> => {
-      const t = token ?? CancellationToken.None;
-      if (t.isCancellationRequested) return cancelled();
+      if ((token ?? CancellationToken.None).isCancellationRequested) return cancelled();
       try {
-        const r = fn(p, t);
-        return t.isCancellationRequested ? cancelled() : r;
+        return fn(p);
       } catch (err) {
         connection.console.error(`${name} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
         return fallback;
@@ -102,7 +137,8 @@ export function startServer(): Connection {
     return doc ? store.get(doc) : null;
   };
 
-  function publish(uri: string): void {
+  /** Publishes a script's diagnostics; `andFiles` also those of config and lexicon files. */
+  function publish(uri: string, andFiles = true): void {
     timers.delete(uri);
     try {
       const doc = documents.get(uri);
@@ -110,9 +146,53 @@ export function startServer(): Connection {
       const s = store.get(doc);
       published.set(uri, s.version);
       void connection.sendDiagnostics({ uri, version: s.version, diagnostics: s.problems.map((p) => toLspDiagnostic(p, uri)) });
+      if (andFiles) publishFiles();
     } catch (err) {
       connection.console.error(`publishing diagnostics for ${uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
     }
+  }
+
+  // Config and lexicon files are not open scripts, so their problems are published on their own
+  // URIs: again only when they differ from what was sent, and cleared once fixed or unused.
+  let filesPublished = new Map<string, string>();
+  function publishFiles(): void {
+    try {
+      const next = new Map<string, string>();
+      for (const [file, problems] of store.fileProblems()) {
+        const uri = pathToFileURL(file).href;
+        if (documents.get(uri)) continue; // An open document's diagnostics are its own analysis.
+        const diagnostics = problems.map((p) => toLspDiagnostic(p, uri));
+        const key = JSON.stringify(diagnostics);
+        next.set(uri, key);
+        if (filesPublished.get(uri) !== key) void connection.sendDiagnostics({ uri, diagnostics });
+      }
+      for (const uri of filesPublished.keys()) if (!next.has(uri)) void connection.sendDiagnostics({ uri, diagnostics: [] });
+      filesPublished = next;
+      updateWatchers();
+    } catch (err) {
+      connection.console.error(`publishing config diagnostics failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
+    }
+  }
+
+  // Watchers follow the lexicons the open scripts use: re-registered whenever that set changes.
+  let watcherKey = '';
+  let watcherRegistration: Promise<Disposable | undefined> = Promise.resolve(undefined);
+  function updateWatchers(): void {
+    const watched = caps.workspace?.didChangeWatchedFiles;
+    if (!watched?.dynamicRegistration) return;
+    const watchers = fileWatchers(store.lexiconPaths(isConfigFile), Boolean(watched.relativePatternSupport));
+    const key = JSON.stringify(watchers);
+    if (key === watcherKey) return;
+    watcherKey = key;
+    watcherRegistration = watcherRegistration.then(async (old) => {
+      old?.dispose();
+      try {
+        return await connection.client.register(DidChangeWatchedFilesNotification.type, { watchers });
+      } catch (e) {
+        connection.console.warn(`file watching not registered: ${String(e)}`);
+        return undefined;
+      }
+    });
   }
   function schedule(uri: string, delay = PUBLISH_DELAY_MS): void {
     clearTimeout(timers.get(uri));
@@ -134,7 +214,8 @@ export function startServer(): Connection {
   async function recheckAll(): Promise<void> {
     store.invalidate();
     for (const doc of documents.all()) await refreshSettings(doc.uri);
-    for (const doc of documents.all()) publish(doc.uri);
+    for (const doc of documents.all()) publish(doc.uri, false);
+    publishFiles();
     const ws = caps.workspace;
     if (ws?.inlayHint?.refreshSupport) void connection.languages.inlayHint.refresh().catch(() => undefined);
     if (ws?.semanticTokens?.refreshSupport) connection.languages.semanticTokens.refresh();
@@ -145,7 +226,7 @@ export function startServer(): Connection {
     caps = params.capabilities;
     configurationSupport = Boolean(caps.workspace?.configuration);
     const folders = params.workspaceFolders?.map((f) => f.uri) ?? (params.rootUri ? [params.rootUri] : []);
-    store.workspaceFolders = folders.flatMap((u) => (u.startsWith('file:') ? [decodeURIComponent(new URL(u).pathname)] : []));
+    store.workspaceFolders = folderPaths(folders);
     return {
       capabilities: {
         textDocumentSync: { openClose: true, change: TextDocumentSyncKind.Incremental, save: false },
@@ -174,10 +255,16 @@ export function startServer(): Connection {
         { section: 'rungs' } as never,
       ).catch(() => undefined);
     }
-    if (caps.workspace?.didChangeWatchedFiles?.dynamicRegistration) {
-      void connection.client
-        .register(DidChangeWatchedFilesNotification.type, { watchers: WATCHED_GLOBS.map((globPattern) => ({ globPattern })) })
-        .catch((e) => connection.console.warn(`file watching not registered: ${String(e)}`));
+    updateWatchers();
+    if (caps.workspace?.workspaceFolders) {
+      // Editor lexicon paths are relative to the folder holding the script, so a change of
+      // folders can change what a script is checked with.
+      connection.workspace.onDidChangeWorkspaceFolders((e) => {
+        const removed = new Set(folderPaths(e.removed.map((f) => f.uri)));
+        const kept = store.workspaceFolders.filter((f) => !removed.has(f));
+        store.workspaceFolders = [...kept, ...folderPaths(e.added.map((f) => f.uri)).filter((f) => !kept.includes(f))];
+        void recheckAll();
+      });
     }
   });
 
@@ -188,12 +275,18 @@ export function startServer(): Connection {
       for (const w of warnings) connection.console.warn(w);
       store.invalidate();
       for (const doc of documents.all()) store.setSettings(doc.uri, settings);
-      for (const doc of documents.all()) publish(doc.uri);
+      for (const doc of documents.all()) publish(doc.uri, false);
+      publishFiles();
       return;
     }
     void recheckAll();
   });
-  connection.onDidChangeWatchedFiles(() => void recheckAll());
+  // Clients may report any file (a broad watcher, or one by name only): re-check when a config
+  // file changed, or a file an open script's config or settings resolved to (a lexicon).
+  connection.onDidChangeWatchedFiles((p) => {
+    const paths = folderPaths(p.changes.map((c) => c.uri));
+    if (paths.some((f) => isConfigFile(f) || store.dependsOn(f))) void recheckAll();
+  });
 
   documents.onDidOpen((e) => {
     // Publish at once with the settings in hand, again if the client's settings differ.
@@ -211,6 +304,7 @@ export function startServer(): Connection {
     published.delete(e.document.uri);
     store.close(e.document.uri);
     void connection.sendDiagnostics({ uri: e.document.uri, diagnostics: [] });
+    publishFiles();
   });
 
   connection.onHover(guard('hover', null, (p) => {

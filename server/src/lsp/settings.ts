@@ -41,7 +41,10 @@ const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'obj
 const num = (v: unknown, fallback: number, min = 0): number =>
   typeof v === 'number' && Number.isFinite(v) && v >= min ? v : fallback;
 const bool = (v: unknown, fallback: boolean): boolean => (typeof v === 'boolean' ? v : fallback);
-const SEVERITIES = new Set<string>(['error', 'warning', 'info', 'hint', 'off']);
+const SEVERITY_LIST: readonly RuleSetting[] = ['error', 'warning', 'info', 'hint', 'off'];
+const SEVERITIES = new Set<string>(SEVERITY_LIST);
+/** "error, warning, info, hint or off", from the one list. */
+const SEVERITY_WORDS = `${SEVERITY_LIST.slice(0, -1).join(', ')} or ${SEVERITY_LIST[SEVERITY_LIST.length - 1]}`;
 
 /**
  * Reads whatever the client sent (possibly null, partial or mistyped) into complete settings.
@@ -57,7 +60,7 @@ export function normalizeSettings(raw: unknown): { settings: RungsSettings; warn
   if (isObject(r.rules)) {
     for (const [id, sev] of Object.entries(r.rules)) {
       if (typeof sev === 'string' && SEVERITIES.has(sev)) rules[id] = sev as RuleSetting;
-      else warnings.push(`rungs.rules.${id}: "${String(sev)}" is not error, warning, info or off`);
+      else warnings.push(`rungs.rules.${id}: "${String(sev)}" is not ${SEVERITY_WORDS}`);
     }
   }
   let paces = typeof r.paces === 'string' && r.paces.trim() ? r.paces : d.paces;

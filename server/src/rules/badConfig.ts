@@ -8,12 +8,15 @@ export const badConfig: Rule = {
   category: 'format',
   docs: [
     'Config files are JSON or YAML, never code. This rule reports, with the file, line and column:',
-    'a syntax error; a top-level value that is not an object; an unknown rule id under `rules`',
+    'a syntax error (a `.rungs.json` file must be strict JSON: no comments, no comma after the last',
+    'entry); a top-level value that is not an object; an unknown rule id under `rules`',
     '(with the nearest id) or a severity other than error, warning, info, hint or off; a `ladder`',
     'block with an unknown metric or a bad `maxStep`; a `lexicon` entry that is not a string or',
     'names a file that does not exist. Settings keys and values in a config file are checked like',
     'script settings and reported as `unknown-key` and `bad-value`. Whatever cannot be read is',
-    'ignored; the rest of the file still applies.',
+    'ignored and the rest of the file still applies. After a YAML syntax error, the top-level entry',
+    'the error falls in counts as unreadable (it may be misread); after a JSON syntax error, the',
+    'whole file does, since a JSON reader gives no partial result.',
   ].join(' '),
   // Reported by the config resolver (server/src/config/resolve.ts).
   check() {},

@@ -11,10 +11,11 @@ export const badValue: Rule = {
   docs: [
     'Reported at the value when it cannot be read for its key: a pace without a number, a unit',
     'per minute instead of per second, `@direction` other than rising or falling, a count that is',
-    'not a whole number, weights that do not add up, a script-wide key on a rung header, a',
-    '`@say` line without phones, a note with no sentence before its `|`. The message says what the',
-    'key expects, with an example. The setting is ignored and the default (or config value) stays',
-    'in force. The same checks apply to values in config files.',
+    'not a whole number, `@weights` that are not three numbers of 0 or more or are all 0 (they',
+    'need not add up to 1: the difficulty is their weighted mean), a script-wide key on a rung',
+    'header, a `@say` line without phones, a note with no sentence before its `|`. The message says',
+    'what the key expects, with an example. The setting is ignored and the default (or config',
+    'value) stays in force. The same checks apply to values in config files.',
   ].join(' '),
   // Reported by the core's parser and settings reader (core/parse.ts, core/options.ts).
   check() {},

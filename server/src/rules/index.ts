@@ -14,6 +14,7 @@ import { paceAboveNorm } from './paceAboveNorm';
 import { paceBelowBaseline } from './paceBelowBaseline';
 import { paceSlowsDown } from './paceSlowsDown';
 import { rungsOverlap } from './rungsOverlap';
+import { silentItem } from './silentItem';
 import { stepBackwards } from './stepBackwards';
 import { stepTooBig } from './stepTooBig';
 import { thinRung } from './thinRung';
@@ -22,6 +23,7 @@ import { unevenSteps } from './unevenSteps';
 import { unknownKey } from './unknownKey';
 import { unknownPhone } from './unknownPhone';
 import { unsortedRung } from './unsortedRung';
+import { unusedOverride } from './unusedOverride';
 
 /** Every rule, in documentation order: ladder, items, paces, then the format itself. */
 export const RULES: Rule[] = [
@@ -33,6 +35,7 @@ export const RULES: Rule[] = [
   unsortedRung,
   itemOutlier,
   duplicateItem,
+  silentItem,
   itemTooLong,
   estimatedWord,
   unknownPhone,
@@ -42,6 +45,7 @@ export const RULES: Rule[] = [
   paceBelowBaseline,
   unknownKey,
   badValue,
+  unusedOverride,
   badConfig,
   badDirective,
 ];

@@ -13,7 +13,10 @@ export function problemJson(p: Problem): unknown {
     rule: p.rule,
     message: p.message,
     ...(p.related?.length ? { related: p.related.map((r) => ({ ...pos(r), message: r.message })) } : {}),
-    ...(p.fix ? { fix: { title: p.fix.title, edits: p.fix.edits.map((e) => ({ ...pos(e), newText: e.newText })) } } : {}),
+    // `batch: false` tells a tool the fix is for a person to choose, never to apply in bulk.
+    ...(p.fix
+      ? { fix: { title: p.fix.title, edits: p.fix.edits.map((e) => ({ ...pos(e), newText: e.newText })), ...(p.fix.batch === false ? { batch: false } : {}) } }
+      : {}),
   };
 }
 

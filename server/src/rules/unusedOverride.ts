@@ -1,0 +1,44 @@
+// unused-override: a script `@say` line whose word no item ever speaks.
+import type { Rule } from './types';
+
+/** Why a written word can never be looked up as one spoken word, when its spelling says so. */
+function whyNever(word: string): string {
+  const reasons: string[] = [];
+  if (/[-‐‑]/.test(word)) reasons.push('a hyphenated word is looked up as its parts');
+  if (word.includes('.')) reasons.push('a full stop is never part of a spoken word (abbreviations are expanded)');
+  return reasons.length ? `: items are looked up word by word, and ${reasons.join(', and ')}` : '';
+}
+
+export const unusedOverride: Rule = {
+  id: 'unused-override',
+  summary: "A script's `@say` line names a word that no item speaks, so it changes nothing.",
+  defaultSeverity: 'warning',
+  category: 'format',
+  docs: [
+    'Pronunciations are looked up one spoken word at a time, after expansion: hyphenated compounds',
+    'are split into their parts (`mother-in-law` is looked up as mother, in, law), abbreviations',
+    'and numbers are spelt out (`Dr.` is spoken "doctor", `3` is "three"). A `@say` line in the',
+    'script whose word never occurs as a spoken word of any item has no effect, and the words it',
+    'was meant for keep their dictionary or estimated pronunciation. The rule reports the word on',
+    'its `@say` line and, for a hyphen or a full stop, says why it cannot match. Write the',
+    'override for the spoken word (`@say law = ...`, `@say doctor = ...`), or delete it if the',
+    'item it was for is gone. Workspace lexicon files are shared by many scripts and not checked.',
+  ].join(' '),
+  check(ctx, report) {
+    const spoken = new Set<string>();
+    for (const it of ctx.analysis.items) for (const w of it.words) spoken.add(w.spoken);
+    for (const o of ctx.analysis.script.overrides) {
+      if (spoken.has(o.word)) continue;
+      // The word as written on the @say line (overrides are stored in lower case).
+      const written = (ctx.lines[o.line] ?? '').slice(o.character, o.character + o.word.length) || o.word;
+      report({
+        line: o.line,
+        character: o.character,
+        endLine: o.line,
+        endCharacter: o.character + o.word.length,
+        message: `"${written}" is never spoken as a word in any item, so this @say line is not used${whyNever(o.word)}`,
+        unnecessary: true,
+      });
+    }
+  },
+};

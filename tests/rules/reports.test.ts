@@ -1,0 +1,71 @@
+// What single rules report, word for word, where the fixture snapshots would let a change slip by:
+// quick-fix-only fixes, the Unnecessary tag, facts-only pace messages, words with no estimate,
+// items with nothing to say and overrides no item uses.
+import { describe, expect, it } from 'vitest';
+import { lintText } from './check';
+
+const only = (text: string, rule: string) => lintText(text).filter((p) => p.rule === rule);
+
+describe('duplicate-item', () => {
+  it('marks the repeat unnecessary and offers its removal as a quick fix only', () => {
+    const [p] = only('== One\nCome in.\nSit down.\nCome in!\n', 'duplicate-item');
+    expect(p).toMatchObject({ line: 3, unnecessary: true, fix: { batch: false } });
+  });
+});
+
+describe('estimated-word', () => {
+  it('offers a letter-to-sound estimate as a quick fix only', () => {
+    const [p] = only('== One\nTeodric is here.\n', 'estimated-word');
+    expect(p.fix).toMatchObject({ batch: false, edits: [{ line: 0, character: 0, newText: '@say Teodric = T IY1 AA0 D R IH0 K\n' }] });
+  });
+
+  it('says plainly when no letter-to-sound rule applies, with no fix', () => {
+    const ps = only('== One\nΚαλημέρα Irene.\n', 'estimated-word');
+    expect(ps.map((p) => [p.character, p.endCharacter, p.message, p.fix])).toEqual([
+      [0, 8, 'no English letter-to-sound rule applies to "Καλημέρα"; add a pronunciation with @say Καλημέρα = PHONES', undefined],
+    ]);
+  });
+});
+
+describe('pace-below-baseline', () => {
+  it('states the pace, the baseline and their ratio, at info level, and nothing more', () => {
+    // 0.6 / 0.8 = 0.75.
+    const ps = only('@baseline 0.8 wps\n@paces 0.6, 1.5 wps\n== One\nCome in.\n', 'pace-below-baseline');
+    expect(ps.map((p) => `${p.line + 1} ${p.severity} ${p.message}`)).toEqual([
+      "2 info pace 0.6 wps is below the client's baseline of 0.8 wps (ratio 0.75)",
+    ]);
+  });
+});
+
+describe('silent-item', () => {
+  it('reports an item with no words to say, and not one whose digits are words', () => {
+    const ps = only('== One\n...\n!!! ???\n3!\nCome in.\n', 'silent-item');
+    expect(ps.map((p) => `${p.line + 1}:${p.character + 1}-${p.endCharacter + 1} ${p.severity} ${p.message}`)).toEqual([
+      '2:1-4 warning this item has no words to say (0 words)',
+      '3:1-8 warning this item has no words to say (0 words)',
+    ]);
+  });
+});
+
+describe('unused-override', () => {
+  const TEXT = [
+    '@say mother-in-law = M AH1 DH ER0 IH0 N L AO2',
+    '@say Dr. = D AA1 K T ER0',
+    '@say Okafor = OW0 K AA1 F AO0 R',
+    '@say doctor = D AA1 K T ER0',
+    '== One',
+    'My mother-in-law met Dr. Brown.',
+  ].join('\n');
+
+  it('names the word and, for a hyphen or a full stop, why it never matches', () => {
+    expect(only(TEXT, 'unused-override').map((p) => `${p.line + 1}:${p.character + 1}-${p.endCharacter + 1} ${p.unnecessary} ${p.message}`)).toEqual([
+      '1:6-19 true "mother-in-law" is never spoken as a word in any item, so this @say line is not used: items are looked up word by word, and a hyphenated word is looked up as its parts',
+      '2:6-9 true "Dr." is never spoken as a word in any item, so this @say line is not used: items are looked up word by word, and a full stop is never part of a spoken word (abbreviations are expanded)',
+      '3:6-12 true "Okafor" is never spoken as a word in any item, so this @say line is not used',
+    ]);
+  });
+
+  it('is silent once every override is spoken', () => {
+    expect(only('@say law = L AO1\n@say read = 2\n== One\nMy mother-in-law will read it.\n', 'unused-override')).toEqual([]);
+  });
+});
