@@ -54,6 +54,9 @@ export function editsFor(edit: WorkspaceEdit, uri: string): TextEdit[] {
 
 type Waiter = { test: () => boolean; resolve: () => void };
 
+/** Prefix of the ids of requests sent with sendBatch (the connection numbers its own). */
+const BATCH_ID = 'batch-';
+
 export class LspTestClient {
   readonly connection: ProtocolConnection;
   readonly proc: ChildProcess;
@@ -71,6 +74,8 @@ export class LspTestClient {
   settings: Record<string, unknown> = {};
   capabilities!: InitializeResult['capabilities'];
   private waiters: Waiter[] = [];
+  /** Responses to requests sent with sendBatch, by their (string) id. */
+  private readonly rawResponses = new Map<string, { result?: unknown; error?: { code: number; message: string } }>();
 
   constructor(args: string[] = ['lsp', '--stdio']) {
     if (!existsSync(join(ROOT, 'dist/rungs.js'))) throw new Error('dist/rungs.js is missing: run `npm run build` first');
@@ -117,6 +122,40 @@ export class LspTestClient {
       return { applied: true };
     });
     this.connection.listen();
+    // A second reader on the server's output sees the responses to sendBatch's requests, which
+    // the connection does not know (it drops responses to ids it did not send).
+    new StreamMessageReader(this.proc.stdout!).listen((m) => {
+      const r = m as { id?: unknown; result?: unknown; error?: { code: number; message: string } };
+      if (typeof r.id === 'string' && r.id.startsWith(BATCH_ID) && ('result' in r || 'error' in r)) {
+        this.rawResponses.set(r.id, r);
+        this.wake();
+      }
+    });
+  }
+
+  /**
+   * Writes JSON-RPC messages in a single write, so the server reads them together (the connection
+   * writes each message on its own turn). Requests must use ids made by `batchId`.
+   */
+  sendBatch(messages: object[]): void {
+    const frames = messages.map((m) => {
+      const body = Buffer.from(JSON.stringify({ jsonrpc: '2.0', ...m }), 'utf8');
+      return Buffer.concat([Buffer.from(`Content-Length: ${body.length}\r\n\r\n`, 'ascii'), body]);
+    });
+    this.proc.stdin!.write(Buffer.concat(frames));
+  }
+
+  private batchIds = 0;
+  batchId(): string {
+    return `${BATCH_ID}${++this.batchIds}`;
+  }
+
+  /** The answer to a request sent with sendBatch: its result, or a rejection with its error. */
+  async responseTo(id: string): Promise<unknown> {
+    await this.waitFor(() => this.rawResponses.has(id), `the response to ${id}`);
+    const r = this.rawResponses.get(id)!;
+    if (r.error) throw r.error;
+    return r.result;
   }
 
   private wake(): void {

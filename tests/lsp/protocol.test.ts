@@ -6,12 +6,10 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CodeAction, CompletionItem, Diagnostic, DocumentSymbol, Hover, InlayHint } from 'vscode-languageserver-protocol';
-import { CancellationTokenSource } from 'vscode-languageserver-protocol/node';
 import { analyze } from '../../server/src/core/analyze';
 import * as convert from '../../server/src/lsp/convert';
 import { lint } from '../../server/src/rules/index';
 import { ruleDocsUrl } from '../../server/src/rules/docs';
-import { bigScript } from './bigScript';
 import { words } from '../helpers/data';
 import { applyTextEdits, editsFor, fileUri, LspTestClient, ROOT } from '../helpers/lspClient';
 
@@ -410,13 +408,19 @@ describe('settings and robustness', () => {
     expect(await c.request('workspace/executeCommand', { command: 'rungs.sortRung', arguments: ['x', 'y'] })).toEqual({ applied: false });
     for (let line = 0; line < 9; line++) await hoverAt(line, 3, u);
     // A request cancelled while still queued is answered RequestCancelled without being run. The
-    // server is kept busy analysing a big script meanwhile, so the hover and its cancellation
-    // are both waiting when it next reads.
-    await c.open(fileUri(join(dir, 'busy.rungs')), bigScript(3000));
-    const source = new CancellationTokenSource();
-    const pending = c.connection.sendRequest('textDocument/hover', { textDocument: { uri: u }, position: { line: 1, character: 0 } }, source.token);
-    source.cancel();
+    // request and its $/cancelRequest go in one write, so the server reads them together and
+    // sees the cancellation before it starts the request.
+    const id = c.batchId();
+    c.sendBatch([
+      { id, method: 'textDocument/hover', params: { textDocument: { uri: u }, position: { line: 1, character: 0 } } },
+      { method: '$/cancelRequest', params: { id } },
+    ]);
+    const pending = c.responseTo(id);
     await expect(pending).rejects.toMatchObject({ code: -32800 });
+    // The same request not cancelled is answered.
+    const again = c.batchId();
+    c.sendBatch([{ id: again, method: 'textDocument/hover', params: { textDocument: { uri: u }, position: { line: 1, character: 0 } } }]);
+    expect(await c.responseTo(again)).toMatchObject({ contents: { kind: 'markdown' } });
     expect(hoverText(await hoverAt(6, 5))).toContain('5.28');
     expect(c.proc.exitCode).toBeNull();
   });

@@ -10,7 +10,7 @@ import type { Ladder } from '../../client/src/protocol';
 import type { Problem } from '../../server/src/core/types';
 import { codeActions, compatibleFixes, FIX_ALL_KIND } from '../../server/src/lsp/codeActions';
 import { AnalysisStore } from '../../server/src/lsp/documents';
-import { fileWatchers } from '../../server/src/lsp/server';
+import { fileWatchers } from '../../server/src/lsp/watch';
 import { normalizeSettings } from '../../server/src/lsp/settings';
 import { words } from '../helpers/data';
 import { applyTextEdits, editsFor } from '../helpers/lspClient';

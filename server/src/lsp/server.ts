@@ -16,20 +16,17 @@ import {
   type ClientCapabilities,
   type Connection,
   type Disposable,
-  type FileSystemWatcher,
   type InitializeResult,
 } from 'vscode-languageserver/node';
-import { basename, dirname } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { TextDocument } from 'vscode-languageserver-textdocument';
-import { CONFIG_FILE_NAMES } from '../config/resolve';
 import type { WordData } from '../core/types';
 import { loadWordTable } from '../data/wordTable';
 import { codeActions, FIX_ALL_KIND } from './codeActions';
 import { codeLenses, SORT_RUNG_COMMAND } from './codeLens';
 import { completion, signatureHelp } from './completion';
 import { toLspDiagnostic, toLspTextEdit } from './convert';
-import { AnalysisStore, uriToPath, type Snapshot } from './documents';
+import { AnalysisStore, type Snapshot } from './documents';
 import { formatDocument } from './formatting';
 import { hover } from './hover';
 import { inlayHints } from './inlay';
@@ -38,41 +35,10 @@ import { LEGEND, semanticTokens } from './semanticTokens';
 import { normalizeSettings } from './settings';
 import { sortRung } from './sortRung';
 import { documentSymbols, foldingRanges } from './symbols';
+import { fileWatchers, uriPaths, isConfigFile } from './watch';
 
 /** Quiet time after the last keystroke before diagnostics are published again. */
 export const PUBLISH_DELAY_MS = 150;
-
-/**
- * Config files are watched by name everywhere (a new one in any folder may apply to a script);
- * lexicons are watched by the paths the open scripts' configs resolved them to (fileWatchers).
- */
-export const CONFIG_GLOB = `**/{${CONFIG_FILE_NAMES.join(',')}}`;
-
-const isConfigFile = (path: string): boolean => CONFIG_FILE_NAMES.includes(basename(path));
-
-/** Glob metacharacters in a file name matched literally. */
-const globLiteral = (name: string): string => name.replace(/[*?[\]{}]/g, (c) => `[${c}]`);
-
-/**
- * The watchers to register: config files by name, and each lexicon file the open scripts use.
- * Without relative-pattern support a lexicon is watched by its name anywhere in the workspace;
- * the server then checks the full path of every change (AnalysisStore.dependsOn).
- */
-export function fileWatchers(lexiconPaths: string[], relativePatterns: boolean): FileSystemWatcher[] {
-  const lexicons = lexiconPaths.map((p): FileSystemWatcher =>
-    relativePatterns
-      ? { globPattern: { baseUri: pathToFileURL(dirname(p)).href, pattern: globLiteral(basename(p)) } }
-      : { globPattern: `**/${globLiteral(basename(p))}` },
-  );
-  return [{ globPattern: CONFIG_GLOB }, ...lexicons];
-}
-
-function folderPaths(uris: string[]): string[] {
-  return uris.flatMap((u) => {
-    const p = uriToPath(u);
-    return p ? [p] : [];
-  });
-}
 
 const TRANSPORT_FLAGS = ['--stdio', '--node-ipc', '--socket', '--pipe', '--clientProcessId'];
 
@@ -226,7 +192,7 @@ export function startServer(): Connection {
     caps = params.capabilities;
     configurationSupport = Boolean(caps.workspace?.configuration);
     const folders = params.workspaceFolders?.map((f) => f.uri) ?? (params.rootUri ? [params.rootUri] : []);
-    store.workspaceFolders = folderPaths(folders);
+    store.workspaceFolders = uriPaths(folders);
     return {
       capabilities: {
         textDocumentSync: { openClose: true, change: TextDocumentSyncKind.Incremental, save: false },
@@ -260,9 +226,9 @@ export function startServer(): Connection {
       // Editor lexicon paths are relative to the folder holding the script, so a change of
       // folders can change what a script is checked with.
       connection.workspace.onDidChangeWorkspaceFolders((e) => {
-        const removed = new Set(folderPaths(e.removed.map((f) => f.uri)));
+        const removed = new Set(uriPaths(e.removed.map((f) => f.uri)));
         const kept = store.workspaceFolders.filter((f) => !removed.has(f));
-        store.workspaceFolders = [...kept, ...folderPaths(e.added.map((f) => f.uri)).filter((f) => !kept.includes(f))];
+        store.workspaceFolders = [...kept, ...uriPaths(e.added.map((f) => f.uri)).filter((f) => !kept.includes(f))];
         void recheckAll();
       });
     }
@@ -284,7 +250,7 @@ export function startServer(): Connection {
   // Clients may report any file (a broad watcher, or one by name only): re-check when a config
   // file changed, or a file an open script's config or settings resolved to (a lexicon).
   connection.onDidChangeWatchedFiles((p) => {
-    const paths = folderPaths(p.changes.map((c) => c.uri));
+    const paths = uriPaths(p.changes.map((c) => c.uri));
     if (paths.some((f) => isConfigFile(f) || store.dependsOn(f))) void recheckAll();
   });
 
