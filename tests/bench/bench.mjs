@@ -48,8 +48,7 @@ for (let i = 0; i < RUNS; i++) {
 
 // 2. Analysis of the generated script in-process, after the tables are loaded, vs the floor's
 //    lookups of every word of the same script (in its own process, after its load).
-const { analyze, lint } = requireCore();
-const { loadWordTable } = requireData();
+const { analyze, lint, loadWordTable } = require(join(root, 'dist', 'bench-core.js'));
 const text = generateScript(ITEMS);
 const analysis = [];
 const linting = [];
@@ -70,12 +69,6 @@ for (let i = 0; i < RUNS; i++) {
   floorLookups.push(JSON.parse(wall([join(root, 'tests/bench/floor.mjs'), big]).out).lookupMs);
 }
 
-function requireCore() {
-  return require(join(root, 'dist', 'bench-core.js'));
-}
-function requireData() {
-  return require(join(root, 'dist', 'bench-core.js'));
-}
 
 const row = (name, ms, base, target) =>
   `${name.padEnd(34)} ${ms.toFixed(1).padStart(8)} ms   floor ${base.toFixed(1).padStart(8)} ms   ratio ${(ms / base).toFixed(2).padStart(6)}x${target ? `   (target <= ${target})` : ''}`;

@@ -1,12 +1,10 @@
 // pace-above-norm: a pace faster than adults read aloud.
-import { formatNumber } from '../core/pace';
 import type { Rule } from './types';
-import { paceRange, rungLabel, rungSyllableRate, rungWordRate } from './shared';
+import { paceRange, rungLabel, rungSyllableRate, rungWordRate, fmtLimit as f2 } from './shared';
 
 /** English read text runs near 6.2 syllables/s (Pellegrino, Coupé & Marsico 2011, Language 87(3); from memory). */
 export const READING_NORM_SPS = 6.2;
 
-const f2 = (n: number) => formatNumber(n, 2);
 
 export const paceAboveNorm: Rule = {
   id: 'pace-above-norm',

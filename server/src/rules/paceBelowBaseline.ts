@@ -1,9 +1,6 @@
 // pace-below-baseline: a pace slower than the client already speaks unassisted (a fact, not advice).
-import { formatNumber } from '../core/pace';
 import type { Rule } from './types';
-import { paceRange, rungLabel, rungWordRate } from './shared';
-
-const f2 = (n: number) => formatNumber(n, 2);
+import { paceRange, rungLabel, rungWordRate, fmtLimit as f2 } from './shared';
 
 export const paceBelowBaseline: Rule = {
   id: 'pace-below-baseline',

@@ -1,5 +1,6 @@
 // Small helpers the rules share: how rungs are named in messages, which number a ladder rule
 // reads (the composite difficulty or one metric), robust statistics, and where paces were set.
+import { median } from '../core/difficulty';
 import { formatNumber } from '../core/pace';
 import type { ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
 import type { LadderMetric, RuleContext } from './types';
@@ -38,12 +39,8 @@ export function metricOf(item: ItemAnalysis, metric: LadderMetric): number {
   }
 }
 
-export function median(xs: number[]): number {
-  if (!xs.length) return 0;
-  const s = [...xs].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
-}
+// The one median of the project (core/difficulty.ts), re-exported for the rules.
+export { median };
 
 /** A rung summarised on the chosen metric; rungs without items are left out of ladder checks. */
 export interface RungStat {
