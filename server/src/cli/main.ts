@@ -4,6 +4,7 @@
 import { EXIT_USAGE, UsageError, type CliIO } from './io';
 import { lintCommand } from './lint';
 import { scoreCommand } from './score';
+import { setsCommand } from './sets';
 import { lspCommand } from './lspCommand';
 
 export interface Command {
@@ -15,7 +16,7 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand, lintCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];

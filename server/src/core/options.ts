@@ -3,6 +3,7 @@
 // completion and docs, so they never disagree.
 import { DEFAULT_WEIGHTS } from './difficulty';
 import { makePace, parsePaces, READING_NORM_WPS } from './pace';
+import { DEFAULT_SET_OPTIONS, SET_KEYS } from './setOptions';
 import type { AnalysisOptions, Direction, Problem, Setting } from './types';
 import { DEFAULT_WCM_OPTIONS } from './wcm';
 
@@ -18,6 +19,7 @@ export function defaultOptions(): AnalysisOptions {
     weights: { ...DEFAULT_WEIGHTS },
     wcm: { ...DEFAULT_WCM_OPTIONS },
     readingNormWps: READING_NORM_WPS,
+    ...DEFAULT_SET_OPTIONS,
   };
 }
 
@@ -189,6 +191,7 @@ export const KEYS: KeySpec[] = [
     values: ['trained', 'untrained', 'control'],
     apply: () => null,
   },
+  ...SET_KEYS,
   {
     key: 'reading-norm',
     aliases: [],

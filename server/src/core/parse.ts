@@ -22,7 +22,7 @@ export const RUNG_KEYS = new Set(['pace', 'paces', 'set']);
 const SETTING_LINE = /^@([A-Za-z][\w-]*)(?:\s*:)?\s*(.*?)\s*$/;
 const INLINE_ATTR = /(^|\s)@([A-Za-z][\w-]*)/g;
 const ID_TOKEN = /(^|\s)#([\w.:-]+)/g;
-const SET_ATTR = /(^|\s)@set\s+([^@#]+?)\s*(?=$|\s[@#])/g;
+export const SET_ATTR = /(^|\s)@set\s+([^@#]+?)\s*(?=$|\s[@#])/g;
 
 export function splitLines(text: string): string[] {
   return text.split(/\r\n|\r|\n/);

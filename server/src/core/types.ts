@@ -91,7 +91,15 @@ export interface AnalysisOptions {
   wcm: WcmOptions;
   /** Adult reading-aloud norm in words per second (Brysbaert 2019: 183 wpm). */
   readingNormWps: number;
+  /** Matched sets (core/setOptions.ts): equivalence bound in SD units. */
+  setBound: number;
+  /** Matched sets: fewest items a set needs before it is compared. */
+  setMinItems: number;
+  /** Matched sets: compare over the whole script or rung by rung. */
+  setScope: SetScope;
 }
+
+export type SetScope = 'script' | 'rung';
 
 /** A pronunciation override: a spelling and its ARPAbet phones, or a choice of a listed variant. */
 export interface Override {

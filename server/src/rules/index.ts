@@ -15,6 +15,7 @@ import { paceBelowBaseline } from './paceBelowBaseline';
 import { paceSlowsDown } from './paceSlowsDown';
 import { rungsOverlap } from './rungsOverlap';
 import { silentItem } from './silentItem';
+import { smallSet } from './smallSet';
 import { stepBackwards } from './stepBackwards';
 import { stepTooBig } from './stepTooBig';
 import { thinRung } from './thinRung';
@@ -22,6 +23,7 @@ import type { LintSettings, Rule } from './types';
 import { unevenSteps } from './unevenSteps';
 import { unknownKey } from './unknownKey';
 import { unknownPhone } from './unknownPhone';
+import { unmatchedSets } from './unmatchedSets';
 import { unsortedRung } from './unsortedRung';
 import { unusedOverride } from './unusedOverride';
 
@@ -33,6 +35,8 @@ export const RULES: Rule[] = [
   rungsOverlap,
   thinRung,
   unsortedRung,
+  unmatchedSets,
+  smallSet,
   itemOutlier,
   duplicateItem,
   silentItem,

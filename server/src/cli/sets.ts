@@ -1,0 +1,92 @@
+// `rungs sets FILE... [--by script|rung] [--format table|csv|json]`: balance statistics of the
+// matched item sets of each script.
+import { basename, join, relative } from 'node:path';
+import { analyze } from '../core/analyze';
+import { compareSets } from '../core/sets';
+import type { Analysis, SetScope } from '../core/types';
+import { resolveScriptContext } from '../config/resolve';
+import { loadWordTable } from '../data/wordTable';
+import { lint } from '../rules/index';
+import { SET_RULE_IDS } from '../rules/setRules';
+import { parseArgs } from './args';
+import { expandPaths } from './files';
+import { formatSetsCsv, formatSetsJson, formatSetsTable, type SetsFile } from './formatSets';
+import { EXIT_OK, EXIT_USAGE, UsageError, type CliIO } from './io';
+import type { Command } from './main';
+
+const USAGE = [
+  'Usage: rungs sets FILE|FOLDER|- ... [--by script|rung] [--format table|csv|json]',
+  '',
+  '  Compares the items of each pair of @set labels on words, syllables, phonemes, WCM, Zipf and',
+  '  difficulty: means and SDs, Hedges\' g, Welch t, Mann-Whitney U and an equivalence test (TOST).',
+  '  --by      script (whole script; default unless @set-scope says rung) or rung (rung by rung)',
+  '  --format  table (default, for people), csv (spreadsheets), json (tools; schema in README)',
+].join('\n');
+
+export interface LoadedScript {
+  file: string;
+  shown: string;
+  text: string;
+  analysis: Analysis;
+  problems: ReturnType<typeof lint>;
+}
+
+/** Reads and analyses every script named on the command line; unreadable ones are reported. */
+export function loadScripts(
+  io: CliIO,
+  positionals: string[],
+  command: string,
+  scope?: SetScope,
+): { scripts: LoadedScript[]; code: number } {
+  const { files, missing } = expandPaths(positionals, io.cwd, io.fs);
+  let code = EXIT_OK;
+  for (const m of missing) {
+    io.stderr(`rungs ${command}: ${m}: no such file or folder\n`);
+    code = EXIT_USAGE;
+  }
+  if (!files.length && !missing.length) {
+    io.stderr(`rungs ${command}: no *.rungs files found\n`);
+    return { scripts: [], code: EXIT_USAGE };
+  }
+  const data = loadWordTable();
+  const scripts: LoadedScript[] = [];
+  for (const file of files) {
+    const shown = file === '-' ? '<stdin>' : relative(io.cwd, file) || basename(file);
+    let text: string;
+    try {
+      text = file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
+    } catch (err) {
+      io.stderr(`rungs ${command}: ${shown}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
+      code = EXIT_USAGE;
+      continue;
+    }
+    const ctx = resolveScriptContext(file === '-' ? join(io.cwd, 'stdin.rungs') : file, io.fs);
+    const options = scope ? { ...ctx.options, setScope: scope } : ctx.options;
+    const analysis = analyze({ text, data, options, lexicon: ctx.lexicon });
+    scripts.push({ file, shown, text, analysis, problems: lint(analysis, text, ctx.lint) });
+  }
+  return { scripts, code };
+}
+
+export const setsCommand: Command = {
+  name: 'sets',
+  summary: 'compare matched item sets: balance statistics and equivalence tests',
+  usage: USAGE,
+  run(io: CliIO, argv: string[]): number {
+    const args = parseArgs(argv, {
+      format: { value: true, choices: ['table', 'csv', 'json'], alias: 'f' },
+      by: { value: true, choices: ['script', 'rung'] },
+    });
+    if (!args.positionals.length) throw new UsageError('give at least one script file or folder');
+    const format = (args.flags.get('format') as string | undefined) ?? 'table';
+    const by = args.flags.get('by') as SetScope | undefined;
+    const { scripts, code } = loadScripts(io, args.positionals, 'sets', by);
+    const out: SetsFile[] = scripts.map((s) => ({
+      file: s.shown,
+      comparison: compareSets(s.analysis),
+      problems: s.problems.filter((p) => SET_RULE_IDS.includes(p.rule)),
+    }));
+    if (out.length) io.stdout(format === 'json' ? formatSetsJson(out) : format === 'csv' ? formatSetsCsv(out) : formatSetsTable(out));
+    return code;
+  },
+};

@@ -1,0 +1,72 @@
+// Settings of the matched-set checks, kept together so the settings table can take them as a block:
+// `@set-bound` (equivalence bound in SD units), `@set-min-items` (fewest items a set needs to be
+// tested) and `@set-scope` (compare sets over the whole script or rung by rung).
+import type { AnalysisOptions, SetScope } from './types';
+
+export interface SetOptions {
+  setBound: number;
+  setMinItems: number;
+  setScope: SetScope;
+}
+
+/**
+ * ±0.5 SD is a project convention, not a standard: a medium standardised difference is the
+ * largest a matched pair of sets may plausibly hide. Five items is the fewest for which a set's
+ * SD means anything; scripts are compared whole unless asked, as most trial designs match the
+ * full sets.
+ */
+export const DEFAULT_SET_OPTIONS: SetOptions = { setBound: 0.5, setMinItems: 5, setScope: 'script' };
+
+interface SetKeySpec {
+  key: string;
+  aliases: string[];
+  scope: 'script';
+  summary: string;
+  example: string;
+  values?: string[];
+  apply(value: string, o: AnalysisOptions): string | null;
+}
+
+export const SET_KEYS: SetKeySpec[] = [
+  {
+    key: 'set-bound',
+    aliases: [],
+    scope: 'script',
+    summary: 'Equivalence bound for matched sets, in standard deviations (default 0.5; a project convention).',
+    example: '0.5',
+    apply(value, o) {
+      const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*(?:sd)?\s*$/i.exec(value);
+      const n = m ? Number(m[1]) : NaN;
+      if (!(n > 0)) return `@set-bound must be a number of standard deviations above 0, e.g. "0.5", not "${value.trim()}"`;
+      o.setBound = n;
+      return null;
+    },
+  },
+  {
+    key: 'set-min-items',
+    aliases: [],
+    scope: 'script',
+    summary: 'Fewest items a matched set needs before it is compared (default 5; at least 2).',
+    example: '5',
+    apply(value, o) {
+      const v = value.trim();
+      if (!/^\d+$/.test(v) || Number(v) < 2) return `@set-min-items must be a whole number, 2 or more, not "${v}"`;
+      o.setMinItems = Number(v);
+      return null;
+    },
+  },
+  {
+    key: 'set-scope',
+    aliases: [],
+    scope: 'script',
+    summary: 'Compare matched sets over the whole script (default) or rung by rung.',
+    example: 'rung',
+    values: ['script', 'rung'],
+    apply(value, o) {
+      const v = value.trim().toLowerCase();
+      if (v !== 'script' && v !== 'rung') return `@set-scope is script or rung, not "${value.trim()}"`;
+      o.setScope = v;
+      return null;
+    },
+  },
+];
