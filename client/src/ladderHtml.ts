@@ -3,6 +3,7 @@
 // without an editor. Every string that came from the script is escaped here; colours come from
 // the editor theme's CSS variables, so the view follows light, dark and high-contrast themes.
 import { estimatedMark, estimatedNote } from './present';
+import { SET_MARK_CSS, setLegend, setMarks, setMarkSvg } from './ladderSets';
 import type { Ladder, LadderProblem, LadderRung, LadderStep } from './protocol';
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
@@ -65,6 +66,7 @@ export function renderLadderBody(ladder: Ladder | null): string {
   }
 
   // Items, spread across their rung's band by rank so the order within a rung shows too.
+  const marks = setMarks(ladder);
   ladder.rungs.forEach((r, i) => {
     const count = r.items.length;
     r.items.forEach((it) => {
@@ -75,7 +77,8 @@ export function renderLadderBody(ladder: Ladder | null): string {
       const note = estimatedNote(est);
       out.push(
         `<circle class="item" data-line="${it.line}"${est ? ` data-estimated="${est}"` : ''} tabindex="0" role="button" cx="${cx.toFixed(1)}" cy="${y(it.difficulty).toFixed(1)}" r="4.5">` +
-          `<title>${escapeHtml(it.text)} — difficulty ${estimatedMark(est)}${fmt(it.difficulty)}, rank ${it.rank} of ${count} (line ${it.line + 1})${note ? `; ${note}` : ''}</title></circle>`,
+          `<title>${escapeHtml(it.text)} — difficulty ${estimatedMark(est)}${fmt(it.difficulty)}, rank ${it.rank} of ${count} (line ${it.line + 1})${note ? `; ${note}` : ''}${it.sets?.length ? `; set ${escapeHtml(it.sets.join(', '))}` : ''}</title></circle>` +
+          setMarkSvg(marks, it, cx, y(it.difficulty), escapeHtml),
       );
     });
   });
@@ -139,7 +142,7 @@ export function renderLadderBody(ladder: Ladder | null): string {
   const dir = ladder.direction === 'falling' ? 'falling' : 'rising';
   const anyEstimated = ladder.rungs.some((r) => rungEstimated(r) > 0);
   const estimatedLegend = anyEstimated ? ` Hollow points and ${estimatedMark(1)} mark difficulties that rest on words with an estimated pronunciation.` : '';
-  out.push(`<p class="legend">Direction ${dir}; allowed step ${fmt(ladder.maxStep)} points (shaded).${estimatedLegend} Click a point, a mark or a rung to go to its line.</p>`);
+  out.push(`<p class="legend">Direction ${dir}; allowed step ${fmt(ladder.maxStep)} points (shaded).${estimatedLegend}${setLegend(marks, escapeHtml)} Click a point, a mark or a rung to go to its line.</p>`);
   return out.join('\n');
 }
 
@@ -167,6 +170,7 @@ table.summary tr[data-line] { cursor: pointer; }
 table.summary tr[data-line]:hover { background: var(--vscode-list-hoverBackground); }
 td.problem { color: var(--vscode-errorForeground); }
 .legend, .empty { color: var(--vscode-descriptionForeground); }
+${SET_MARK_CSS}
 `;
 
 // The page's only script: clicks and keys post the line to go to; updates swap the body.

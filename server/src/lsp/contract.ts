@@ -11,6 +11,8 @@ export interface LadderItem {
   rank: number;
   /** Words of the item whose pronunciation is estimated (no dictionary entry or override). */
   estimatedWords?: number;
+  /** The item's set labels in force (`@set`), for the set marks. */
+  sets?: string[];
 }
 
 export interface LadderRung {

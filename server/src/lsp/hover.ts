@@ -8,6 +8,7 @@ import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
 import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
 import { WCM_PARAMETER_NAMES } from '../core/wcm';
 import type { Snapshot } from './documents';
+import { setLabelHover } from './setHover';
 import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, rate, secs, signed, total, two } from './format';
 
 const markdown = (value: string, line: number, start: number, end: number): Hover => ({
@@ -144,6 +145,8 @@ function settingHoverText(setting: Setting): string | null {
 export function hover(s: Snapshot, line: number, character: number): Hover | null {
   const item = s.itemAt(line);
   if (item) {
+    const onLabel = setLabelHover(s, item, character);
+    if (onLabel) return onLabel;
     const hit = item.words.filter((w) => character >= w.start && character <= w.end);
     if (hit.length && character < item.node.textEnd + 1) {
       const t = hit[0];

@@ -31,6 +31,7 @@ export function ladder(s: Snapshot): Ladder {
       difficulty: it.difficulty,
       rank: it.rank,
       estimatedWords: it.estimatedWords,
+      sets: it.sets,
     })),
   }));
   const steps: LadderStep[] = [];

@@ -6,7 +6,7 @@ export const smallSet: Rule = {
   id: 'small-set',
   summary: 'A `@set` set holds fewer items than `@set-min-items` (default 5), too few to compare.',
   defaultSeverity: 'warning',
-  category: 'ladder',
+  category: 'item',
   docs: [
     'A set needs enough items for its mean and spread to mean anything. When two or more set labels',
     'meet in the scope compared (the whole script, or each rung with `@set-scope rung`), every set',

@@ -10,7 +10,7 @@ export const unmatchedSets: Rule = {
   id: 'unmatched-sets',
   summary: 'Two `@set` sets are not shown equivalent on a metric (TOST within ±`@set-bound` SD).',
   defaultSeverity: 'warning',
-  category: 'ladder',
+  category: 'item',
   docs: [
     'Trained and untrained sets must be matched on what drives difficulty. For every pair of set',
     'labels (over the whole script, or rung by rung with `@set-scope rung`) and every metric (words,',
