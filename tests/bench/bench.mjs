@@ -8,6 +8,7 @@ import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { generateScript } from './generate.mjs';
+import { benchBalance } from './balance.mjs';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const require = createRequire(import.meta.url);
@@ -80,3 +81,4 @@ console.log(`${'  (floor load inside its process)'.padEnd(34)} ${median(floorLoa
 console.log(row('analysis of the whole script', median(analysis), median(floorLookups), '2x'));
 console.log(`${'  per item'.padEnd(34)} ${((1000 * median(analysis)) / items).toFixed(2).padStart(8)} µs`);
 console.log(row('every rule on the analysis (lint)', median(linting), median(floorLookups)));
+for (const line of benchBalance({ analyze, balanceSets: require(join(root, 'dist', 'bench-core.js')).balanceSets }, loadWordTable(join(root, 'dist', 'data')))) console.log(line);

@@ -2,3 +2,4 @@
 export { analyze } from '../../server/src/core/analyze';
 export { loadWordTable } from '../../server/src/data/wordTable';
 export { lint } from '../../server/src/rules/index';
+export { balanceSets } from '../../server/src/core/balance';

@@ -1,5 +1,6 @@
 // Renderers of `rungs sets`: one SetComparison per file in, text out (table, CSV, JSON).
 import { CAUTION } from '../core/caution';
+import type { BalanceResult } from '../core/balance';
 import type { Problem } from '../core/types';
 import { SET_METRICS, type SetComparison } from '../core/sets';
 import { BALANCE_COLUMNS, balanceRows, pairTitle } from '../core/setTable';
@@ -110,6 +111,66 @@ export function formatSetsTable(files: SetsFile[]): string {
   }
   out.push('Equivalence: two one-sided Welch tests (TOST, alpha .05 each, 90 % CI) against ±bound × sqrt((SD_A² + SD_B²) / 2).');
   out.push('A non-significant t or U alone does not show that sets are matched.');
+  out.push(CAUTION);
+  return `${out.join('\n')}\n`;
+}
+
+export interface BalancedFile {
+  file: string;
+  result: BalanceResult;
+  /** The proposal was written into the file (--fix). */
+  written: boolean;
+  /** Time the search took, in milliseconds (shown to people, left out of JSON so it stays stable). */
+  ms: number;
+}
+
+const margin = (n: number): string => (Number.isFinite(n) ? n.toFixed(3) : '—');
+
+/** The balancer's proposal: changes, worst margin before and after, and both sets of tables. */
+export function formatBalance(files: BalancedFile[], format: string): string {
+  if (format === 'json') {
+    const one = (f: BalancedFile) => ({
+      file: f.file,
+      seed: f.result.seed,
+      iterations: f.result.iterations,
+      movable: f.result.movable,
+      worstMarginBefore: Number.isFinite(f.result.worstBefore) ? round(f.result.worstBefore) : null,
+      worstMarginAfter: Number.isFinite(f.result.worstAfter) ? round(f.result.worstAfter) : null,
+      changes: f.result.changes.map((c) => ({ line: c.line + 1, from: c.from, to: c.to })),
+      written: f.written,
+      before: setsJson({ file: f.file, comparison: f.result.before, problems: [] }),
+      after: setsJson({ file: f.file, comparison: f.result.after, problems: [] }),
+    });
+    return `${JSON.stringify(files.length === 1 ? one(files[0]) : files.map(one), null, 2)}\n`;
+  }
+  if (format === 'csv') {
+    const rows = ['file,line,from,to'];
+    for (const f of files) for (const c of f.result.changes) rows.push([f.file, c.line + 1, c.from, c.to].map(csvCell).join(','));
+    return `${rows.join('\n')}\n`;
+  }
+  const out: string[] = [];
+  for (const f of files) {
+    const r = f.result;
+    out.push(`${f.file}  (seed ${r.seed}; ${r.iterations} moves over ${r.movable} movable items in ${Math.round(f.ms)} ms)`);
+    if (!r.changes.length) {
+      out.push(
+        r.movable < 2
+          ? '  nothing to balance: no rung has items of two sets with their own @set label'
+          : !r.before.pairs.length
+            ? `  nothing to balance: no two sets are large enough to compare (@set-min-items ${r.before.minItems})`
+            : '  no better split found: the labels stay as they are',
+      );
+      out.push(...balanceTableText(r.before));
+    } else {
+      out.push(`  worst equivalence margin ${margin(r.worstBefore)} -> ${margin(r.worstAfter)} SD (positive = shown equivalent on every metric)`);
+      out.push(`  ${r.changes.length} label${r.changes.length === 1 ? '' : 's'} ${f.written ? 'changed' : 'to change (run again with --fix to write them)'}:`);
+      for (const c of r.changes) out.push(`    line ${c.line + 1}: ${c.from} -> ${c.to}`);
+      out.push('', '  Before:', ...balanceTableText(r.before, '    '), '', '  After:', ...balanceTableText(r.after, '    '));
+    }
+    out.push('');
+  }
+  out.push('The balancer swaps @set labels between items of the same rung (Armstrong, Watson & Plaut 2012: stochastic search);');
+  out.push('it changes nothing else. Check the proposal: matching on numbers does not replace matching on baseline accuracy.');
   out.push(CAUTION);
   return `${out.join('\n')}\n`;
 }

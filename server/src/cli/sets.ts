@@ -2,6 +2,8 @@
 // matched item sets of each script.
 import { basename, join, relative } from 'node:path';
 import { analyze } from '../core/analyze';
+import { balanceSets } from '../core/balance';
+import { applyFixes } from '../rules/fixes';
 import { compareSets } from '../core/sets';
 import type { Analysis, SetScope } from '../core/types';
 import { resolveScriptContext } from '../config/resolve';
@@ -10,17 +12,22 @@ import { lint } from '../rules/index';
 import { SET_RULE_IDS } from '../rules/setRules';
 import { parseArgs } from './args';
 import { expandPaths } from './files';
-import { formatSetsCsv, formatSetsJson, formatSetsTable, type SetsFile } from './formatSets';
+import { formatBalance, formatSetsCsv, formatSetsJson, formatSetsTable, type BalancedFile, type SetsFile } from './formatSets';
 import { EXIT_OK, EXIT_USAGE, UsageError, type CliIO } from './io';
 import type { Command } from './main';
 
 const USAGE = [
   'Usage: rungs sets FILE|FOLDER|- ... [--by script|rung] [--format table|csv|json]',
+  '                  [--balance [--seed N] [--fix]]',
   '',
   '  Compares the items of each pair of @set labels on words, syllables, phonemes, WCM, Zipf and',
   '  difficulty: means and SDs, Hedges\' g, Welch t, Mann-Whitney U and an equivalence test (TOST).',
   '  --by      script (whole script; default unless @set-scope says rung) or rung (rung by rung)',
   '  --format  table (default, for people), csv (spreadsheets), json (tools; schema in README)',
+  '  --balance propose which items carry which label (within each rung, set sizes kept) so the sets',
+  '            match on every metric at once; prints the tables before and after',
+  '  --seed    seed of the search (default 1): the same seed gives the same proposal',
+  '  --fix     with --balance: write the proposal into the file (only @set labels change)',
 ].join('\n');
 
 export interface LoadedScript {
@@ -76,11 +83,20 @@ export const setsCommand: Command = {
     const args = parseArgs(argv, {
       format: { value: true, choices: ['table', 'csv', 'json'], alias: 'f' },
       by: { value: true, choices: ['script', 'rung'] },
+      balance: {},
+      seed: { value: true },
+      fix: {},
     });
+    const balance = args.flags.has('balance');
+    const seedText = args.flags.get('seed') as string | undefined;
+    if (!balance && (seedText !== undefined || args.flags.has('fix'))) throw new UsageError('--seed and --fix go with --balance');
+    if (seedText !== undefined && !/^\d+$/.test(seedText)) throw new UsageError(`--seed takes a whole number, not "${seedText}"`);
+    if (args.flags.has('fix') && args.positionals.includes('-')) throw new UsageError('--fix cannot write to standard input');
     if (!args.positionals.length) throw new UsageError('give at least one script file or folder');
     const format = (args.flags.get('format') as string | undefined) ?? 'table';
     const by = args.flags.get('by') as SetScope | undefined;
     const { scripts, code } = loadScripts(io, args.positionals, 'sets', by);
+    if (balance) return balanceScripts(io, scripts, { seed: seedText === undefined ? 1 : Number(seedText), fix: args.flags.has('fix'), format }, code);
     const out: SetsFile[] = scripts.map((s) => ({
       file: s.shown,
       comparison: compareSets(s.analysis),
@@ -90,3 +106,21 @@ export const setsCommand: Command = {
     return code;
   },
 };
+
+function balanceScripts(io: CliIO, scripts: LoadedScript[], o: { seed: number; fix: boolean; format: string }, code: number): number {
+  const out: BalancedFile[] = [];
+  for (const s of scripts) {
+    const t0 = performance.now();
+    const result = balanceSets(s.analysis, s.text, { seed: o.seed });
+    const ms = performance.now() - t0;
+    let written = false;
+    if (o.fix && result.edits.length) {
+      const fixed = applyFixes(s.text, [{ title: 'Balance sets', edits: result.edits }]);
+      io.fs.writeFile(s.file, fixed.text);
+      written = true;
+    }
+    out.push({ file: s.shown, result, written, ms });
+  }
+  if (out.length) io.stdout(formatBalance(out, o.format));
+  return code;
+}

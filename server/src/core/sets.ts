@@ -5,7 +5,7 @@
 // The verdict is the equivalence test (TOST on Welch's t against ±bound SD), never the mere
 // absence of a significant difference (Sassenhagen & Alday 2016, Brain and Language 162;
 // Lakens 2017, Social Psychological and Personality Science 8(4)); Hedges' g stands beside it.
-import { averageSd, hedgesG, mannWhitney, summarize, tostWelch, welch, type MwuMethod } from './stats';
+import { averageSd, hedgesG, mannWhitney, summarize, tostWelch, welch, type MwuMethod, type Summary, type TostResult } from './stats';
 import { DEFAULT_SET_OPTIONS, type SetOptions } from './setOptions';
 import type { Analysis, ItemAnalysis, SetScope } from './types';
 
@@ -109,14 +109,28 @@ export interface SetComparison {
 /** The labels of each item; the balancer passes a proposed assignment instead of the script's own. */
 export type LabelsOf = (item: ItemAnalysis) => readonly string[];
 
+/** The TOST of two summaries against ±bound SD (null when it is undefined), and its SD. */
+function tostInSd(sa: Summary, sb: Summary, bound: number): { tost: TostResult | null; sd: number } {
+  const sd = averageSd(sa, sb);
+  return { tost: sd > 0 ? tostWelch(sa, sb, bound * sd, TOST_ALPHA) : null, sd };
+}
+
+/**
+ * The equivalence margin of two summaries in SD units, exactly as compareMetric computes it; the
+ * balancer calls this in its inner loop.
+ */
+export function metricMargin(sa: Summary, sb: Summary, bound: number): number {
+  const { tost, sd } = tostInSd(sa, sb, bound);
+  return tost ? tost.margin / sd : sa.mean === sb.mean ? bound : -bound;
+}
+
 export function compareMetric(a: readonly number[], b: readonly number[], bound: number): MetricComparison {
   const sa = summarize(a);
   const sb = summarize(b);
   const g = hedgesG(sa, sb);
   const w = welch(sa, sb);
-  const sd = averageSd(sa, sb);
+  const { tost, sd } = tostInSd(sa, sb, bound);
   const boundRaw = bound * sd;
-  const tost = sd > 0 ? tostWelch(sa, sb, boundRaw, TOST_ALPHA) : null;
   const mwu = mannWhitney(a, b) ?? { u: NaN, p: NaN, method: 'normal' as const };
   const diff = sa.mean - sb.mean;
   const constantMatch = diff === 0;
@@ -143,7 +157,7 @@ export function compareMetric(a: readonly number[], b: readonly number[], bound:
     ciLow: tost?.ciLow ?? null,
     ciHigh: tost?.ciHigh ?? null,
     equivalent: tost ? tost.equivalent : constantMatch,
-    margin: tost ? tost.margin / sd : constantMatch ? bound : -bound,
+    margin: metricMargin(sa, sb, bound),
   };
 }
 

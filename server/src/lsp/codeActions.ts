@@ -13,6 +13,7 @@ import type { ItemAnalysis, Problem, TextEdit, WordAnalysis } from '../core/type
 import { fromLspRange, rangesTouch, toLspDiagnostic, toLspTextEdit } from './convert';
 import type { Snapshot } from './documents';
 import { eolOf, sortRung } from './sortRung';
+import { balanceRungActions } from './balanceRung';
 
 export const FIX_ALL_KIND = `${CodeActionKind.SourceFixAll}.rungs`;
 
@@ -128,6 +129,7 @@ export function codeActions(s: Snapshot, params: CodeActionParams): CodeAction[]
     const e = sortRung(s, rung);
     const dup = e && actions.some((a) => JSON.stringify(a.edit) === JSON.stringify(edit(s, [e])));
     if (e && !dup) actions.push({ title: `Sort rung "${rung.node.name}" by difficulty`, kind: CodeActionKind.RefactorRewrite, edit: edit(s, [e]) });
+    actions.push(...balanceRungActions(s, rung));
   }
 
   if (only?.some((k) => FIX_ALL_KIND.startsWith(k) && k.startsWith(CodeActionKind.Source))) {
