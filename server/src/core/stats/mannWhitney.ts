@@ -26,14 +26,32 @@ export interface MwuResult {
 /** Largest sample size for which the exact distribution is used (as R's wilcox.test: n < 50). */
 export const EXACT_LIMIT = 49;
 
+// Distributions already built, by sizes: the editor re-checks the same sets on every keystroke,
+// and a 49 by 49 table takes some 100 ms to build. The distribution for (m, n) is that for
+// (n, m) (U and mn - U have the same law), so one entry serves both orders.
+const built = new Map<string, Float64Array>();
+const BUILT_LIMIT = 64;
+
 /**
  * Probabilities of U = 0..m·n for samples of m and n values without ties under H0.
- * The table is filled row by row over m; each cell is a probability vector.
+ * The table is filled row by row over m; each cell is a probability vector. Callers must not
+ * modify the array returned (it is shared).
  */
 export function exactUDistribution(m: number, n: number): Float64Array {
   if (!Number.isInteger(m) || !Number.isInteger(n) || m < 0 || n < 0) {
     throw new RangeError(`sample sizes must be whole numbers 0 or more, not ${m} and ${n}`);
   }
+  const key = m <= n ? `${m},${n}` : `${n},${m}`;
+  let dist = built.get(key);
+  if (!dist) {
+    dist = buildDistribution(Math.min(m, n), Math.max(m, n));
+    if (built.size >= BUILT_LIMIT) built.delete(built.keys().next().value!);
+    built.set(key, dist);
+  }
+  return dist;
+}
+
+function buildDistribution(m: number, n: number): Float64Array {
   // prev[j] = distribution for (i - 1, j); cur[j] = for (i, j).
   let prev: Float64Array[] = [];
   for (let j = 0; j <= n; j++) prev.push(Float64Array.of(1)); // m = 0: U is always 0.
