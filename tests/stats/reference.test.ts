@@ -3,19 +3,8 @@
 import fc from 'fast-check';
 import ttest2 from '@stdlib/stats-ttest2';
 import { describe, expect, it } from 'vitest';
+import { seededRandom as rng } from '../../server/src/core/balance';
 import { hedgesG, mannWhitney, summarize, tostWelch, welch } from '../../server/src/core/stats';
-
-/** A small seeded generator (mulberry32) so the random sets are the same on every run. */
-function rng(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 describe('Welch t agrees with @stdlib/stats-ttest2 to 1e-6', () => {
   it('on 200 seeded random pairs of sets (sizes 2-40, mixed spreads and shifts)', () => {

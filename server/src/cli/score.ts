@@ -1,14 +1,9 @@
 // `rungs score FILE... [--format table|csv|json]`: per-item scores of each script.
-import { basename, join, relative } from 'node:path';
-import { analyze } from '../core/analyze';
 import { CAUTION } from '../core/caution';
-import { resolveScriptContext } from '../config/resolve';
-import { loadWordTable } from '../data/wordTable';
-import { lint } from '../rules/index';
 import { parseArgs } from './args';
-import { expandPaths } from './files';
 import { formatCsv, formatJson, formatTable, type ScoredFile } from './formatScore';
-import { EXIT_OK, EXIT_USAGE, UsageError, type CliIO } from './io';
+import { UsageError, type CliIO } from './io';
+import { loadScripts } from './scripts';
 import type { Command } from './main';
 
 export const scoreCommand: Command = {
@@ -24,32 +19,8 @@ export const scoreCommand: Command = {
     const args = parseArgs(argv, { format: { value: true, choices: ['table', 'csv', 'json'], alias: 'f' } });
     if (!args.positionals.length) throw new UsageError('give at least one script file or folder');
     const format = (args.flags.get('format') as string | undefined) ?? 'table';
-    const { files, missing } = expandPaths(args.positionals, io.cwd, io.fs);
-    let code = EXIT_OK;
-    for (const m of missing) {
-      io.stderr(`rungs score: ${m}: no such file or folder\n`);
-      code = EXIT_USAGE;
-    }
-    const data = loadWordTable();
-    const scored: ScoredFile[] = [];
-    for (const file of files) {
-      const shown = file === '-' ? '<stdin>' : relative(io.cwd, file) || basename(file);
-      let text: string;
-      try {
-        text = file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
-      } catch (err) {
-        io.stderr(`rungs score: ${shown}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
-        code = EXIT_USAGE;
-        continue;
-      }
-      const ctx = resolveScriptContext(file === '-' ? join(io.cwd, 'stdin.rungs') : file, io.fs);
-      const analysis = analyze({ text, data, options: ctx.options, lexicon: ctx.lexicon });
-      scored.push({ file: shown, analysis, problems: lint(analysis, text, ctx.lint) });
-    }
-    if (!files.length && !missing.length) {
-      io.stderr('rungs score: no *.rungs files found\n');
-      return EXIT_USAGE;
-    }
+    const { scripts, code } = loadScripts(io, args.positionals, 'score');
+    const scored: ScoredFile[] = scripts.map((s) => ({ file: s.shown, analysis: s.analysis, problems: s.problems }));
     if (scored.length) {
       io.stdout(format === 'json' ? formatJson(scored) : format === 'csv' ? formatCsv(scored) : formatTable(scored, CAUTION));
     }

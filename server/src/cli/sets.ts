@@ -1,19 +1,14 @@
-// `rungs sets FILE... [--by script|rung] [--format table|csv|json]`: balance statistics of the
-// matched item sets of each script.
-import { basename, join, relative } from 'node:path';
-import { analyze } from '../core/analyze';
+// `rungs sets FILE... [--by script|rung] [--format table|csv|json] [--balance [--seed N] [--fix]]`:
+// balance statistics of the matched item sets of each script, and the balancer's proposal.
 import { balanceSets } from '../core/balance';
 import { applyFixes } from '../rules/fixes';
 import { compareSets } from '../core/sets';
-import type { Analysis, SetScope } from '../core/types';
-import { resolveScriptContext } from '../config/resolve';
-import { loadWordTable } from '../data/wordTable';
-import { lint } from '../rules/index';
+import type { SetScope } from '../core/types';
 import { SET_RULE_IDS } from '../rules/setRules';
 import { parseArgs } from './args';
-import { expandPaths } from './files';
 import { formatBalance, formatSetsCsv, formatSetsJson, formatSetsTable, type BalancedFile, type SetsFile } from './formatSets';
-import { EXIT_OK, EXIT_USAGE, UsageError, type CliIO } from './io';
+import { UsageError, type CliIO } from './io';
+import { loadScripts, type LoadedScript } from './scripts';
 import type { Command } from './main';
 
 const USAGE = [
@@ -29,51 +24,6 @@ const USAGE = [
   '  --seed    seed of the search (default 1): the same seed gives the same proposal',
   '  --fix     with --balance: write the proposal into the file (only @set labels change)',
 ].join('\n');
-
-export interface LoadedScript {
-  file: string;
-  shown: string;
-  text: string;
-  analysis: Analysis;
-  problems: ReturnType<typeof lint>;
-}
-
-/** Reads and analyses every script named on the command line; unreadable ones are reported. */
-export function loadScripts(
-  io: CliIO,
-  positionals: string[],
-  command: string,
-  scope?: SetScope,
-): { scripts: LoadedScript[]; code: number } {
-  const { files, missing } = expandPaths(positionals, io.cwd, io.fs);
-  let code = EXIT_OK;
-  for (const m of missing) {
-    io.stderr(`rungs ${command}: ${m}: no such file or folder\n`);
-    code = EXIT_USAGE;
-  }
-  if (!files.length && !missing.length) {
-    io.stderr(`rungs ${command}: no *.rungs files found\n`);
-    return { scripts: [], code: EXIT_USAGE };
-  }
-  const data = loadWordTable();
-  const scripts: LoadedScript[] = [];
-  for (const file of files) {
-    const shown = file === '-' ? '<stdin>' : relative(io.cwd, file) || basename(file);
-    let text: string;
-    try {
-      text = file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
-    } catch (err) {
-      io.stderr(`rungs ${command}: ${shown}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
-      code = EXIT_USAGE;
-      continue;
-    }
-    const ctx = resolveScriptContext(file === '-' ? join(io.cwd, 'stdin.rungs') : file, io.fs);
-    const options = scope ? { ...ctx.options, setScope: scope } : ctx.options;
-    const analysis = analyze({ text, data, options, lexicon: ctx.lexicon });
-    scripts.push({ file, shown, text, analysis, problems: lint(analysis, text, ctx.lint) });
-  }
-  return { scripts, code };
-}
 
 export const setsCommand: Command = {
   name: 'sets',
