@@ -8,7 +8,8 @@
 // What it implements, exactly: a move swaps the labels of two items of one rung that carry
 // different labels, so every rung keeps its items and each set keeps its size per rung. Only
 // items whose own line carries exactly one `@set` label move (labels inherited from a header stay
-// put). The search is deterministic for a seed and runs a fixed number of moves. The result is
+// put). The search is deterministic for a seed and runs a fixed number of moves; afterwards every
+// pair of changes that the worst margin does not need is undone. The result is
 // never worse than the input: the input assignment is a candidate, and the final choice is
 // re-checked with the same comparison the tables show.
 import { studentt } from 'jstat';
@@ -254,6 +255,43 @@ export function balanceSets(analysis: Analysis, text: string, options: BalanceOp
       move(g, i, lj, li);
       move(g, j, li, lj);
       Object.assign(g, saved);
+    }
+  }
+
+  // Go to the best assignment seen, then undo every pair of changes the worst margin does not need:
+  // the search wanders across equally good splits, and each label changed is one a person must
+  // check.
+  items.forEach((_, i) => {
+    if (movable[i] && assign[i][0] !== best.assign[i]) {
+      move(groupOf.get(i)!, i, assign[i][0], best.assign[i]);
+      assign[i] = [best.assign[i]];
+    }
+  });
+  for (const g of groups) Object.assign(g, groupScore(g, testable, labels.length, o.setBound, offsets));
+  const written = items.map((it) => labels.indexOf(it.sets[0]));
+  for (const list of byRung.values()) {
+    for (const i of list) {
+      for (const j of list) {
+        const li = assign[i][0];
+        const lj = assign[j][0];
+        // i and j trade back only when that returns both to their written labels.
+        if (li === written[i] || lj === written[j] || li !== written[j] || lj !== written[i]) continue;
+        const g = groupOf.get(i)!;
+        const saved = { score: g.score, mean: g.mean };
+        move(g, i, li, lj);
+        move(g, j, lj, li);
+        Object.assign(g, groupScore(g, testable, labels.length, o.setBound, offsets));
+        const next = total();
+        if (next.worst >= best.worst) {
+          assign[i] = [lj];
+          assign[j] = [li];
+          best = { ...next, assign: assign.map((a) => a[0]) };
+        } else {
+          move(g, i, lj, li);
+          move(g, j, li, lj);
+          Object.assign(g, saved);
+        }
+      }
     }
   }
 
