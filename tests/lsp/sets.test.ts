@@ -44,6 +44,20 @@ describe('hover on a @set label', () => {
   });
 });
 
+describe('hover on a label of a header or rung @set line', () => {
+  it('shows the balance table of that set in its rung; the key keeps its own hover', () => {
+    const t = ['@set-scope rung', '@set-min-items 2', '== One', '@set trained', 'Tea.', 'Milk.', 'Soup. | @set untrained', 'Rice. | @set untrained'].join('\n');
+    const sn = store.get(TextDocument.create('file:///rung-sets.rungs', 'rungs', 1, t));
+    const h = hover(sn, 3, 7)!;
+    expect(h.range).toEqual({ start: { line: 3, character: 5 }, end: { line: 3, character: 12 } });
+    const value = (h.contents as { value: string }).value;
+    expect(value).toContain('**Set "trained"** · compared in this rung');
+    expect(value).toContain('**trained vs untrained, rung 1 "One"**');
+    // On the key itself the setting's own documentation shows.
+    expect((hover(sn, 3, 2)!.contents as { value: string }).value).toContain('**@set**');
+  });
+});
+
 describe('label spans', () => {
   it('find each label of an item trailer and nothing in its note', () => {
     const line = 'Pour the milk. | slowly, model first #milk1 @set trained, week2';

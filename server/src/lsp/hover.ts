@@ -8,7 +8,7 @@ import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
 import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
 import { WCM_PARAMETER_NAMES } from '../core/wcm';
 import type { Snapshot } from './documents';
-import { setLabelHover } from './setHover';
+import { setLabelHover, setSettingHover } from './setHover';
 import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, rate, secs, signed, total, two } from './format';
 
 const markdown = (value: string, line: number, start: number, end: number): Hover => ({
@@ -161,6 +161,8 @@ export function hover(s: Snapshot, line: number, character: number): Hover | nul
     const text = settingHoverText(setting);
     if (text) return markdown(text, line, setting.keyStart, setting.keyEnd);
   }
+  const onSetLine = setSettingHover(s, line, character);
+  if (onSetLine) return onSetLine;
   const override = s.analysis.script.overrides.find(
     (o) => o.line === line && character >= o.character && character <= o.character + o.word.length,
   );

@@ -3,17 +3,19 @@
 import { MarkupKind, type Hover } from 'vscode-languageserver/node';
 import { itemLabelSpans } from '../core/setLabels';
 import { balanceRows, pairTitle } from '../core/setTable';
-import type { ItemAnalysis } from '../core/types';
+import { splitLabels } from '../core/parse';
+import type { ItemAnalysis, Setting } from '../core/types';
 import { setComparison } from '../rules/setRules';
 import type { Snapshot } from './documents';
 import { md } from './format';
 
-export function setHoverText(s: Snapshot, label: string, rung: number): string {
+/** `rung` limits a rung-by-rung comparison to one rung; null shows every rung. */
+export function setHoverText(s: Snapshot, label: string, rung: number | null): string {
   const c = setComparison(s.analysis);
-  const inScope = (r: number | null) => c.scope === 'script' || r === rung;
+  const inScope = (r: number | null) => c.scope === 'script' || rung === null || r === rung;
   const pairs = c.pairs.filter((p) => (p.a === label || p.b === label) && inScope(p.rung));
   const out: string[] = [];
-  const where = c.scope === 'script' ? 'over the whole script' : 'in this rung';
+  const where = c.scope === 'script' ? 'over the whole script' : rung === null ? 'rung by rung' : 'in this rung';
   out.push(`**Set "${md(label)}"** · compared ${where}; equivalent means TOST within ±${c.bound} SD (\`@set-bound\`)`);
   for (const p of pairs) {
     const shown = balanceRows(p);
@@ -40,4 +42,31 @@ export function setLabelHover(s: Snapshot, item: ItemAnalysis, character: number
     contents: { kind: MarkupKind.Markdown, value: setHoverText(s, span.label, item.rung) },
     range: { start: { line: item.node.line, character: span.start }, end: { line: item.node.line, character: span.end } },
   };
+}
+
+/** The hover of a label in a header or rung `@set` line (labels every item below inherits). */
+export function setSettingHover(s: Snapshot, line: number, character: number): Hover | null {
+  const header = s.analysis.script.header.map((setting) => ({ setting, rung: null as number | null }));
+  const rungs = s.analysis.rungs.flatMap((r) => r.node.settings.map((setting) => ({ setting, rung: r.index as number | null })));
+  const hit = [...header, ...rungs].find(
+    ({ setting: x }) => (x.key === 'set' || x.key === 'sets') && x.line === line && character >= x.valueStart && character <= x.valueEnd,
+  );
+  if (!hit) return null;
+  const span = labelAt(hit.setting, character);
+  if (!span) return null;
+  return {
+    contents: { kind: MarkupKind.Markdown, value: setHoverText(s, span.label, hit.rung) },
+    range: { start: { line, character: span.start }, end: { line, character: span.end } },
+  };
+}
+
+function labelAt(x: Setting, character: number): { label: string; start: number; end: number } | null {
+  let from = 0;
+  for (const label of splitLabels(x.value)) {
+    const at = x.value.indexOf(label, from);
+    from = at + label.length;
+    const start = x.valueStart + at;
+    if (character >= start && character <= start + label.length) return { label, start, end: start + label.length };
+  }
+  return null;
 }
