@@ -2,7 +2,7 @@
 import { CAUTION } from '../core/caution';
 import type { BalanceResult } from '../core/balance';
 import type { Problem } from '../core/types';
-import { SET_METRICS, type SetComparison } from '../core/sets';
+import { SET_METRICS, type SetComparison, type SetPair } from '../core/sets';
 import { BALANCE_COLUMNS, balanceRows, pairTitle } from '../core/setTable';
 
 export interface SetsFile {
@@ -14,7 +14,7 @@ export interface SetsFile {
 
 const round = (n: number | null, d = 6): number | null => (n === null || Number.isNaN(n) ? null : Number(n.toFixed(d)));
 
-function pairJson(c: SetComparison, p: SetComparison['pairs'][number]): unknown {
+function pairJson(p: SetPair): unknown {
   const metrics: Record<string, unknown> = {};
   for (const m of SET_METRICS) {
     const x = p.metrics[m.id];
@@ -40,7 +40,7 @@ export function setsJson(f: SetsFile): unknown {
     bound: c.bound,
     minItems: c.minItems,
     labels: c.labels,
-    pairs: c.pairs.map((p) => pairJson(c, p)),
+    pairs: c.pairs.map(pairJson),
     smallSets: c.small.map((s) => ({ label: s.label, rung: s.rung === null ? null : s.rung + 1, n: s.n, lines: s.lines.map((l) => l + 1) })),
     problems: f.problems.map((p) => ({ rule: p.rule, severity: p.severity, line: p.line + 1, column: p.character + 1, message: p.message })),
     caution: CAUTION,
