@@ -6,6 +6,7 @@ import { makePace, parsePaces, READING_NORM_WPS } from './pace';
 import { DEFAULT_SET_OPTIONS, SET_KEYS } from './setOptions';
 import type { AnalysisOptions, Direction, Problem, Setting } from './types';
 import { DEFAULT_WCM_OPTIONS } from './wcm';
+import { defaultRecordsOptions, RECORDS_KEYS } from './records/settings';
 
 export function defaultOptions(): AnalysisOptions {
   return {
@@ -20,6 +21,8 @@ export function defaultOptions(): AnalysisOptions {
     wcm: { ...DEFAULT_WCM_OPTIONS },
     readingNormWps: READING_NORM_WPS,
     ...DEFAULT_SET_OPTIONS,
+    // Rate records (records/settings.ts).
+    records: defaultRecordsOptions(),
   };
 }
 
@@ -216,6 +219,8 @@ export const KEYS: KeySpec[] = [
     example: 'Wojcik = W OY1 CH IH0 K',
     apply: () => null,
   },
+  // Rate records: read from the config files beside or above a records file.
+  ...RECORDS_KEYS,
 ];
 
 const BY_NAME = new Map<string, KeySpec>();

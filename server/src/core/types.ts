@@ -1,5 +1,6 @@
 // Plain data shared by every part of Rungs. Positions are 0-based (line, character in UTF-16 code
 // units, as JavaScript strings index them); the CLI and the LSP layer convert them once at the edge.
+import type { RecordsOptions } from './records/settings';
 
 export type Severity = 'error' | 'warning' | 'info' | 'hint';
 
@@ -97,6 +98,8 @@ export interface AnalysisOptions {
   setMinItems: number;
   /** Matched sets: compare over the whole script or rung by rung. */
   setScope: SetScope;
+  /** Settings of client rate records (records/settings.ts). */
+  records: RecordsOptions;
 }
 
 export type SetScope = 'script' | 'rung';

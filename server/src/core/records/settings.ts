@@ -1,0 +1,84 @@
+// Settings of the records side: the benefit mark, the filler list and the readiness rule. They
+// live in AnalysisOptions (`options.records`) and are read by the same key table as every other
+// setting (config files, editor settings), in a block of their own.
+import type { KeySpec } from '../options';
+
+export interface RecordsOptions {
+  /** Paced/unassisted ratio that counts as a meaningful benefit (common practice: 1.2). */
+  benefitMark: number;
+  /** Words left out when counting a transcript (lower case). */
+  fillers: string[];
+  /** Consecutive latest sessions at or above the mark before a rung is called ready. */
+  readySessions: number;
+  /** Accuracy (correct / words, 0-1) those sessions must also reach; null when not used. */
+  accuracyFloor: number | null;
+}
+
+/** Fillers usually left out of rate counts (common practice). */
+export const DEFAULT_FILLERS = ['um', 'uh', 'er', 'erm', 'hmm'];
+
+export function defaultRecordsOptions(): RecordsOptions {
+  return { benefitMark: 1.2, fillers: [...DEFAULT_FILLERS], readySessions: 2, accuracyFloor: null };
+}
+
+const NUMBER = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*$/;
+
+export const RECORDS_KEYS: KeySpec[] = [
+  {
+    key: 'benefit-mark',
+    aliases: [],
+    scope: 'script',
+    summary: 'Rate records: paced/unassisted words-per-second ratio that marks a meaningful benefit (default 1.2).',
+    example: '1.2',
+    apply(value, o) {
+      const m = NUMBER.exec(value);
+      if (!m || !(Number(m[1]) > 0)) return `@benefit-mark must be a number above 0, e.g. 1.2, not "${value.trim()}"`;
+      o.records = { ...o.records, benefitMark: Number(m[1]) };
+      return null;
+    },
+  },
+  {
+    key: 'fillers',
+    aliases: [],
+    scope: 'script',
+    summary: 'Rate records: words left out when counting a transcript (default um, uh, er, erm, hmm).',
+    example: 'um, uh, er',
+    apply(value, o) {
+      const words = value.split(/[,\s]+/).map((w) => w.trim().toLowerCase()).filter(Boolean);
+      o.records = { ...o.records, fillers: words };
+      return null;
+    },
+  },
+  {
+    key: 'ready-sessions',
+    aliases: [],
+    scope: 'script',
+    summary: 'Rate records: latest sessions that must meet the mark before a rung is called ready (default 2).',
+    example: '2',
+    apply(value, o) {
+      const m = /^\s*(\d+)\s*$/.exec(value);
+      if (!m || Number(m[1]) < 1) return `@ready-sessions must be a whole number, 1 or more, not "${value.trim()}"`;
+      o.records = { ...o.records, readySessions: Number(m[1]) };
+      return null;
+    },
+  },
+  {
+    key: 'accuracy-floor',
+    aliases: [],
+    scope: 'script',
+    summary: 'Rate records: accuracy (correct/words) the ready sessions must reach too, 0-1 or a percentage (default none).',
+    example: '80%',
+    apply(value, o) {
+      const v = value.trim();
+      if (/^(none|off|no)$/i.test(v)) {
+        o.records = { ...o.records, accuracyFloor: null };
+        return null;
+      }
+      const m = /^(\d+(?:\.\d+)?|\.\d+)\s*(%?)$/.exec(v);
+      const n = m ? Number(m[1]) / (m[2] ? 100 : 1) : NaN;
+      if (!m || !(n >= 0 && n <= 1)) return `@accuracy-floor is a fraction 0-1 or a percentage, e.g. 0.8 or 80%, not "${v}"`;
+      o.records = { ...o.records, accuracyFloor: n };
+      return null;
+    },
+  },
+];

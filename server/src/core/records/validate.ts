@@ -1,0 +1,225 @@
+// Checks records rows one cell at a time. A bad cell is a typed problem on that cell (line and
+// column); a row with a problem is left out of the computations but never dropped unreported.
+import { parsePaces } from '../pace';
+import { Pronouncer } from '../pronounce';
+import { tokenize } from '../tokenize';
+import type { Pace, Problem, WordData } from '../types';
+import { DEFAULT_WCM_OPTIONS } from '../wcm';
+import { COLUMNS, MAX_PLAUSIBLE_WPS, REQUIRED_COLUMNS, type Column } from './columns';
+import type { CsvRow } from './csv';
+import { decimal, isInteger, toNumber, type Q } from './exact';
+import { findRung } from './scripts';
+import type { RecordsOptions } from './settings';
+import type { Cell, Condition, ScriptFacts, ScriptLookup } from './types';
+
+/** A row that passed every check, with exact quantities for the benefit comparison. */
+export interface ValidRow {
+  line: number;
+  cells: Partial<Record<Column, Cell>>;
+  date: string;
+  day: number;
+  client: string;
+  condition: Condition;
+  script: string | null;
+  facts: ScriptFacts | null;
+  rung: string | null;
+  rungIndex: number | null;
+  words: Q;
+  seconds: Q;
+  wordsFromTranscript: boolean;
+  fillersLeftOut: string[];
+  syllables: number | null;
+  correct: number | null;
+  pace: Pace | null;
+  paceFrom: 'row' | 'rung' | null;
+  task: string | null;
+  note: string | null;
+}
+
+export interface ValidateInput {
+  header: CsvRow | null;
+  rows: CsvRow[];
+  scripts: ScriptLookup;
+  options: RecordsOptions;
+  /** Today's date (YYYY-MM-DD): later dates are reported as in the future. */
+  today: string;
+  /** Word data, to count syllables of transcripts; without it only words are counted. */
+  data?: WordData;
+}
+
+const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
+
+/** Days since 1970-01-01 of a YYYY-MM-DD date, or null when the date does not exist. */
+export function dayNumber(date: string): number | null {
+  const m = ISO_DATE.exec(date);
+  if (!m) return null;
+  const [y, mo, d] = [Number(m[1]), Number(m[2]), Number(m[3])];
+  const t = Date.UTC(y, mo - 1, d);
+  const back = new Date(t);
+  if (back.getUTCFullYear() !== y || back.getUTCMonth() !== mo - 1 || back.getUTCDate() !== d) return null;
+  return t / 86_400_000;
+}
+
+function problem(at: { line: number; character: number; endLine: number; endCharacter: number }, message: string, rule = 'bad-record'): Problem {
+  return { rule, severity: 'error', message, line: at.line, character: at.character, endLine: at.endLine, endCharacter: at.endCharacter };
+}
+
+export function validateRows(input: ValidateInput): { rows: ValidRow[]; problems: Problem[] } {
+  const problems: Problem[] = [];
+  const { header } = input;
+  if (!header) return { rows: [], problems };
+  const index = new Map<Column, number>();
+  header.cells.forEach((c, k) => {
+    const name = c.value.trim().toLowerCase() as Column;
+    if (!COLUMNS.includes(name)) {
+      problems.push({ ...problem(c, `unknown column "${c.value.trim()}": it is kept in the file but not read (columns: ${COLUMNS.join(', ')})`, 'records-header'), severity: 'warning' });
+    } else if (index.has(name)) {
+      problems.push(problem(c, `column "${name}" appears twice; the first one is read`, 'records-header'));
+    } else index.set(name, k);
+  });
+  const headerRange = { line: header.line, character: 0, endLine: header.line, endCharacter: header.cells[header.cells.length - 1]?.endCharacter ?? 0 };
+  for (const col of REQUIRED_COLUMNS) {
+    if (!index.has(col)) problems.push(problem(headerRange, `the header has no "${col}" column`, 'records-header'));
+  }
+  const pronouncer = input.data ? new Pronouncer(input.data, [], DEFAULT_WCM_OPTIONS) : null;
+  const fillers = new Set(input.options.fillers.map((f) => f.toLowerCase()));
+  const today = dayNumber(input.today);
+  const seen = new Map<string, number>();
+  const rows: ValidRow[] = [];
+
+  for (const row of input.rows) {
+    const cells: Partial<Record<Column, Cell>> = {};
+    for (const [col, k] of index) {
+      // A short row's missing cells sit, empty, at the end of its last cell.
+      const last = row.cells[row.cells.length - 1];
+      cells[col] = row.cells[k] ?? { value: '', line: last.endLine, character: last.endCharacter, endLine: last.endLine, endCharacter: last.endCharacter };
+    }
+    const own: Problem[] = [];
+    const bad = (col: Column, message: string) => own.push(problem(cells[col]!, message));
+    const text = (col: Column) => (cells[col]?.value ?? '').trim();
+    const missing = (col: Column, why = '') => index.has(col) && bad(col, `${col} is empty${why}`);
+
+    const date = text('date');
+    let day: number | null = null;
+    if (!date) missing('date');
+    else if (!ISO_DATE.test(date)) bad('date', `"${date}" is not an ISO 8601 date: write YYYY-MM-DD, e.g. 2026-03-02`);
+    else if ((day = dayNumber(date)) === null) bad('date', `${date} is not a date of the calendar`);
+    else if (today !== null && day > today) bad('date', `${date} is in the future (today is ${input.today})`);
+
+    const client = text('client');
+    if (!client) missing('client');
+
+    const condText = text('condition').toLowerCase();
+    let condition: Condition | null = null;
+    if (!condText) missing('condition', ': write unassisted or paced');
+    else if (condText === 'unassisted' || condText === 'paced') condition = condText;
+    else bad('condition', `unknown condition "${text('condition')}": write unassisted or paced`);
+
+    const seconds = decimal(text('seconds'));
+    if (!text('seconds')) missing('seconds');
+    else if (!seconds) bad('seconds', `seconds must be a number, not "${text('seconds')}"`);
+    else if (seconds.n <= 0n) bad('seconds', `seconds must be above 0, not ${text('seconds')}`);
+
+    let words: Q | null = null;
+    let wordsFromTranscript = false;
+    const fillersLeftOut: string[] = [];
+    let spoken: string[] | null = null;
+    const transcript = text('transcript');
+    if (transcript) {
+      spoken = tokenize(transcript).flatMap((t) => t.words);
+      for (const w of spoken) if (fillers.has(w)) fillersLeftOut.push(w);
+      spoken = spoken.filter((w) => !fillers.has(w));
+    }
+    if (text('words')) {
+      const w = decimal(text('words'));
+      if (!w) bad('words', `words must be a whole number, not "${text('words')}"`);
+      else if (w.n < 0n || !isInteger(w)) bad('words', `words must be a whole number, 0 or more, not ${text('words')}`);
+      else words = w;
+    } else if (spoken) {
+      words = { n: BigInt(spoken.length), d: 1n };
+      wordsFromTranscript = true;
+    } else missing('words', ' and there is no transcript to count');
+    if (words && seconds && seconds.n > 0n && toNumber(words) / toNumber(seconds) > MAX_PLAUSIBLE_WPS) {
+      const rate = toNumber(words) / toNumber(seconds);
+      bad(wordsFromTranscript ? 'transcript' : 'words', `${toNumber(words)} words in ${text('seconds')} s is ${rate.toFixed(1)} words/s, faster than any plausible speech (${MAX_PLAUSIBLE_WPS} words/s): check both numbers`);
+    }
+
+    let correct: number | null = null;
+    if (text('correct')) {
+      const c = decimal(text('correct'));
+      if (!c || c.n < 0n || !isInteger(c)) bad('correct', `correct must be a whole number, 0 or more, not "${text('correct')}"`);
+      else if (words && cmpGreater(c, words)) bad('correct', `${text('correct')} correct words is more than the ${toNumber(words)} words of the row`);
+      else correct = toNumber(c);
+    }
+
+    const scriptPath = text('script') || null;
+    let facts: ScriptFacts | null = null;
+    if (scriptPath) {
+      facts = input.scripts(scriptPath);
+      if (!facts) bad('script', `no script "${scriptPath}" (the path is relative to this records file)`);
+    } else if (condition === 'paced') missing('script', ': a paced row names the script it practised');
+    const rungText = text('rung') || null;
+    let rungIndex: number | null = null;
+    if (rungText && facts) {
+      rungIndex = findRung(facts, rungText);
+      if (rungIndex === null) {
+        const names = facts.rungs.map((r, i) => `${i + 1} "${r.name}"`).join(', ');
+        bad('rung', `"${scriptPath}" has no rung "${rungText}" (its rungs: ${names || 'none'})`);
+      }
+    } else if (!rungText && condition === 'paced') missing('rung', ': a paced row names the rung it practised (name or number)');
+
+    let pace: Pace | null = null;
+    let paceFrom: 'row' | 'rung' | null = null;
+    if (condition === 'paced') {
+      if (text('pace')) {
+        const { paces, error } = parsePaces(text('pace'));
+        if (error || paces.length !== 1) bad('pace', error ?? `give one pace, not ${paces.length}`);
+        else [pace, paceFrom] = [paces[0], 'row'];
+      } else if (facts && rungIndex !== null) {
+        const first = facts.rungs[rungIndex].paces[0];
+        if (first) [pace, paceFrom] = [first, 'rung'];
+        else bad('rung', 'the rung has no pace and the row gives none');
+      } else if (!scriptPath) {
+        // With an unknown script or rung the pace is unknown too, but that is already reported.
+        bad('pace', 'no pace: give one in the pace column, or a script and rung that set one');
+      }
+    }
+
+    const key = JSON.stringify(row.cells.map((c) => c.value.trim()));
+    const earlier = seen.get(key);
+    if (earlier !== undefined) {
+      own.push(problem({ line: row.line, character: 0, endLine: row.line, endCharacter: row.cells[row.cells.length - 1].endCharacter }, `this row repeats line ${earlier + 1}; it is counted once`, 'duplicate-record'));
+    } else seen.set(key, row.line);
+
+    if (own.length || day === null || !condition || !client || !words || !seconds) {
+      problems.push(...own);
+      continue;
+    }
+    rows.push({
+      line: row.line,
+      cells,
+      date,
+      day,
+      client,
+      condition,
+      script: scriptPath,
+      facts,
+      rung: rungText,
+      rungIndex,
+      words,
+      seconds,
+      wordsFromTranscript,
+      fillersLeftOut,
+      syllables: spoken && pronouncer ? spoken.reduce((n, w) => n + pronouncer.score(w).syllables, 0) : null,
+      correct,
+      pace,
+      paceFrom,
+      task: text('task') || null,
+      note: text('note') || null,
+    });
+  }
+  return { rows, problems };
+}
+
+const cmpGreater = (a: Q, b: Q): boolean => a.n * b.d > b.n * a.d;
+
