@@ -17,6 +17,8 @@ export interface Expanded {
 export interface ExpandOptions {
   /** Honour .gitignore files (default true); explicitly named files are always kept. */
   gitignore?: boolean;
+  /** Which file names a folder search keeps (default: names ending in .rungs). */
+  match?: (name: string) => boolean;
 }
 
 const toPosix = (p: string) => p.split(sep).join('/');
@@ -70,6 +72,7 @@ function compare(a: string, b: string): number {
 
 export function expandPaths(paths: string[], cwd: string, fs: CliFs, opts: ExpandOptions = {}): Expanded {
   const gitignores = opts.gitignore === false ? null : new GitIgnores(fs);
+  const wanted = opts.match ?? ((name: string) => name.endsWith(SCRIPT_EXTENSION));
   const named: string[] = [];
   const found = new Set<string>();
   const missing: string[] = [];
@@ -81,7 +84,7 @@ export function expandPaths(paths: string[], cwd: string, fs: CliFs, opts: Expan
       const isDir = fs.isDirectory(p);
       if (gitignores?.ignored(p, isDir)) continue;
       if (isDir) walk(p, visit);
-      else if (name.endsWith(SCRIPT_EXTENSION)) visit(p);
+      else if (wanted(name)) visit(p);
     }
   };
   for (const raw of paths) {

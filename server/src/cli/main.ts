@@ -6,6 +6,7 @@ import { lintCommand } from './lint';
 import { scoreCommand } from './score';
 import { setsCommand } from './sets';
 import { lspCommand } from './lspCommand';
+import { progressCommand } from './progress';
 
 export interface Command {
   name: string;
@@ -16,7 +17,7 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];
