@@ -76,3 +76,33 @@ export const ITEM_AT_METHOD = 'rungs/itemAt';
 export const DID_ANALYZE_METHOD = 'rungs/didAnalyze';
 /** The server's command that sorts one rung (arguments: document uri, rung header line). */
 export const SORT_RUNG_COMMAND = 'rungs.sortRung';
+
+/** One session of a client's paced practice on a rung, as the progress view draws it. */
+export interface ProgressPoint {
+  date: string;
+  /** Days since the first session of the same trend. */
+  day: number;
+  ratio: number | null;
+  benefit: boolean | null;
+  /** 0-based line of the session's last row in the records file. */
+  line: number;
+}
+
+/** The progress view's payload for one records file (`rungs/progress`). */
+export interface ProgressView {
+  benefitMark: number;
+  rows: number;
+  recordsRead: number;
+  problems: number;
+  trends: {
+    client: string;
+    script: string;
+    rung: string;
+    note: string;
+    ready: boolean;
+    slopePerWeek: number | null;
+    points: ProgressPoint[];
+  }[];
+}
+
+export const PROGRESS_METHOD = 'rungs/progress';

@@ -7,7 +7,9 @@ import {
   createConnection,
   DidChangeWatchedFilesNotification,
   LSPErrorCodes,
+  MarkupKind,
   ProposedFeatures,
+  RequestType,
   ResponseError,
   StreamMessageReader,
   StreamMessageWriter,
@@ -18,6 +20,7 @@ import {
   type Disposable,
   type InitializeResult,
 } from 'vscode-languageserver/node';
+import { dirname } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { TextDocument } from 'vscode-languageserver-textdocument';
 import type { WordData } from '../core/types';
@@ -36,6 +39,10 @@ import { normalizeSettings } from './settings';
 import { sortRung } from './sortRung';
 import { documentSymbols, foldingRanges } from './symbols';
 import { fileWatchers, uriPaths, isConfigFile } from './watch';
+import { PROGRESS_METHOD, type ProgressView } from './contract';
+import { findRecordsFiles, isRecordsPath, progressView, recordsHover, recordsLenses, recordsProgress, rungRecordsNote } from './records';
+import { uriToPath } from './documents';
+import type { ProgressResult } from '../core/records';
 
 /** Quiet time after the last keystroke before diagnostics are published again. */
 export const PUBLISH_DELAY_MS = 150;
@@ -97,10 +104,42 @@ export function startServer(): Connection {
       }
     };
   }
+  // Rate records files (*.rates.csv, or the records language) are not scripts: they get their
+  // own diagnostics, hover, lenses and progress view, and no script feature.
+  const isRecords = (uri: string): boolean => documents.get(uri)?.languageId === 'rungs-records' || isRecordsPath(uriToPath(uri));
+  const openText = (path: string): string | undefined => documents.get(pathToFileURL(path).href)?.getText();
+  const recordsCache = new Map<string, { version: number; result: ProgressResult; mark: number }>();
+  function records(uri: string): { result: ProgressResult; mark: number } | null {
+    const doc = documents.get(uri);
+    if (!doc) return null;
+    const hit = recordsCache.get(uri);
+    if (hit && hit.version === doc.version) return hit;
+    const path = uriToPath(uri) ?? '/untitled.rates.csv';
+    const r = { version: doc.version, ...recordsProgress(path, doc.getText(), openText, data) };
+    recordsCache.set(uri, r);
+    return r;
+  }
+  function publishRecords(uri: string): void {
+    const r = records(uri);
+    const doc = documents.get(uri);
+    if (!r || !doc) return;
+    published.set(uri, doc.version);
+    void connection.sendDiagnostics({ uri, version: doc.version, diagnostics: r.result.problems.map((p) => toLspDiagnostic(p, uri)) });
+    void connection.sendNotification(DidAnalyzeNotification, { uri, version: doc.version });
+  }
+  /** Records depend on the scripts they name: re-read open records files after a script changed. */
+  function refreshRecords(): void {
+    for (const doc of documents.all()) {
+      if (!isRecords(doc.uri) || !published.has(doc.uri)) continue;
+      recordsCache.delete(doc.uri);
+      publishRecords(doc.uri);
+    }
+  }
+
   /** The analysis of the document as the client last sent it (never a stale one). */
   const snap = (uri: string): Snapshot | null => {
     const doc = documents.get(uri);
-    return doc ? store.get(doc) : null;
+    return doc && !isRecords(uri) ? store.get(doc) : null;
   };
 
   /** Publishes a script's diagnostics; `andFiles` also those of config and lexicon files. */
@@ -109,10 +148,15 @@ export function startServer(): Connection {
     try {
       const doc = documents.get(uri);
       if (!doc) return;
+      if (isRecords(uri)) {
+        publishRecords(uri);
+        return;
+      }
       const s = store.get(doc);
       published.set(uri, s.version);
       void connection.sendDiagnostics({ uri, version: s.version, diagnostics: s.problems.map((p) => toLspDiagnostic(p, uri)) });
       if (andFiles) publishFiles();
+      refreshRecords();
     } catch (err) {
       connection.console.error(`publishing diagnostics for ${uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
     }
@@ -268,20 +312,37 @@ export function startServer(): Connection {
     clearTimeout(timers.get(e.document.uri));
     timers.delete(e.document.uri);
     published.delete(e.document.uri);
+    recordsCache.delete(e.document.uri);
     store.close(e.document.uri);
     void connection.sendDiagnostics({ uri: e.document.uri, diagnostics: [] });
     publishFiles();
   });
 
   connection.onHover(guard('hover', null, (p) => {
+    if (isRecords(p.textDocument.uri)) {
+      const r = records(p.textDocument.uri);
+      return r ? recordsHover(r.result, r.mark, p.position.line) : null;
+    }
     const s = snap(p.textDocument.uri);
-    return s ? hover(s, p.position.line, p.position.character) : null;
+    const h = s ? hover(s, p.position.line, p.position.character) : null;
+    // A rung header's hover also shows the latest ratio of each client whose records name it.
+    const rung = s?.rungAtHeader(p.position.line);
+    const path = uriToPath(p.textDocument.uri);
+    if (h && rung && path && typeof h.contents === 'object' && 'kind' in h.contents && h.contents.kind === MarkupKind.Markdown) {
+      const note = rungRecordsNote(path, rung.index, findRecordsFiles(store.workspaceFolders.length ? store.workspaceFolders : [dirname(path)]), openText);
+      if (note.length) h.contents.value += `\n${note.join('\n')}`;
+    }
+    return h;
   }));
   connection.languages.inlayHint.on(guard('inlayHint', [], (p) => {
     const s = snap(p.textDocument.uri);
     return s ? inlayHints(s, p.range) : [];
   }));
   connection.onCodeLens(guard('codeLens', [], (p) => {
+    if (isRecords(p.textDocument.uri)) {
+      const r = records(p.textDocument.uri);
+      return r ? recordsLenses(r.result) : [];
+    }
     const s = snap(p.textDocument.uri);
     return s ? codeLenses(s) : [];
   }));
@@ -311,11 +372,15 @@ export function startServer(): Connection {
   }));
   connection.onDocumentFormatting(guard('formatting', [], (p) => {
     const doc = documents.get(p.textDocument.uri);
-    return doc ? formatDocument(doc.getText()) : [];
+    return doc && !isRecords(p.textDocument.uri) ? formatDocument(doc.getText()) : [];
   }));
   connection.onRequest(LadderRequest, guard('rungs/ladder', null, (p) => {
     const s = snap(p.uri);
     return s ? ladder(s) : null;
+  }));
+  connection.onRequest(new RequestType<{ uri: string }, ProgressView | null, void>(PROGRESS_METHOD), guard('rungs/progress', null, (p) => {
+    const r = isRecords(p.uri) ? records(p.uri) : null;
+    return r ? progressView(r.result, r.mark) : null;
   }));
   connection.onRequest(ItemAtRequest, guard('rungs/itemAt', null, (p) => {
     const s = snap(p.uri);
