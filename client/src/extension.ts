@@ -6,6 +6,7 @@ import * as vscode from 'vscode';
 import { LanguageClient, TransportKind, type LanguageClientOptions, type ServerOptions } from 'vscode-languageclient/node';
 import { sortCurrentRung, WorkspaceCheck } from './commands';
 import { LadderView } from './ladderView';
+import { ProgressView, RECORDS_LANGUAGE } from './progressView';
 import { DidAnalyzeNotification } from './protocol';
 import { ItemStatus } from './statusBar';
 
@@ -20,6 +21,10 @@ const SELECTOR = [
   { language: 'rungs', scheme: 'file' },
   { language: 'rungs', scheme: 'untitled' },
   { language: 'rungs', scheme: 'vscode-remote' },
+  // Rate records (*.rates.csv): diagnostics, hovers and lenses from the same server.
+  { language: RECORDS_LANGUAGE, scheme: 'file' },
+  { language: RECORDS_LANGUAGE, scheme: 'untitled' },
+  { language: RECORDS_LANGUAGE, scheme: 'vscode-remote' },
 ];
 
 function activeRungsEditor(): vscode.TextEditor | undefined {
@@ -52,22 +57,32 @@ export async function activate(context: vscode.ExtensionContext): Promise<RungsA
   client = new LanguageClient('rungs', 'Rungs', serverOptions, clientOptions);
 
   const ladder = new LadderView(getClient);
+  const progress = new ProgressView(getClient);
   const status = new ItemStatus(getClient);
   client.onNotification(DidAnalyzeNotification, (p) => {
     const uri = vscode.Uri.parse(p.uri).toString();
     ladder.onDidAnalyze(uri);
+    progress.onDidAnalyze(uri);
     status.onDidAnalyze(uri);
     workspaceCheck.onDidAnalyze(uri);
   });
 
   context.subscriptions.push(
     ladder,
+    progress,
     status,
     workspaceCheck,
     vscode.commands.registerCommand('rungs.showLadder', async () => {
       const editor = activeRungsEditor();
       if (editor) await ladder.show(editor.document);
       else void vscode.window.showInformationMessage('Rungs: open a .rungs script to see its ladder.');
+    }),
+    vscode.commands.registerCommand('rungs.showProgress', async () => {
+      const e = vscode.window.activeTextEditor?.document.languageId === RECORDS_LANGUAGE
+        ? vscode.window.activeTextEditor
+        : vscode.window.visibleTextEditors.find((v) => v.document.languageId === RECORDS_LANGUAGE);
+      if (e) await progress.show(e.document);
+      else void vscode.window.showInformationMessage('Rungs: open a rate records file (*.rates.csv) to see its progress.');
     }),
     vscode.commands.registerCommand('rungs.sortCurrentRung', async () => {
       const editor = activeRungsEditor();

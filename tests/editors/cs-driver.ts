@@ -92,7 +92,7 @@ export async function waitHealthy(server: ChildProcess, port: number, logFile: s
 }
 
 /** Runs a command from the Command Palette by its title. */
-async function runCommand(page: Page, title: string): Promise<void> {
+export async function runCommand(page: Page, title: string): Promise<void> {
   await page.keyboard.press('F1');
   const input = page.locator('.quick-input-widget input.input');
   await input.waitFor({ state: 'visible', timeout: 10_000 });
@@ -103,7 +103,7 @@ async function runCommand(page: Page, title: string): Promise<void> {
 }
 
 /** Moves the cursor to a 1-based line with Go to Line, which also scrolls it into view. */
-async function goToLine(page: Page, line: number): Promise<void> {
+export async function goToLine(page: Page, line: number): Promise<void> {
   await page.keyboard.press('Control+G');
   const input = page.locator('.quick-input-widget input.input');
   await input.waitFor({ state: 'visible', timeout: 10_000 });
@@ -113,7 +113,7 @@ async function goToLine(page: Page, line: number): Promise<void> {
 }
 
 /** The line of the editor whose text starts with `text`. */
-function editorLine(page: Page, text: string) {
+export function editorLine(page: Page, text: string) {
   return page.locator('.editor-instance .monaco-editor .view-line', { hasText: text }).first();
 }
 

@@ -84,6 +84,6 @@ describe('a records file in the language server', () => {
     await c.diagnosticsFor(scriptUri, v);
     await c.waitFor(() => (c.diagnostics.get(recordsUri)?.diagnostics.length ?? 0) === 4, 'records re-checked against the edited script');
     const d = c.diagnostics.get(recordsUri)!.diagnostics;
-    expect(d.filter((x) => x.message.startsWith('"a.rungs" has no rung "Short"')).map((x) => x.range.start.line)).toEqual([2, 3, 4]);
+    expect(d.filter((x) => String(x.message).startsWith('"a.rungs" has no rung "Short"')).map((x) => x.range.start.line)).toEqual([2, 3, 4]);
   });
 });
