@@ -77,7 +77,7 @@ export async function runProgressWorkbench(o: ProgressDriverOptions): Promise<Pr
     const squiggles = await page.locator('.editor-instance .monaco-editor .squiggly-error').count();
     const rowColours = await editorLine(page, o.expect.firstLine)
       .locator('span span')
-      .evaluateAll((els) => new Set(els.filter((e) => (e.textContent ?? '').trim() && !/^[,;\t]$/.test(e.textContent ?? '')).map((e) => getComputedStyle(e).color)).size);
+      .evaluateAll((els) => new Set(els.filter((e) => (e.textContent ?? '').trim() && !/^[,;\t]$/.test(e.textContent ?? '')).map((e) => (globalThis as unknown as { getComputedStyle(x: unknown): { color: string } }).getComputedStyle(e).color)).size);
 
     // A row's hover: its rate, ratio and the unassisted rate it was compared with.
     await page.locator('.editor-instance .monaco-editor textarea').first().focus();
