@@ -199,8 +199,17 @@ export interface PageOptions {
   body: string;
 }
 
-/** The whole webview page: strict Content-Security-Policy, no remote resources. */
+/** The whole ladder page: strict Content-Security-Policy, no remote resources. */
 export function renderLadderPage(o: PageOptions): string {
+  return renderWebviewPage({ ...o, title: 'Ladder', style: STYLE });
+}
+
+/**
+ * A Rungs webview page (ladder and progress views): nonce-only styles and script, no remote
+ * resources; the page's script posts `reveal` for clicked `[data-line]` elements and swaps the
+ * body on `update` messages.
+ */
+export function renderWebviewPage(o: PageOptions & { title: string; style: string }): string {
   const csp = [
     "default-src 'none'",
     `style-src 'nonce-${o.nonce}'`,
@@ -214,8 +223,8 @@ export function renderLadderPage(o: PageOptions): string {
 <meta charset="UTF-8">
 <meta http-equiv="Content-Security-Policy" content="${csp}">
 <meta name="viewport" content="width=device-width, initial-scale=1.0">
-<title>Ladder</title>
-<style nonce="${o.nonce}">${STYLE}</style>
+<title>${escapeHtml(o.title)}</title>
+<style nonce="${o.nonce}">${o.style}</style>
 </head>
 <body>
 <h1 id="heading">${escapeHtml(o.heading)}</h1>

@@ -2,7 +2,7 @@
 // against the benefit mark, as SVG plus a table. Pure functions from the server's `rungs/progress`
 // payload to markup, unit-tested without an editor; everything from the file is escaped here, and
 // the page has the same Content-Security-Policy as the ladder view.
-import { escapeHtml } from './ladderHtml';
+import { escapeHtml, renderWebviewPage, type PageOptions } from './ladderHtml';
 import type { ProgressView } from './protocol';
 
 type TrendView = ProgressView['trends'][number];
@@ -98,38 +98,7 @@ table.sessions tr[data-line]:hover { background: var(--vscode-list-hoverBackgrou
 .problem { color: var(--vscode-errorForeground); }
 `;
 
-const SCRIPT = `
-const vscode = acquireVsCodeApi();
-const chart = document.getElementById('chart');
-const heading = document.getElementById('heading');
-function go(el) {
-  const target = el && el.closest ? el.closest('[data-line]') : null;
-  if (target) vscode.postMessage({ type: 'reveal', line: Number(target.getAttribute('data-line')) });
-}
-document.addEventListener('click', (e) => go(e.target));
-document.addEventListener('keydown', (e) => { if (e.key === 'Enter' || e.key === ' ') { go(e.target); e.preventDefault(); } });
-window.addEventListener('message', (e) => {
-  const m = e.data;
-  if (m && m.type === 'update') { chart.innerHTML = m.body; heading.textContent = m.heading; document.body.setAttribute('data-version', String(m.version)); }
-});
-`;
-
-/** The whole webview page: the ladder view's strict Content-Security-Policy, no remote resources. */
-export function renderProgressPage(o: { cspSource: string; nonce: string; heading: string; body: string }): string {
-  const csp = ["default-src 'none'", `style-src 'nonce-${o.nonce}'`, `script-src 'nonce-${o.nonce}'`, `img-src ${o.cspSource} data:`, `font-src ${o.cspSource}`].join('; ');
-  return `<!DOCTYPE html>
-<html lang="en">
-<head>
-<meta charset="UTF-8">
-<meta http-equiv="Content-Security-Policy" content="${csp}">
-<meta name="viewport" content="width=device-width, initial-scale=1.0">
-<title>Progress</title>
-<style nonce="${o.nonce}">${STYLE}</style>
-</head>
-<body>
-<h1 id="heading">${escapeHtml(o.heading)}</h1>
-<div id="chart" class="chart">${o.body}</div>
-<script nonce="${o.nonce}">${SCRIPT}</script>
-</body>
-</html>`;
+/** The whole webview page, with the ladder view's Content-Security-Policy and page script. */
+export function renderProgressPage(o: PageOptions): string {
+  return renderWebviewPage({ ...o, title: 'Progress', style: STYLE });
 }

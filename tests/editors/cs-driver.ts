@@ -9,7 +9,8 @@ import net from 'node:net';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type FrameLocator, type Page } from 'playwright-core';
 
-export interface DriverOptions {
+/** What every workbench run needs: the programs, the .vsix, and where things go. */
+export interface WorkbenchSetup {
   codeServer: string;
   chromium: string;
   vsix: string;
@@ -20,6 +21,9 @@ export interface DriverOptions {
   scratch: string;
   /** Where screenshots go. */
   artifacts: string;
+}
+
+export interface DriverOptions extends WorkbenchSetup {
   expect: {
     /** Messages that must each be listed in the Problems panel. */
     problems: string[];
@@ -100,6 +104,27 @@ export async function runCommand(page: Page, title: string): Promise<void> {
   await page.locator('.quick-input-list .monaco-list-row', { hasText: title }).first().waitFor({ timeout: 10_000 });
   await page.keyboard.press('Enter');
   await input.waitFor({ state: 'hidden', timeout: 10_000 });
+}
+
+/**
+ * Opens the hover at the cursor with Show Hover (Ctrl+K Ctrl+I), which does not depend on the
+ * mouse landing on the right pixel while the machine is busy, and returns its text once it shows
+ * `text` (tries three times; '' when it never does).
+ */
+export async function showHover(page: Page, text: string): Promise<string> {
+  const visibleHover = page.locator('.monaco-hover:not(.hidden) .monaco-hover-content');
+  for (let i = 0; i < 3; i++) {
+    await page.keyboard.press('Control+K');
+    await page.keyboard.press('Control+I');
+    try {
+      const h = visibleHover.filter({ hasText: text }).first();
+      await h.waitFor({ state: 'visible', timeout: 10_000 });
+      return (await h.innerText()).replace(/\s+/g, ' ');
+    } catch {
+      await page.keyboard.press('Escape');
+    }
+  }
+  return '';
 }
 
 /** Moves the cursor to a 1-based line with Go to Line, which also scrolls it into view. */
@@ -202,19 +227,7 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
     // The cursor is on the header (column 1): Show Hover (Ctrl+K Ctrl+I) opens the hover there,
     // which does not depend on the mouse landing on the right pixel while the machine is busy.
     await editorLine(page, o.expect.hoverLine).waitFor({ timeout: 15_000 });
-    const visibleHover = page.locator('.monaco-hover:not(.hidden) .monaco-hover-content');
-    let hoverText = '';
-    for (let i = 0; i < 3 && !hoverText; i++) {
-      await page.keyboard.press('Control+K');
-      await page.keyboard.press('Control+I');
-      try {
-        const h = visibleHover.filter({ hasText: o.expect.hoverTexts[0] }).first();
-        await h.waitFor({ state: 'visible', timeout: 10_000 });
-        hoverText = (await h.innerText()).replace(/\s+/g, ' ');
-      } catch {
-        await page.keyboard.press('Escape');
-      }
-    }
+    const hoverText = await showHover(page, o.expect.hoverTexts[0]);
     await shot('hover');
     await page.mouse.move(700, 880);
     await page.keyboard.press('Escape');

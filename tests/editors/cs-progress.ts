@@ -6,17 +6,10 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { BrowserContext } from 'playwright-core';
-import { editorLine, goToLine, isolatedEnv, launchChromium, runCommand, startCodeServer, stopCodeServer, writeUserSettings } from './cs-driver';
+import { editorLine, goToLine, showHover, type WorkbenchSetup, isolatedEnv, launchChromium, runCommand, startCodeServer, stopCodeServer, writeUserSettings } from './cs-driver';
 
-export interface ProgressDriverOptions {
-  codeServer: string;
-  chromium: string;
-  vsix: string;
-  workspace: string;
-  /** The records file to open, relative to the workspace. */
-  file: string;
-  scratch: string;
-  artifacts: string;
+export interface ProgressDriverOptions extends WorkbenchSetup {
+  /** `file` is the records file to open, relative to the workspace. */
   expect: {
     /** Text of the records file's first line (to know the editor shows it). */
     firstLine: string;
@@ -82,19 +75,7 @@ export async function runProgressWorkbench(o: ProgressDriverOptions): Promise<Pr
     // A row's hover: its rate, ratio and the unassisted rate it was compared with.
     await page.locator('.editor-instance .monaco-editor textarea').first().focus();
     await goToLine(page, o.expect.hoverLineNumber + 1);
-    const visibleHover = page.locator('.monaco-hover:not(.hidden) .monaco-hover-content');
-    let hoverText = '';
-    for (let i = 0; i < 3 && !hoverText; i++) {
-      await page.keyboard.press('Control+K');
-      await page.keyboard.press('Control+I');
-      try {
-        const h = visibleHover.filter({ hasText: o.expect.hoverText }).first();
-        await h.waitFor({ state: 'visible', timeout: 10_000 });
-        hoverText = (await h.innerText()).replace(/\s+/g, ' ');
-      } catch {
-        await page.keyboard.press('Escape');
-      }
-    }
+    const hoverText = await showHover(page, o.expect.hoverText);
     await shot('records-hover');
     await page.keyboard.press('Escape');
 

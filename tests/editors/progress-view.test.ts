@@ -7,16 +7,8 @@ import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readProgress, scriptFacts, type ProgressResult } from '../../server/src/core/records';
 import { runProgressWorkbench, type ProgressDriverReport } from './cs-progress';
+import { chromiumBin, codeServer, missing, root, skip } from './workbench-env';
 
-const root = join(__dirname, '..', '..');
-const codeServer = process.env.RUNGS_CODE_SERVER ?? join(root, '.cache', 'code-server', 'node_modules', '.bin', 'code-server');
-const chromiumBin = process.env.RUNGS_CHROMIUM ?? '/usr/bin/chromium';
-const required = process.env.RUNGS_REQUIRE_EDITORS === '1';
-const missing = [
-  existsSync(codeServer) ? null : `code-server (${codeServer}; run tests/editors/install-code-server.sh)`,
-  existsSync(chromiumBin) ? null : `chromium (${chromiumBin}; apt-get install chromium)`,
-].filter((m): m is string => m !== null);
-const skip = missing.length > 0 && !required;
 if (skip) console.warn(`SKIPPED progress view workbench test: missing ${missing.join(' and ')}`);
 
 const RECORDS = 'morning-routine.C-0417.rates.csv';

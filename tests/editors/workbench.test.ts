@@ -12,16 +12,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { runWorkbench, type DriverReport } from './cs-driver';
 import { runExtensionSuite } from './cs-driver-suite';
 import { askServer, type Oracle } from './workbench-oracle';
+import { chromiumBin, codeServer, missing, root, skip } from './workbench-env';
 
-const root = join(__dirname, '..', '..');
-const codeServer = process.env.RUNGS_CODE_SERVER ?? join(root, '.cache', 'code-server', 'node_modules', '.bin', 'code-server');
-const chromiumBin = process.env.RUNGS_CHROMIUM ?? '/usr/bin/chromium';
-const required = process.env.RUNGS_REQUIRE_EDITORS === '1';
-const missing = [
-  existsSync(codeServer) ? null : `code-server (${codeServer}; run tests/editors/install-code-server.sh)`,
-  existsSync(chromiumBin) ? null : `chromium (${chromiumBin}; apt-get install chromium)`,
-].filter((m): m is string => m !== null);
-const skip = missing.length > 0 && !required;
 if (skip) console.warn(`SKIPPED workbench test: missing ${missing.join(' and ')}`);
 
 const SAMPLE = 'family-visits-draft.rungs';
