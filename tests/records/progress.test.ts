@@ -1,6 +1,7 @@
 // Rate records: worked examples computed by hand, the exact 1.2 boundary, every bad-row kind
 // with its line and column, delimiter/BOM/CRLF variants, transcript counts against the project's
 // tokeniser, and the trend slope against jstat. Check values name their source beside them.
+import fc from 'fast-check';
 import jStat from 'jstat';
 import { describe, expect, it } from 'vitest';
 import { defaultOptions, applySettings } from '../../server/src/core/options';
@@ -269,5 +270,29 @@ describe('trends', () => {
       '@benefit-mark must be a number above 0, e.g. 1.2, not "lots"',
       '@accuracy-floor is a fraction 0-1 or a percentage, e.g. 0.8 or 80%, not "120%"',
     ]);
+  });
+});
+
+describe('bad input never throws (fast-check, seeded)', () => {
+  // Cells drawn from values that look like records and values that do not, joined by any of the
+  // delimiters, with quotes, blank lines and CR line ends mixed in.
+  const cell = fc.oneof(
+    fc.constantFrom('', '2026-03-02', '2026-02-30', 'C-0417', 's.rungs', 'Short', '2', 'paced', 'unassisted', '12', '0', '-1', '1.5', '"', '""', '"a,b"', 'um uh'),
+    fc.string({ maxLength: 8 }),
+  );
+  const line = fc.tuple(fc.array(cell, { maxLength: 9 }), fc.constantFrom(',', ';', '\t')).map(([cells, d]) => cells.join(d));
+  const text = fc.tuple(fc.array(line, { maxLength: 8 }), fc.constantFrom('\n', '\r\n', '\r')).map(([lines, eol]) => [HEAD, ...lines].join(eol));
+
+  it('keeps every problem inside the text and never uses a row it reports', () => {
+    fc.assert(
+      fc.property(text, (t) => {
+        const r = readProgress({ text: t, scripts: lookup, today: TODAY, data: words });
+        const lineCount = t.split(/\r\n|\r|\n/).length;
+        for (const p of r.problems) expect(p.line).toBeLessThan(lineCount);
+        const reported = new Set(r.problems.map((p) => p.line));
+        expect(r.records.every((x) => !reported.has(x.line))).toBe(true);
+      }),
+      { seed: 20260302, numRuns: 300 },
+    );
   });
 });
