@@ -37,7 +37,7 @@ describe('rungs progress', () => {
     // computed: 12/10 = 1.2 w/s over 10/10 = 1.0 w/s: ratio 1.2, at the mark; pace kept 1.2/1 = 1.2.
     expect(f.records[1]).toEqual({
       line: 3, date: '2026-03-02', client: 'C-0417', script: '../scripts/a.rungs', rung: 'Short', condition: 'paced',
-      words: 12, wordsFromTranscript: false, seconds: 10, pace: '1 wps', wps: 1.2, sps: null, ratio: 1.2,
+      words: 12, wordsFromTranscript: false, fillersLeftOut: [], seconds: 10, pace: '1 wps', wps: 1.2, sps: null, ratio: 1.2,
       baselineFrom: '2026-03-02', baselineWps: 1, benefit: true, paceKept: 1.2, accuracy: null,
     });
     // computed: C-0090 9/10 = 0.9 over 8/10 = 0.8: 1.125, below the mark.

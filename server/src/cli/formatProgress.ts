@@ -37,6 +37,7 @@ export function progressJson(f: ProgressFileResult): unknown {
       condition: r.condition,
       words: r.words,
       wordsFromTranscript: r.wordsFromTranscript,
+      fillersLeftOut: r.fillersLeftOut,
       seconds: r.seconds,
       pace: r.pace?.label ?? null,
       wps: round(r.wps),
