@@ -7,6 +7,7 @@ import { scoreCommand } from './score';
 import { setsCommand } from './sets';
 import { lspCommand } from './lspCommand';
 import { progressCommand } from './progress';
+import { cuesCommand } from './cues';
 
 export interface Command {
   name: string;
@@ -17,7 +18,7 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];

@@ -7,6 +7,8 @@ import { DEFAULT_SET_OPTIONS, SET_KEYS } from './setOptions';
 import type { AnalysisOptions, Direction, Problem, Setting } from './types';
 import { DEFAULT_WCM_OPTIONS } from './wcm';
 import { defaultRecordsOptions, RECORDS_KEYS } from './records/settings';
+import { TIMING_KEYS } from './timingKeys';
+import { DEFAULT_TIMING } from './timing';
 
 export function defaultOptions(): AnalysisOptions {
   return {
@@ -23,6 +25,7 @@ export function defaultOptions(): AnalysisOptions {
     ...DEFAULT_SET_OPTIONS,
     // Rate records (records/settings.ts).
     records: defaultRecordsOptions(),
+    timing: { ...DEFAULT_TIMING },
   };
 }
 
@@ -221,6 +224,7 @@ export const KEYS: KeySpec[] = [
   },
   // Rate records: read from the config files beside or above a records file.
   ...RECORDS_KEYS,
+  ...TIMING_KEYS,
 ];
 
 const BY_NAME = new Map<string, KeySpec>();
@@ -280,7 +284,7 @@ export function applySettings(
   settings: Setting[],
   scope: 'script' | 'rung',
 ): { options: AnalysisOptions; problems: Problem[] } {
-  const o: AnalysisOptions = { ...base, weights: { ...base.weights }, wcm: { ...base.wcm } };
+  const o: AnalysisOptions = { ...base, weights: { ...base.weights }, wcm: { ...base.wcm }, timing: { ...base.timing } };
   const problems: Problem[] = [];
   for (const s of settings) {
     const spec = keySpec(s.key);

@@ -74,6 +74,18 @@ export interface WcmOptions {
   secondaryStressIsInitial: boolean;
 }
 
+/** Timing of paced delivery (cue tracks, model audio, practice page, session lengths). */
+export interface TimingOptions {
+  /** Word slots inside an item: in proportion to syllables, or equal per spoken word. */
+  slots: 'syllables' | 'equal';
+  /** Pause added after phrase-break punctuation inside an item, in seconds. */
+  phrasePause: number;
+  /** Silence between items, in seconds. */
+  gap: number;
+  /** Echo mode: the client's response window as a multiple of the model's length. */
+  echoWindow: number;
+}
+
 /** Everything that tunes analysis. The script header overrides config files, which override defaults. */
 export interface AnalysisOptions {
   paces: Pace[];
@@ -100,6 +112,7 @@ export interface AnalysisOptions {
   setScope: SetScope;
   /** Settings of client rate records (records/settings.ts). */
   records: RecordsOptions;
+  timing: TimingOptions;
 }
 
 export type SetScope = 'script' | 'rung';

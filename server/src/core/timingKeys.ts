@@ -1,0 +1,69 @@
+// Settings of the timing plan (core/timing.ts), kept as one small block of the settings table so
+// they read like every other key: word slots, phrase-break pause, gap between items, echo window.
+import type { KeySpec } from './options';
+
+/** Reads "2", "2 s", "0.5s" or "500 ms" as seconds; an error message when it cannot. */
+export function readSeconds(value: string, key: string): number | string {
+  const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*(s|sec|secs|seconds?|ms)?\s*$/i.exec(value);
+  if (!m) return `@${key} takes a time in seconds, e.g. "@${key} 1.5 s" or "@${key} 300 ms", not "${value.trim()}"`;
+  const n = Number(m[1]) / (m[2]?.toLowerCase() === 'ms' ? 1000 : 1);
+  if (n > 600) return `@${key} ${value.trim()} is longer than 10 minutes: write seconds, e.g. "2 s"`;
+  return n;
+}
+
+export const TIMING_KEYS: KeySpec[] = [
+  {
+    key: 'word-slots',
+    aliases: [],
+    scope: 'script',
+    summary: 'How an item\'s time is shared among its words in cue tracks, model audio and the practice page: by syllables (default) or equal slots.',
+    example: 'syllables',
+    values: ['syllables', 'equal'],
+    apply(value, o) {
+      const v = value.trim().toLowerCase();
+      if (v !== 'syllables' && v !== 'equal') return `@word-slots is syllables or equal, not "${value.trim()}"`;
+      o.timing = { ...o.timing, slots: v };
+      return null;
+    },
+  },
+  {
+    key: 'phrase-pause',
+    aliases: [],
+    scope: 'script',
+    summary: 'Pause after phrase-break punctuation (, ; : . ! ? dashes) inside an item, in seconds (default 0).',
+    example: '0.3 s',
+    apply(value, o) {
+      const n = readSeconds(value, 'phrase-pause');
+      if (typeof n === 'string') return n;
+      o.timing = { ...o.timing, phrasePause: n };
+      return null;
+    },
+  },
+  {
+    key: 'item-gap',
+    aliases: ['gap'],
+    scope: 'script',
+    summary: 'Silence between items in a session plan, in seconds (default 2).',
+    example: '2 s',
+    apply(value, o) {
+      const n = readSeconds(value, 'item-gap');
+      if (typeof n === 'string') return n;
+      o.timing = { ...o.timing, gap: n };
+      return null;
+    },
+  },
+  {
+    key: 'echo-window',
+    aliases: [],
+    scope: 'script',
+    summary: "Echo mode: the client's response window after each model, as a multiple of the model's length (default 1).",
+    example: '1',
+    apply(value, o) {
+      const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*(x|×)?\s*$/i.exec(value);
+      const n = m ? Number(m[1]) : NaN;
+      if (!m || !(n > 0) || n > 10) return `@echo-window is a multiple of the model's length above 0 and at most 10, e.g. "1", not "${value.trim()}"`;
+      o.timing = { ...o.timing, echoWindow: n };
+      return null;
+    },
+  },
+];
