@@ -147,6 +147,10 @@ describe('hover', () => {
     expect(text).toContain('| 1 wps | 11 s |');
     expect(text).toContain('| 1.5 wps | 7.33 s |');
     expect(text).toContain('| 2 wps | 5.5 s |');
+    // Session with the default 2 s gaps between the 3 items (computed): 11 + 4 = 15 s at 1 wps,
+    // 7.33 + 4 = 11.33 s ("11 s") at 1.5 wps.
+    expect(text).toContain('| 1 wps | 11 s | 15 s |');
+    expect(text).toContain('| 1.5 wps | 7.33 s | 11 s |');
   });
 
   it('on a setting key: what it does', async () => {
@@ -229,6 +233,8 @@ describe('estimated pronunciations are marked wherever numbers show', () => {
     expect(lenses[0].command.title).toBe(
       `2 items · difficulty ≈${d(r.min)}–≈${d(r.max)}, median ≈${d(r.median)} · 5 s at 1 wps, 3.33 s at 1.5 wps, 2.5 s at 2 wps · ≈ 1 estimated pronunciation`,
     );
+    // The session lens: 5 s of speech plus one 2 s gap at 1 wps; 4.5 s at 2 wps (computed).
+    expect(lenses[1].command.title).toBe('session 7 s at 1 wps, 5.3 s at 1.5 wps, 4.5 s at 2 wps (with 2 s gaps)');
   });
 
   it('rungs/itemAt and rungs/ladder carry the count; hovers say so', async () => {

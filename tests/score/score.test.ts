@@ -42,7 +42,10 @@ describe('rungs score --format json', () => {
     });
     expect(r.code).toBe(0);
     const j = JSON.parse(r.out);
-    expect(Object.keys(j)).toEqual(['file', 'title', 'paces', 'baseline', 'rungs', 'problems', 'caution']);
+    expect(Object.keys(j)).toEqual(['file', 'title', 'paces', 'baseline', 'sessionSeconds', 'rungs', 'problems', 'caution']);
+    // Session with the default 2 s gap (computed): 6 + 2 + 2 = 10 s at 1 wps; 4 + 2 + 1.33 at 1.5 wps.
+    expect(j.sessionSeconds).toEqual({ '1 wps': 10, '1.5 wps': 7.33, '2 wps': 6 });
+    expect(j.rungs[0].sessionSeconds).toEqual(j.sessionSeconds);
     expect(j.caution).toMatch(/support clinical judgement; they are not a diagnosis and defer to the treating clinician/);
     expect(j.file).toBe('plain.txt');
     expect(j.rungs).toHaveLength(1);

@@ -2,6 +2,7 @@
 import type { Analysis, ItemAnalysis, Pace, Problem } from '../core/types';
 import { formatNumber } from '../core/pace';
 import { CAUTION } from '../core/caution';
+import { describeLengths, sessionLengths } from '../core/timing';
 
 export interface ScoredFile {
   file: string;
@@ -15,11 +16,14 @@ const round = (n: number, d: number) => Number(n.toFixed(d));
 export function scoreJson(s: ScoredFile): unknown {
   const { analysis } = s;
   const title = analysis.script.header.find((h) => h.key === 'title')?.value ?? null;
+  const session = sessionLengths(analysis);
+  const bySeconds = (list: { pace: Pace; seconds: number }[]) => Object.fromEntries(list.map((p) => [p.pace.label, round(p.seconds, 2)]));
   return {
     file: s.file,
     title,
     paces: analysis.options.paces.map((p) => p.label),
     baseline: analysis.options.baseline,
+    sessionSeconds: bySeconds(session.script),
     rungs: analysis.rungs.map((r) => ({
       name: r.node.name,
       line: r.node.line + 1,
@@ -29,6 +33,7 @@ export function scoreJson(s: ScoredFile): unknown {
       min: r.min,
       max: r.max,
       totalSeconds: Object.fromEntries(r.paces.map((p, i) => [p.label, round(r.totalSeconds[i], 2)])),
+      sessionSeconds: bySeconds(session.rungs[r.index].paces),
       paceFacts: Object.fromEntries(r.paces.map((p) => [p.label, paceFacts(analysis, p)])),
       items: r.items.map((it) => itemJson(it)),
     })),
@@ -135,6 +140,7 @@ export function formatTable(files: ScoredFile[], caution: string): string {
     const title = a.script.header.find((h) => h.key === 'title')?.value;
     const base = a.options.baseline ? `; baseline ${formatNumber(a.options.baseline)} wps` : '';
     out.push(`${f.file}${title ? ` — ${title}` : ''}  (paces ${a.options.paces.map((p) => p.label).join(', ')}${base})`);
+    const session = sessionLengths(a);
     for (const r of a.rungs) {
       const cols = ['line', 'words', 'syl', 'phon', 'WCM', 'Zipf mean', 'Zipf min', 'diff', 'rank', ...r.paces.map((p) => `s@${p.label}`)];
       const rows = r.items.map((it) => [
@@ -155,6 +161,7 @@ export function formatTable(files: ScoredFile[], caution: string): string {
         .join(', ');
       out.push('');
       out.push(`  == ${r.node.name} (line ${r.node.line + 1}): ${r.items.length} item${r.items.length === 1 ? '' : 's'}, median ${r.median.toFixed(1)}, range ${r.min.toFixed(1)}-${r.max.toFixed(1)}; total ${paceNotes || '—'}`);
+      if (r.items.length) out.push(`     session with ${a.options.timing.gap} s gaps: ${describeLengths(session.rungs[r.index].paces)}`);
       out.push(`    ${cols.map((c, i) => pad(c, widths[i], true)).join('  ')}  text`);
       r.items.forEach((it, k) => {
         const est = it.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => w.spoken);
@@ -162,6 +169,7 @@ export function formatTable(files: ScoredFile[], caution: string): string {
         out.push(`    ${rows[k].map((c, i) => pad(c, widths[i], true)).join('  ')}  ${it.node.text}${mark}`);
       });
     }
+    if (a.items.length) out.push('', `  whole script with ${a.options.timing.gap} s gaps: ${describeLengths(session.script)}`);
     const fast = a.options.paces.filter((p) => p.unit === 'wps' && p.value > a.options.readingNormWps);
     if (fast.length) out.push('', `  note: ${fast.map((p) => p.label).join(', ')} is faster than adult reading aloud (${formatNumber(a.options.readingNormWps)} wps, Brysbaert 2019)`);
     if (f.problems.length) {

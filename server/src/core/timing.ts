@@ -185,14 +185,20 @@ export interface SessionLengths {
   script: { pace: Pace; seconds: number }[];
 }
 
-/** Session lengths per rung (at each of its paces) and for the whole script (at each script pace). */
-export function sessionLengths(analysis: Analysis, mode: DeliveryMode = 'unison'): SessionLengths {
-  const rungs = analysis.rungs.map((r) => ({
-    index: r.index,
+/** One rung's session length with gaps at each of its paces. */
+export function rungLength(analysis: Analysis, index: number, mode: DeliveryMode = 'unison'): RungLength {
+  const r = analysis.rungs[index];
+  return {
+    index,
     name: r.node.name,
     line: r.node.line,
-    paces: r.paces.map((pace) => ({ pace, seconds: planSession(analysis, { rung: r.index, pace, mode }).seconds })),
-  }));
+    paces: r.paces.map((pace) => ({ pace, seconds: planSession(analysis, { rung: index, pace, mode }).seconds })),
+  };
+}
+
+/** Session lengths per rung (at each of its paces) and for the whole script (at each script pace). */
+export function sessionLengths(analysis: Analysis, mode: DeliveryMode = 'unison'): SessionLengths {
+  const rungs = analysis.rungs.map((r) => rungLength(analysis, r.index, mode));
   const script = analysis.options.paces.map((pace) => ({ pace, seconds: planSession(analysis, { pace, mode }).seconds }));
   return { mode, rungs, script };
 }
@@ -204,6 +210,11 @@ export function formatLength(seconds: number): string {
   const m = Math.floor(whole / 60);
   const s = whole - m * 60;
   return m ? `${m} min${s ? ` ${s} s` : ''}` : `${s} s`;
+}
+
+/** "3 min 40 s at 1 wps, 2 min 30 s at 1.5 wps": a rung's or a script's lengths in one line. */
+export function describeLengths(paces: { pace: Pace; seconds: number }[]): string {
+  return paces.map((p) => `${formatLength(p.seconds)} at ${p.pace.label}`).join(', ');
 }
 
 /** "rung 2 at 1.2 wps: 3 min 40 s with gaps". */

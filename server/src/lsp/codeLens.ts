@@ -6,6 +6,7 @@ import type { Snapshot } from './documents';
 import { diffMarked, ESTIMATED_MARK, secs } from './format';
 import { sortRung } from './sortRung';
 import { SORT_RUNG_COMMAND } from './contract';
+import { describeLengths, rungLength } from '../core/timing';
 
 export { SORT_RUNG_COMMAND };
 
@@ -23,6 +24,11 @@ export function codeLenses(s: Snapshot): CodeLens[] {
       ? `${n} item${n === 1 ? '' : 's'} · difficulty ${d(rung.min)}–${d(rung.max)}, median ${d(rung.median)} · ${times}${estimated}`
       : 'no items';
     lenses.push({ range, command: { title, command: '' } });
+    // The session length comes from the timing plan, so it matches cue tracks and model audio.
+    if (n) {
+      const gap = s.analysis.options.timing.gap;
+      lenses.push({ range, command: { title: `session ${describeLengths(rungLength(s.analysis, rung.index).paces)} (with ${gap} s gaps)`, command: '' } });
+    }
     if (sortRung(s, rung)) {
       lenses.push({ range, command: { title: 'Sort by difficulty', command: SORT_RUNG_COMMAND, arguments: [s.uri, line] } });
     }

@@ -7,6 +7,7 @@ import { toIpa } from '../core/phones';
 import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
 import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
 import { WCM_PARAMETER_NAMES } from '../core/wcm';
+import { formatLength, rungLength } from '../core/timing';
 import type { Snapshot } from './documents';
 import { setLabelHover, setSettingHover } from './setHover';
 import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, rate, secs, signed, total, two } from './format';
@@ -126,11 +127,12 @@ export function rungHoverText(s: Snapshot, rung: RungAnalysis): string {
     );
   }
   lines.push('');
-  lines.push('| pace | total time |');
-  lines.push('|---|---:|');
-  rung.paces.forEach((p, i) => lines.push(`| ${p.label} | ${total(rung.totalSeconds[i])} |`));
+  const session = rungLength(s.analysis, rung.index).paces;
+  lines.push('| pace | speech | session with gaps |');
+  lines.push('|---|---:|---:|');
+  rung.paces.forEach((p, i) => lines.push(`| ${p.label} | ${total(rung.totalSeconds[i])} | ${formatLength(session[i].seconds)} |`));
   lines.push('');
-  lines.push('Totals leave out pauses between items.');
+  lines.push(`Speech leaves out pauses; the session adds ${o.timing.gap} s between items (\`@item-gap\`)${o.timing.phrasePause ? ` and ${o.timing.phrasePause} s at phrase breaks` : ''}.`);
   return lines.join('\n');
 }
 
