@@ -1,6 +1,6 @@
 // `rungs cues FILE [--rung NAME|N] [--pace P] [--mode unison|echo] [--format vtt|srt|csv] [-o OUT]`:
 // the word-timed cue track of a session plan.
-import { join } from 'node:path';
+import { resolve } from 'node:path';
 import { renderSrt, renderVtt, renderWordCsv } from '../core/cues';
 import { parseArgs } from './args';
 import { EXIT_OK, type CliIO } from './io';
@@ -26,7 +26,7 @@ export const cuesCommand: Command = {
       format === 'srt' ? renderSrt(input.plan) : format === 'csv' ? renderWordCsv(input.plan) : renderVtt(input.plan, `Rungs cue track: ${describePlan(input)}`);
     const out = args.flags.get('output');
     if (typeof out === 'string') {
-      io.fs.writeFile(join(io.cwd, out), text);
+      io.fs.writeFile(resolve(io.cwd, out), text);
       io.stderr(`rungs cues: wrote ${out} (${input.plan.items.length} items, ${input.plan.seconds.toFixed(1)} s)\n`);
     } else io.stdout(text);
     return EXIT_OK;

@@ -8,6 +8,7 @@ import { setsCommand } from './sets';
 import { lspCommand } from './lspCommand';
 import { progressCommand } from './progress';
 import { cuesCommand } from './cues';
+import { audioCommand } from './audio';
 
 export interface Command {
   name: string;
@@ -18,7 +19,7 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];

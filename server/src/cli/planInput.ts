@@ -1,6 +1,6 @@
 // What `rungs cues`, `rungs audio` and `rungs practice` share: read one script, analyse it with its
 // config, pick the rung and pace asked for, and make the session plan.
-import { basename, join, relative } from 'node:path';
+import { basename, relative, resolve } from 'node:path';
 import { analyze, type AnalyzeOutput } from '../core/analyze';
 import { parsePaces } from '../core/pace';
 import { planSession, type DeliveryMode, type SessionPlan } from '../core/timing';
@@ -55,7 +55,7 @@ function findRung(a: AnalyzeOutput, wanted: string): number {
  */
 export function readPlanInput(io: CliIO, args: ParsedArgs, command: string): PlanInput | number {
   if (args.positionals.length !== 1) throw new UsageError('give exactly one script file');
-  const file = join(io.cwd, args.positionals[0]);
+  const file = resolve(io.cwd, args.positionals[0]);
   const shown = relative(io.cwd, file) || basename(file);
   let text: string;
   try {
