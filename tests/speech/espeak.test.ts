@@ -42,6 +42,27 @@ describe('rungs audio without espeak-ng', () => {
   });
 });
 
+describe.skipIf(!program && !required)('rungs practice --audio with the real espeak-ng', () => {
+  it('embeds one WAV per item as data: audio, allowed by the page policy', async () => {
+    if (!program) throw new Error('RUNGS_REQUIRE_EDITORS=1 but espeak-ng is not installed (apt-get install espeak-ng)');
+    nodeFs.writeFile(join(dir, 'p.rungs'), SCRIPT);
+    const r = await run(['practice', 'p.rungs', '--rung', 'Requests', '--pace', '2', '--audio', '-o', 'p.html']);
+    expect(r.code, r.err).toBe(0);
+    const html = readFileSync(join(dir, 'p.html'), 'utf8');
+    expect(html.match(/data:audio\/wav;base64,UklGR/g)).toHaveLength(3); // "RIFF" in base64
+    expect(html).toContain('media-src data:');
+  });
+});
+
+describe('rungs practice --audio without espeak-ng', () => {
+  it('says exactly what to install and exits 2', async () => {
+    nodeFs.writeFile(join(dir, 'p.rungs'), SCRIPT);
+    const r = await run(['practice', 'p.rungs', '--audio'], { PATH: '' });
+    expect(r.code).toBe(2);
+    expect(r.err).toBe(`rungs practice: ${ESPEAK_MISSING}\n`);
+  });
+});
+
 describe.skipIf(!program && !required)('rungs audio with the real espeak-ng', () => {
   for (const pace of ['1', '2']) {
     it(`follows the plan at ${pace} wps: pace within 3 %, onsets within 50 ms`, async () => {

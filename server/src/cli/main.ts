@@ -9,6 +9,7 @@ import { lspCommand } from './lspCommand';
 import { progressCommand } from './progress';
 import { cuesCommand } from './cues';
 import { audioCommand } from './audio';
+import { practiceCommand } from './practice';
 
 export interface Command {
   name: string;
@@ -19,7 +20,7 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, practiceCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];

@@ -25,6 +25,8 @@ export interface AudioFile {
   path: string;
   kind: 'rung' | 'item';
   seconds: number;
+  /** For item files: the item's rung index and 0-based line. */
+  item?: { rung: number; line: number };
 }
 
 export interface AudioResult {
@@ -91,7 +93,7 @@ export function makeModelAudio(req: AudioRequest): AudioResult {
         const path = join(req.outDir, `${name}.wav`);
         req.writeBytes(path, encodeWav(itemSamples, sr));
         req.writeBytes(join(req.outDir, `${name}.vtt`), renderVtt(one));
-        files.push({ path, kind: 'item', seconds: itemSamples.length / sr });
+        files.push({ path, kind: 'item', seconds: itemSamples.length / sr, item: { rung: index, line: item.line } });
       });
     }
   } finally {
