@@ -9,6 +9,7 @@ import { LadderView } from './ladderView';
 import { ProgressView, RECORDS_LANGUAGE } from './progressView';
 import { DidAnalyzeNotification } from './protocol';
 import { ItemStatus } from './statusBar';
+import { espeakFound, runDelivery } from './delivery';
 
 let client: LanguageClient | undefined;
 
@@ -89,6 +90,12 @@ export async function activate(context: vscode.ExtensionContext): Promise<RungsA
       if (editor && client) await sortCurrentRung(client, editor);
     }),
     vscode.commands.registerCommand('rungs.checkWorkspace', () => workspaceCheck.run()),
+    ...(['cues', 'audio', 'practice'] as const).map((kind) =>
+      vscode.commands.registerCommand(`rungs.delivery.${kind}`, async () => {
+        const editor = activeRungsEditor();
+        if (editor && client) await runDelivery(client, editor, kind);
+      }),
+    ),
     vscode.commands.registerCommand('rungs.restartServer', async () => {
       if (!client) return;
       await client.restart();
@@ -99,6 +106,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<RungsA
 
   await client.start();
   await vscode.commands.executeCommand('setContext', 'rungs.active', true);
+  await vscode.commands.executeCommand('setContext', 'rungs.espeakFound', espeakFound());
   status.schedule(0);
   return { getClient };
 }

@@ -66,7 +66,7 @@ describe('initialize', () => {
     expect(caps.foldingRangeProvider).toBe(true);
     expect(caps.semanticTokensProvider?.legend.tokenTypes).toContain('keyword');
     expect(caps.documentFormattingProvider).toBe(true);
-    expect(caps.executeCommandProvider?.commands).toEqual(['rungs.sortRung']);
+    expect(caps.executeCommandProvider?.commands).toEqual(['rungs.sortRung', 'rungs.server.exportCues', 'rungs.server.makeAudio', 'rungs.server.practicePage']);
   });
 });
 

@@ -4,30 +4,11 @@ import { resolve } from 'node:path';
 import { CAUTION } from '../core/caution';
 import { renderPracticePage } from '../practice/page';
 import { ESPEAK, ESPEAK_MISSING, findOnPath } from '../speech/espeak';
-import { makeModelAudio } from '../speech/makeAudio';
+import { audioPerItem } from '../speech/makeAudio';
 import { parseArgs } from './args';
 import { EXIT_OK, EXIT_USAGE, type CliIO } from './io';
 import type { Command } from './main';
-import { describePlan, PLAN_FLAGS, PLAN_USAGE, readPlanInput, type PlanInput } from './planInput';
-
-/** Model audio of every planned item, made in memory (no files), in plan order. */
-export function itemAudio(input: PlanInput, program: string): (Uint8Array | null)[] {
-  const bytes = new Map<string, Uint8Array>();
-  const result = makeModelAudio({
-    analysis: input.analysis,
-    rungs: input.plan.rungs.map((r) => r.index),
-    pace: input.pace,
-    mode: input.mode,
-    outDir: '/',
-    program,
-    voice: 'en-us',
-    writeBytes: (path, b) => {
-      if (typeof b !== 'string') bytes.set(path, b);
-    },
-  });
-  const byItem = new Map(result.files.filter((f) => f.item).map((f) => [`${f.item!.rung}:${f.item!.line}`, bytes.get(f.path) ?? null]));
-  return input.plan.items.map((it) => byItem.get(`${it.rung}:${it.line}`) ?? null);
-}
+import { describePlan, PLAN_FLAGS, PLAN_USAGE, readPlanInput } from './planInput';
 
 export const practiceCommand: Command = {
   name: 'practice',
@@ -56,7 +37,7 @@ export const practiceCommand: Command = {
       title,
       subtitle: describePlan(input),
       caution: CAUTION,
-      audio: program ? itemAudio(input, program) : undefined,
+      audio: program ? audioPerItem({ analysis: input.analysis, pace: input.pace, mode: input.mode, program, voice: 'en-us' }, input.plan) : undefined,
     });
     const out = args.flags.get('output');
     if (typeof out === 'string') {

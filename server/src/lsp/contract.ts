@@ -106,3 +106,18 @@ export interface ProgressView {
 }
 
 export const PROGRESS_METHOD = 'rungs/progress';
+/**
+ * The server's paced-delivery commands (arguments: document uri, rung header line). Each writes
+ * its files beside the script and answers a DeliveryResult.
+ */
+export const EXPORT_CUES_COMMAND = 'rungs.server.exportCues';
+export const MAKE_AUDIO_COMMAND = 'rungs.server.makeAudio';
+export const PRACTICE_PAGE_COMMAND = 'rungs.server.practicePage';
+
+export interface DeliveryResult {
+  ok: boolean;
+  /** The file or folder written (absolute path), when ok. */
+  path?: string;
+  /** One line for people: what was written, or why nothing was. */
+  message: string;
+}

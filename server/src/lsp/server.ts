@@ -27,6 +27,7 @@ import type { WordData } from '../core/types';
 import { loadWordTable } from '../data/wordTable';
 import { codeActions, FIX_ALL_KIND } from './codeActions';
 import { codeLenses, SORT_RUNG_COMMAND } from './codeLens';
+import { DELIVERY_COMMANDS, runDelivery } from './delivery';
 import { completion, signatureHelp } from './completion';
 import { toLspDiagnostic, toLspTextEdit } from './convert';
 import { AnalysisStore, type Snapshot } from './documents';
@@ -250,7 +251,7 @@ export function startServer(): Connection {
         foldingRangeProvider: true,
         semanticTokensProvider: { legend: LEGEND, full: true, range: false },
         documentFormattingProvider: true,
-        executeCommandProvider: { commands: [SORT_RUNG_COMMAND] },
+        executeCommandProvider: { commands: [SORT_RUNG_COMMAND, ...DELIVERY_COMMANDS] },
         workspace: { workspaceFolders: { supported: true, changeNotifications: true } },
       },
       serverInfo: { name: 'rungs', version: '0.1.0' },
@@ -389,6 +390,12 @@ export function startServer(): Connection {
 
   connection.onExecuteCommand(async (p) => {
     try {
+      if (DELIVERY_COMMANDS.includes(p.command)) {
+        const [uri, line] = (p.arguments ?? []) as [string, number];
+        const s = typeof uri === 'string' ? snap(uri) : null;
+        if (!s || typeof line !== 'number') return { ok: false, message: 'open the script and put the cursor in a rung' };
+        return runDelivery(p.command, s, line);
+      }
       if (p.command !== SORT_RUNG_COMMAND) return null;
       const [uri, line] = (p.arguments ?? []) as [string, number];
       const s = typeof uri === 'string' ? snap(uri) : null;

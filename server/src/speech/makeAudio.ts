@@ -101,3 +101,21 @@ export function makeModelAudio(req: AudioRequest): AudioResult {
   }
   return { files, measurement: combineMeasurements(rungs.map((r) => r.measurement)), rungs, espeakCalls: synth.calls };
 }
+
+/**
+ * The model audio of every item of `plan` as WAV bytes, made in memory (no files), in plan order:
+ * what the practice page embeds.
+ */
+export function audioPerItem(req: Omit<AudioRequest, 'outDir' | 'writeBytes' | 'rungs'>, plan: SessionPlan): (Uint8Array | null)[] {
+  const bytes = new Map<string, Uint8Array>();
+  const result = makeModelAudio({
+    ...req,
+    rungs: plan.rungs.map((r) => r.index),
+    outDir: '/',
+    writeBytes: (path, b) => {
+      if (typeof b !== 'string') bytes.set(path, b);
+    },
+  });
+  const byItem = new Map(result.files.filter((f) => f.item).map((f) => [`${f.item!.rung}:${f.item!.line}`, bytes.get(f.path) ?? null]));
+  return plan.items.map((it) => byItem.get(`${it.rung}:${it.line}`) ?? null);
+}
