@@ -82,3 +82,6 @@ console.log(row('analysis of the whole script', median(analysis), median(floorLo
 console.log(`${'  per item'.padEnd(34)} ${((1000 * median(analysis)) / items).toFixed(2).padStart(8)} µs`);
 console.log(row('every rule on the analysis (lint)', median(linting), median(floorLookups)));
 for (const line of benchBalance({ analyze, balanceSets: require(join(root, 'dist', 'bench-core.js')).balanceSets }, loadWordTable(join(root, 'dist', 'data')))) console.log(line);
+
+// 3. Model speech fitted to the timing plan (its own script: it needs espeak-ng and takes a while).
+spawnSync(process.execPath, [join(root, 'tests/bench/audio.mjs')], { cwd: root, stdio: 'inherit' });

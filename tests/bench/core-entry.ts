@@ -3,3 +3,6 @@ export { analyze } from '../../server/src/core/analyze';
 export { loadWordTable } from '../../server/src/data/wordTable';
 export { lint } from '../../server/src/rules/index';
 export { balanceSets } from '../../server/src/core/balance';
+export { makeModelAudio } from '../../server/src/speech/makeAudio';
+export { ESPEAK, findOnPath } from '../../server/src/speech/espeak';
+export { makePace } from '../../server/src/core/pace';
