@@ -48,19 +48,16 @@ export const audioCommand: Command = {
     const outDir = resolve(io.cwd, out);
     mkdirSync(outDir, { recursive: true });
     const rungs = input.rung === null ? input.plan.rungs.map((r) => r.index) : [input.rung];
-    const result = makeModelAudio({
-      analysis: input.analysis,
-      rungs,
-      pace: input.pace,
-      mode: input.mode,
-      outDir,
-      program,
-      voice,
-      writeBytes: (path, bytes) => writeFileSync(path, bytes),
-    });
-    const shown = out;
+    let result: ReturnType<typeof makeModelAudio>;
+    try {
+      const writeBytes = (path: string, bytes: Uint8Array | string) => writeFileSync(path, bytes);
+      result = makeModelAudio({ analysis: input.analysis, rungs, pace: input.pace, mode: input.mode, outDir, program, voice, writeBytes });
+    } catch (err) {
+      io.stderr(`rungs audio: ${err instanceof Error ? err.message : String(err)}\n`);
+      return EXIT_USAGE;
+    }
     const rungFiles = result.files.filter((f) => f.kind === 'rung').length;
-    io.stdout(`wrote ${result.files.length} WAV files with their WebVTT to ${shown} (${rungFiles} rung${rungFiles === 1 ? '' : 's'}, ${result.files.length - rungFiles} items)\n`);
+    io.stdout(`wrote ${result.files.length} WAV files with their WebVTT to ${out} (${rungFiles} rung${rungFiles === 1 ? '' : 's'}, ${result.files.length - rungFiles} items)\n`);
     for (const r of result.rungs) io.stdout(`  ${r.name} at ${r.pace}: ${describeMeasurement(r.measurement)}\n`);
     if (result.rungs.length > 1) io.stdout(`  all: ${describeMeasurement(result.measurement)}\n`);
     return EXIT_OK;

@@ -394,7 +394,11 @@ export function startServer(): Connection {
         const [uri, line] = (p.arguments ?? []) as [string, number];
         const s = typeof uri === 'string' ? snap(uri) : null;
         if (!s || typeof line !== 'number') return { ok: false, message: 'open the script and put the cursor in a rung' };
-        return runDelivery(p.command, s, line);
+        try {
+          return runDelivery(p.command, s, line);
+        } catch (err) {
+          return { ok: false, message: err instanceof Error ? err.message : String(err) };
+        }
       }
       if (p.command !== SORT_RUNG_COMMAND) return null;
       const [uri, line] = (p.arguments ?? []) as [string, number];
