@@ -151,6 +151,7 @@ describe('hover', () => {
     // 7.33 + 4 = 11.33 s ("11 s") at 1.5 wps.
     expect(text).toContain('| 1 wps | 11 s | 15 s |');
     expect(text).toContain('| 1.5 wps | 7.33 s | 11 s |');
+    expect(text).toContain('Session: rung 1 at 1 wps: 15 s with gaps');
   });
 
   it('on a setting key: what it does', async () => {

@@ -7,7 +7,7 @@ import { toIpa } from '../core/phones';
 import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
 import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
 import { WCM_PARAMETER_NAMES } from '../core/wcm';
-import { formatLength, rungLength } from '../core/timing';
+import { describeLengths, describeRungLength, formatLength, rungLength, sessionLengths } from '../core/timing';
 import type { Snapshot } from './documents';
 import { setLabelHover, setSettingHover } from './setHover';
 import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, rate, secs, signed, total, two } from './format';
@@ -126,13 +126,20 @@ export function rungHoverText(s: Snapshot, rung: RungAnalysis): string {
       `Step from rung ${prev.index + 1} "${md(prev.node.name)}" (median ${diff(prev.median)}): **${signed(delta)}** (largest allowed ${diff(o.maxStep)}, ${o.direction})`,
     );
   }
+  const lengths = rungLength(s.analysis, rung.index);
+  const session = lengths.paces;
+  if (n && session.length) {
+    lines.push('');
+    lines.push(`Session: ${describeRungLength(lengths, 0)}`);
+  }
   lines.push('');
-  const session = rungLength(s.analysis, rung.index).paces;
   lines.push('| pace | speech | session with gaps |');
   lines.push('|---|---:|---:|');
   rung.paces.forEach((p, i) => lines.push(`| ${p.label} | ${total(rung.totalSeconds[i])} | ${formatLength(session[i].seconds)} |`));
   lines.push('');
   lines.push(`Speech leaves out pauses; the session adds ${o.timing.gap} s between items (\`@item-gap\`)${o.timing.phrasePause ? ` and ${o.timing.phrasePause} s at phrase breaks` : ''}.`);
+  const script = sessionLengths(s.analysis).script;
+  if (script.length && s.analysis.rungs.length > 1) lines.push('', `Whole script with gaps: ${describeLengths(script)}.`);
   return lines.join('\n');
 }
 
