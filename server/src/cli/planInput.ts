@@ -1,14 +1,11 @@
 // What `rungs cues`, `rungs audio` and `rungs practice` share: read one script, analyse it with its
 // config, pick the rung and pace asked for, and make the session plan.
-import { basename, relative, resolve } from 'node:path';
-import { analyze, type AnalyzeOutput } from '../core/analyze';
 import { parsePaces } from '../core/pace';
 import { planSession, type DeliveryMode, type SessionPlan } from '../core/timing';
-import type { Pace } from '../core/types';
-import { resolveScriptContext } from '../config/resolve';
-import { loadWordTable } from '../data/wordTable';
+import type { Analysis, Pace } from '../core/types';
 import type { FlagSpec, ParsedArgs } from './args';
 import { UsageError, type CliIO } from './io';
+import { loadScripts } from './scripts';
 
 export const PLAN_FLAGS: Record<string, FlagSpec> = {
   rung: { value: true, alias: 'r' },
@@ -28,7 +25,7 @@ export interface PlanInput {
   /** The file as shown in messages (relative to the working folder). */
   shown: string;
   text: string;
-  analysis: AnalyzeOutput;
+  analysis: Analysis;
   plan: SessionPlan;
   /** The rung asked for, or null for the whole script. */
   rung: number | null;
@@ -37,7 +34,7 @@ export interface PlanInput {
 }
 
 /** Reads "2" (1-based number) or a rung name (case and surrounding spaces ignored). */
-function findRung(a: AnalyzeOutput, wanted: string): number {
+function findRung(a: Analysis, wanted: string): number {
   const names = a.rungs.map((r) => r.node.name);
   if (/^\d+$/.test(wanted)) {
     const n = Number(wanted);
@@ -55,17 +52,10 @@ function findRung(a: AnalyzeOutput, wanted: string): number {
  */
 export function readPlanInput(io: CliIO, args: ParsedArgs, command: string): PlanInput | number {
   if (args.positionals.length !== 1) throw new UsageError('give exactly one script file');
-  const file = resolve(io.cwd, args.positionals[0]);
-  const shown = relative(io.cwd, file) || basename(file);
-  let text: string;
-  try {
-    text = io.fs.readFile(file);
-  } catch (err) {
-    io.stderr(`rungs ${command}: ${shown}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
-    return 2;
-  }
-  const ctx = resolveScriptContext(file, io.fs);
-  const analysis = analyze({ text, data: loadWordTable(), options: ctx.options, lexicon: ctx.lexicon });
+  const { scripts, code } = loadScripts(io, args.positionals, command);
+  if (!scripts.length) return code;
+  if (scripts.length > 1) throw new UsageError(`"${args.positionals[0]}" holds ${scripts.length} scripts: give one script file`);
+  const { file, shown, text, analysis } = scripts[0];
   const rungFlag = args.flags.get('rung');
   const rung = typeof rungFlag === 'string' ? findRung(analysis, rungFlag) : null;
   let pace: Pace | null = null;
