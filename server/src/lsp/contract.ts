@@ -106,6 +106,7 @@ export interface ProgressView {
 }
 
 export const PROGRESS_METHOD = 'rungs/progress';
+
 /**
  * The server's paced-delivery commands (arguments: document uri, rung header line). Each writes
  * its files beside the script and answers a DeliveryResult.
