@@ -3,6 +3,7 @@ import type { Analysis, ItemAnalysis, Pace, Problem } from '../core/types';
 import { formatNumber } from '../core/pace';
 import { CAUTION } from '../core/caution';
 import { describeLengths, sessionLengths } from '../core/timing';
+import { jsonPieces } from './jsonStream';
 
 export interface ScoredFile {
   file: string;
@@ -96,8 +97,22 @@ function itemJson(it: ItemAnalysis): unknown {
 }
 
 export function formatJson(files: ScoredFile[]): string {
-  const out = files.length === 1 ? scoreJson(files[0]) : files.map(scoreJson);
-  return `${JSON.stringify(out, null, 2)}\n`;
+  return [...formatJsonPieces(files)].join('');
+}
+
+/** The JSON output in pieces, for writing results too large to hold as one string. */
+export function* formatJsonPieces(files: ScoredFile[]): Generator<string> {
+  if (files.length === 1) yield* jsonPieces(scoreJson(files[0]));
+  else {
+    // One file's data at a time, so only that file's JSON objects are alive at once.
+    yield files.length ? '[' : '[]';
+    for (let i = 0; i < files.length; i++) {
+      yield `${i ? ',' : ''}\n  `;
+      yield* jsonPieces(scoreJson(files[i]), '  ');
+    }
+    if (files.length) yield '\n]';
+  }
+  yield '\n';
 }
 
 function csvCell(v: string | number | null): string {
@@ -155,7 +170,7 @@ export function formatTable(files: ScoredFile[], caution: string): string {
         String(it.rank),
         ...it.timings.map((t) => t.seconds.toFixed(1)),
       ]);
-      const widths = cols.map((c, i) => Math.max(c.length, ...rows.map((row) => row[i].length)));
+      const widths = cols.map((c, i) => rows.reduce((w, row) => Math.max(w, row[i].length), c.length));
       const paceNotes = r.paces
         .map((p, i) => `${formatNumber(r.totalSeconds[i], 1)} s at ${p.label}${paceNote(a, p)}`)
         .join(', ');

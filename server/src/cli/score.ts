@@ -1,8 +1,9 @@
 // `rungs score FILE... [--format table|csv|json]`: per-item scores of each script.
 import { CAUTION } from '../core/caution';
 import { parseArgs } from './args';
-import { formatCsv, formatJson, formatTable, type ScoredFile } from './formatScore';
+import { formatCsv, formatJsonPieces, formatTable, type ScoredFile } from './formatScore';
 import { UsageError, type CliIO } from './io';
+import { batched } from './jsonStream';
 import { loadScripts } from './scripts';
 import type { Command } from './main';
 
@@ -22,7 +23,8 @@ export const scoreCommand: Command = {
     const { scripts, code } = loadScripts(io, args.positionals, 'score');
     const scored: ScoredFile[] = scripts.map((s) => ({ file: s.shown, analysis: s.analysis, problems: s.problems }));
     if (scored.length) {
-      io.stdout(format === 'json' ? formatJson(scored) : format === 'csv' ? formatCsv(scored) : formatTable(scored, CAUTION));
+      if (format === 'json') for (const chunk of batched(formatJsonPieces(scored))) io.stdout(chunk);
+      else io.stdout(format === 'csv' ? formatCsv(scored) : formatTable(scored, CAUTION));
     }
     return code;
   },

@@ -15,6 +15,7 @@ import { parseConfigText, parseConfigObject, type ConfigLayer } from './parseCon
 
 export { CONFIG_FILE_NAMES, parseConfigText, parseConfigObject, type ConfigLayer } from './parseConfig';
 import { CONFIG_FILE_NAMES } from './parseConfig';
+import { pushAll } from '../core/arrays';
 
 export interface ScriptContext {
   options: AnalysisOptions;
@@ -130,7 +131,7 @@ export function resolveScriptContext(path: string, fs: ConfigFs, opts: ResolveOp
       }
       try {
         const lex = readLexicon(entry.path, fs, entry.name);
-        lexicon.push(...lex.overrides);
+        pushAll(lexicon, lex.overrides);
         for (const p of lex.problems) problems.push({ file: entry.path, problem: p });
       } catch (err) {
         problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `cannot read lexicon file "${entry.name}" (${(err as NodeJS.ErrnoException).code ?? String(err)})` } });

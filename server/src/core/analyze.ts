@@ -20,6 +20,7 @@ import type {
   WordData,
 } from './types';
 import { addWcmParts, emptyWcmParts } from './wcm';
+import { pushAll } from './arrays';
 
 export interface AnalyzeInput {
   text: string;
@@ -198,7 +199,7 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
   const problems: Problem[] = [...script.problems];
   const header = applySettings(input.options ?? defaultOptions(), script.header, 'script');
   const options = header.options;
-  problems.push(...header.problems);
+  pushAll(problems, header.problems);
 
   const overrides = [...(input.lexicon ?? []), ...script.overrides];
   const key = pronouncerKey(overrides, options);
@@ -234,7 +235,7 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
   const items: ItemAnalysis[] = [];
   script.rungs.forEach((node, index) => {
     const rungSettings = applySettings(options, node.settings, 'rung');
-    problems.push(...rungSettings.problems);
+    pushAll(problems, rungSettings.problems);
     const explicitPaces = node.settings.some((s) => s.key === 'pace' || s.key === 'paces');
     const paces = explicitPaces ? rungSettings.options.paces : options.paces;
     node.paces = explicitPaces ? paces : null;
@@ -250,7 +251,7 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
       const own: Problem[] = [];
       const item = analyzeItem(it, index, paces, options, pronouncer, own);
       entries.set(itemKey, { item, problems: own });
-      problems.push(...own);
+      pushAll(problems, own);
       return item;
     });
     const inherited = node.sets.length ? node.sets : scriptSets;
@@ -267,7 +268,7 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
       max: ds.reduce((m, d) => Math.max(m, d), ds.length ? -Infinity : 0),
       totalSeconds: paces.map((_, pi) => rungItems.reduce((sum, it) => sum + it.timings[pi].seconds, 0)),
     });
-    items.push(...rungItems);
+    pushAll(items, rungItems);
   });
 
   problems.sort((a, b) => a.line - b.line || a.character - b.character);

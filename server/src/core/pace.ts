@@ -2,6 +2,7 @@
 // trade's unit); syllables per second is accepted when a script says so. Durations leave out
 // pauses and phrase-final lengthening, so real items run somewhat longer.
 import type { Pace, PaceTiming, PaceUnit } from './types';
+import { pushAll } from './arrays';
 
 /** Adult reading-aloud rate: 183 words per minute = 3.05 words/s (Brysbaert 2019, JML 109). */
 export const READING_NORM_WPS = 183 / 60;
@@ -46,7 +47,8 @@ export function parsePaces(text: string): { paces: Pace[]; error: string | null 
           return { paces: [], error: `paces are per second, not per minute: divide by 60 (90 ${m[2]} = 1.5 ${m[2] === 'wpm' ? 'wps' : 'sps'})` };
         }
         if (!unit) return { paces: [], error: `unknown unit "${m[2]}": use wps (words/s) or sps (syllables/s)` };
-        paces.push(...pending.map((v) => makePace(v, unit)), makePace(value, unit));
+        pushAll(paces, pending.map((v) => makePace(v, unit)));
+        paces.push(makePace(value, unit));
         pending = [];
       } else pending.push(value);
       continue;
@@ -57,10 +59,10 @@ export function parsePaces(text: string): { paces: Pace[]; error: string | null 
     }
     if (!unit) return { paces: [], error: `cannot read "${part}" as a pace: write numbers with wps or sps, e.g. "1.5, 2 wps"` };
     if (!pending.length) return { paces: [], error: `unit "${part}" has no number before it` };
-    paces.push(...pending.map((v) => makePace(v, unit)));
+    pushAll(paces, pending.map((v) => makePace(v, unit)));
     pending = [];
   }
-  paces.push(...pending.map((v) => makePace(v, 'wps')));
+  pushAll(paces, pending.map((v) => makePace(v, 'wps')));
   if (!paces.length) return { paces: [], error: 'no pace given: write e.g. "1.5, 2 wps"' };
   return { paces, error: null };
 }

@@ -11,6 +11,7 @@ import type {
   Setting,
 } from './types';
 import { validatePhones } from './phones';
+import { pushAll } from './arrays';
 
 export const COMMENT = '//';
 export const RUNG_MARK = '==';
@@ -160,7 +161,7 @@ function parseItem(raw: string, line: number, start: number): ItemNode {
   if (bar >= 0) {
     let trailer = raw.slice(bar + 1);
     trailer = trailer.replace(SET_ATTR, (_m, lead: string, labels: string) => {
-      sets.push(...splitLabels(labels));
+      pushAll(sets, splitLabels(labels));
       return lead;
     });
     trailer = trailer.replace(ID_TOKEN, (m, lead: string, value: string) => {
@@ -263,7 +264,7 @@ export function parseScript(text: string): ParsedScript {
   });
 
   for (const r of rungs) {
-    for (const s of r.settings) if (s.key === 'set' || s.key === 'sets') r.sets.push(...splitLabels(s.value));
+    for (const s of r.settings) if (s.key === 'set' || s.key === 'sets') pushAll(r.sets, splitLabels(s.value));
   }
   return { header, rungs, comments, overrides, problems, lineCount: lines.length };
 }

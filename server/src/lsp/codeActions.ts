@@ -14,6 +14,7 @@ import { fromLspRange, rangesTouch, toLspDiagnostic, toLspTextEdit } from './con
 import type { Snapshot } from './documents';
 import { eolOf, sortRung } from './sortRung';
 import { balanceRungActions } from './balanceRung';
+import { pushAll } from '../core/arrays';
 
 export const FIX_ALL_KIND = `${CodeActionKind.SourceFixAll}.rungs`;
 
@@ -40,7 +41,7 @@ export function compatibleFixes(problems: Problem[]): TextEdit[] {
   for (const p of problems) {
     if (!p.fix || p.fix.batch === false) continue;
     if (p.fix.edits.some((e) => chosen.some((c) => rangesTouch(c, e)))) continue;
-    chosen.push(...p.fix.edits);
+    pushAll(chosen, p.fix.edits);
   }
   return chosen;
 }

@@ -3,6 +3,7 @@
 // left to the TextMate grammar, so themes colour sentences as plain prose.
 import { SemanticTokensBuilder, type SemanticTokens, type SemanticTokensLegend } from 'vscode-languageserver/node';
 import type { Snapshot } from './documents';
+import { pushAll } from '../core/arrays';
 
 export const TOKEN_TYPES = ['comment', 'keyword', 'string', 'namespace', 'operator', 'label', 'enumMember', 'number'] as const;
 type TokenType = (typeof TOKEN_TYPES)[number];
@@ -70,7 +71,7 @@ export function semanticTokens(s: Snapshot): SemanticTokens {
     const toks: Tok[] = [];
     for (const m of it.node.text.matchAll(/\p{L}\((\d+)\)/gu)) toks.push({ start: it.node.textStart + m.index! + 1, length: m[1].length + 2, type: 'number' });
     const bar = raw.indexOf('|', it.node.textEnd);
-    if (bar >= 0) toks.push(...trailerTokens(raw, bar));
+    if (bar >= 0) pushAll(toks, trailerTokens(raw, bar));
     add(it.node.line, toks);
   }
   const builder = new SemanticTokensBuilder();

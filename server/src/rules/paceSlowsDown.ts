@@ -3,10 +3,11 @@ import { formatNumber } from '../core/pace';
 import type { Pace, PaceUnit } from '../core/types';
 import type { Rule } from './types';
 import { fmt, paceRange, rungLabel, rungRelated, rungStats } from './shared';
+import { maxOf, minOf } from '../core/arrays';
 
 function extremes(paces: Pace[], unit: PaceUnit): { low: number; high: number } | null {
   const vs = paces.filter((p) => p.unit === unit).map((p) => p.value);
-  return vs.length ? { low: Math.min(...vs), high: Math.max(...vs) } : null;
+  return vs.length ? { low: minOf(vs), high: maxOf(vs) } : null;
 }
 
 export const paceSlowsDown: Rule = {

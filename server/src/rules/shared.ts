@@ -4,6 +4,7 @@ import { median } from '../core/difficulty';
 import { formatNumber } from '../core/pace';
 import type { ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
 import type { LadderMetric, RuleContext } from './types';
+import { maxOf, minOf } from '../core/arrays';
 
 /** One decimal, as the score table shows difficulty: 21.7, 24.0. */
 export const fmt = (n: number): string => (Math.abs(n) < 0.05 ? 0 : n).toFixed(1);
@@ -61,7 +62,7 @@ export function rungStats(ctx: RuleContext): RungStat[] {
     .filter((r) => r.items.length > 0)
     .map((rung) => {
       const values = rung.items.map((i) => Number(metricOf(i, metric).toFixed(1)));
-      return { rung, values, median: median(values), min: Math.min(...values), max: Math.max(...values) };
+      return { rung, values, median: median(values), min: minOf(values), max: maxOf(values) };
     });
 }
 
