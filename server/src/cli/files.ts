@@ -77,14 +77,26 @@ export function expandPaths(paths: string[], cwd: string, fs: CliFs, opts: Expan
   const found = new Set<string>();
   const missing: string[] = [];
   let stdin = false;
-  const walk = (dir: string, visit: (file: string) => void) => {
-    for (const name of [...fs.readdir(dir)].sort(compare)) {
+  const real = (p: string) => (fs.realpath ? fs.realpath(p) : p);
+  // Folder links can form cycles (two links to "."): each walk enters a real folder once.
+  // Pipes and devices named *.rungs are skipped: reading one would block or never end.
+  const walk = (dir: string, visit: (file: string) => void, visited = new Set<string>()) => {
+    const key = real(dir);
+    if (visited.has(key)) return;
+    visited.add(key);
+    let names: string[];
+    try {
+      names = [...fs.readdir(dir)].sort(compare);
+    } catch {
+      return;
+    }
+    for (const name of names) {
       if (name === 'node_modules' || name.startsWith('.')) continue;
       const p = join(dir, name);
       const isDir = fs.isDirectory(p);
       if (gitignores?.ignored(p, isDir)) continue;
-      if (isDir) walk(p, visit);
-      else if (wanted(name)) visit(p);
+      if (isDir) walk(p, visit, visited);
+      else if (wanted(name) && (fs.isFile?.(p) ?? true)) visit(p);
     }
   };
   for (const raw of paths) {
@@ -116,7 +128,11 @@ export function expandPaths(paths: string[], cwd: string, fs: CliFs, opts: Expan
     else if (fs.isDirectory(p)) walk(p, (f) => found.add(f));
     else named.push(p);
   }
-  const files = [...new Set([...named, ...found])].sort(compare);
+  // One file reached by several paths (a linked folder, a file link) is checked (and fixed) once,
+  // under the first of its paths in sorted order.
+  const byReal = new Map<string, string>();
+  for (const f of [...new Set([...named, ...found])].sort(compare)) if (!byReal.has(real(f))) byReal.set(real(f), f);
+  const files = [...byReal.values()];
   if (stdin) files.push('-');
   return { files, missing };
 }

@@ -5,6 +5,10 @@ export interface CliFs {
   isDirectory(path: string): boolean;
   exists(path: string): boolean;
   readdir(path: string): string[];
+  /** False for pipes, devices and sockets, which the folder walk skips (absent: every file is regular). */
+  isFile?(path: string): boolean;
+  /** The path with links resolved, so a walk visits each folder and file once (absent: the path). */
+  realpath?(path: string): string;
 }
 
 export interface CliIO {

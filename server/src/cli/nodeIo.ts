@@ -1,9 +1,10 @@
 // The real file system and streams behind CliIO.
 import * as fs from 'node:fs';
+import { isRegularFile, readStdinBounded, readTextBounded, realPath } from '../node/boundedRead';
 import type { CliFs, CliIO } from './io';
 
 export const nodeFs: CliFs = {
-  readFile: (p) => fs.readFileSync(p, 'utf8'),
+  readFile: (p) => readTextBounded(p),
   writeFile: (p, text) => fs.writeFileSync(p, text),
   isDirectory: (p) => {
     try {
@@ -14,6 +15,8 @@ export const nodeFs: CliFs = {
   },
   exists: (p) => fs.existsSync(p),
   readdir: (p) => fs.readdirSync(p),
+  isFile: isRegularFile,
+  realpath: realPath,
 };
 
 /**
@@ -48,7 +51,7 @@ export function nodeIo(argv: string[]): CliIO {
     fs: nodeFs,
     stdout: stdoutWriter(),
     stderr: (t) => process.stderr.write(t),
-    readStdin: () => fs.readFileSync(0, 'utf8'),
+    readStdin: () => readStdinBounded(),
     isTTY: Boolean(process.stdout.isTTY),
     env: process.env,
   };

@@ -9,6 +9,7 @@ import { editDistance, KEYS, keySpec } from '../core/options';
 import type { Problem, Range, Setting } from '../core/types';
 import { RULE_IDS } from '../rules/index';
 import { jsonSyntaxError } from './jsonError';
+import { excerpt } from '../core/excerpt';
 import { LADDER_METRICS, type LadderMetric, type LadderSettings, type SeverityOverrides } from '../rules/types';
 
 /** Looked for in each folder, in this order; the first found is the folder's config. */
@@ -40,6 +41,9 @@ interface Entry {
   valueRange: Range;
   children: Entry[] | null;
 }
+
+/** A value as a message quotes it: JSON, short and escaped. */
+const shown = (v: unknown): string => excerpt(JSON.stringify(v) ?? String(v));
 
 const NOWHERE: Range = { line: 0, character: 0, endLine: 0, endCharacter: 0 };
 
@@ -193,7 +197,7 @@ function interpret(entries: Entry[], file: string, baseDir: string, fromFile: bo
   for (const e of entries) {
     const key = e.key.toLowerCase();
     if (key === 'root') {
-      if (typeof e.value !== 'boolean') bad(e.valueRange, `"root" takes true or false, not ${JSON.stringify(e.value)}`);
+      if (typeof e.value !== 'boolean') bad(e.valueRange, `"root" takes true or false, not ${shown(e.value)}`);
       else layer.root = e.value;
     } else if (key === 'rules') {
       if (!e.children) bad(e.valueRange, '"rules" maps rule ids to error, warning, info, hint or off');
@@ -201,19 +205,19 @@ function interpret(entries: Entry[], file: string, baseDir: string, fromFile: bo
         const id = r.key.toLowerCase();
         if (!RULE_IDS.includes(id)) {
           const near = nearestOf(id, RULE_IDS);
-          bad(r.keyRange, `unknown rule "${r.key}"${near ? `; did you mean "${near}"?` : ''}`, 'bad-config', near && fromFile ? { title: `Change "${r.key}" to "${near}"`, edits: [{ ...r.keyRange, newText: near }] } : undefined);
+          bad(r.keyRange, `unknown rule "${excerpt(r.key)}"${near ? `; did you mean "${near}"?` : ''}`, 'bad-config', near && fromFile ? { title: `Change "${excerpt(r.key)}" to "${near}"`, edits: [{ ...r.keyRange, newText: near }] } : undefined);
         } else if (typeof r.value !== 'string' || !SEVERITIES.includes(r.value.toLowerCase())) {
-          bad(r.valueRange, `the severity of "${id}" is one of ${SEVERITIES.join(', ')}, not ${JSON.stringify(r.value)}`);
+          bad(r.valueRange, `the severity of "${id}" is one of ${SEVERITIES.join(', ')}, not ${shown(r.value)}`);
         } else layer.rules[id] = r.value.toLowerCase() as SeverityOverrides[string];
       }
     } else if (key === 'ladder') {
       if (!e.children) bad(e.valueRange, '"ladder" is an object: {"metric": "syllables", "maxStep": 3}');
       for (const l of e.children ?? []) {
         if (l.key === 'metric' && LADDER_METRICS.includes(l.value as LadderMetric)) layer.ladder.metric = l.value as LadderMetric;
-        else if (l.key === 'metric') bad(l.valueRange, `ladder metric is one of ${LADDER_METRICS.join(', ')}, not ${JSON.stringify(l.value)}`);
+        else if (l.key === 'metric') bad(l.valueRange, `ladder metric is one of ${LADDER_METRICS.join(', ')}, not ${shown(l.value)}`);
         else if (l.key === 'maxStep' && typeof l.value === 'number' && l.value > 0) layer.ladder.maxStep = l.value;
-        else if (l.key === 'maxStep') bad(l.valueRange, `ladder maxStep is a number above 0, not ${JSON.stringify(l.value)}`);
-        else bad(l.keyRange, `unknown ladder key "${l.key}": use metric or maxStep`);
+        else if (l.key === 'maxStep') bad(l.valueRange, `ladder maxStep is a number above 0, not ${shown(l.value)}`);
+        else bad(l.keyRange, `unknown ladder key "${excerpt(l.key)}": use metric or maxStep`);
       }
     } else if (key === 'lexicon') {
       const list = typeof e.value === 'string' ? [e.value] : e.value;
@@ -225,12 +229,12 @@ function interpret(entries: Entry[], file: string, baseDir: string, fromFile: bo
     } else if (keySpec(key)) {
       const spec = keySpec(key)!;
       if (SCRIPT_ONLY.has(spec.key)) {
-        bad(e.keyRange, `"${e.key}" belongs in a script, not in a config file${spec.key === 'say' ? ' (put pronunciations in a lexicon file)' : ''}`, 'bad-value');
+        bad(e.keyRange, `"${excerpt(e.key)}" belongs in a script, not in a config file${spec.key === 'say' ? ' (put pronunciations in a lexicon file)' : ''}`, 'bad-value');
         continue;
       }
       const value = settingText(e.value);
       if (value === null) {
-        bad(e.valueRange, `cannot read the value of "${e.key}": write it as in a script, e.g. "${spec.example}"`, 'bad-value');
+        bad(e.valueRange, `cannot read the value of "${excerpt(e.key)}": write it as in a script, e.g. "${spec.example}"`, 'bad-value');
         continue;
       }
       const vr = e.valueRange;
@@ -245,7 +249,7 @@ function interpret(entries: Entry[], file: string, baseDir: string, fromFile: bo
       });
     } else {
       const near = nearestOf(key, [...RESERVED, ...KEYS.filter((k) => !SCRIPT_ONLY.has(k.key)).map((k) => k.key)]);
-      bad(e.keyRange, `unknown key "${e.key}"${near ? `; did you mean "${near}"?` : ''}`, 'unknown-key', near && fromFile ? { title: `Change "${e.key}" to "${near}"`, edits: [{ ...e.keyRange, newText: near }] } : undefined);
+      bad(e.keyRange, `unknown key "${excerpt(e.key)}"${near ? `; did you mean "${near}"?` : ''}`, 'unknown-key', near && fromFile ? { title: `Change "${excerpt(e.key)}" to "${near}"`, edits: [{ ...e.keyRange, newText: near }] } : undefined);
     }
   }
   return layer;

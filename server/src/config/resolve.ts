@@ -6,7 +6,8 @@
 // the file-system root or a file with `root: true`; a nearer file overrides a farther one. They are
 // JSON or YAML, never code. Settings keys and values are read by the same table as script headers
 // (core/options.ts), so a value means the same thing in both places.
-import { dirname, join } from 'node:path';
+import { dirname, isAbsolute, join, relative, resolve } from 'node:path';
+import { excerpt } from '../core/excerpt';
 import { applySettings, defaultOptions } from '../core/options';
 import { parseLexicon } from '../core/parse';
 import type { AnalysisOptions, Override, Problem } from '../core/types';
@@ -30,6 +31,10 @@ export interface ScriptContext {
 export interface ConfigFs {
   readFile(path: string): string;
   exists(path: string): boolean;
+  /** False for pipes, devices and folders (absent: every existing path is a regular file). */
+  isFile?(path: string): boolean;
+  /** The path with links resolved, to confine lexicons to their folder (absent: the path). */
+  realpath?(path: string): string;
 }
 
 export interface ResolveOptions {
@@ -124,9 +129,15 @@ export function resolveScriptContext(path: string, fs: ConfigFs, opts: ResolveOp
     for (const p of applied.problems) problems.push({ file: layer.file, problem: configWording(p) });
     Object.assign(severities, layer.rules);
     ladder = { ...ladder, ...layer.ladder };
+    const roots = [layer.fromFile ? dirname(layer.file) : opts.editor?.baseDir, opts.editor?.baseDir].filter((r): r is string => Boolean(r));
     for (const entry of layer.lexicon) {
+      const refused = lexiconRefusal(entry.path, roots, fs);
+      if (refused) {
+        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `lexicon file "${excerpt(entry.name)}" ${refused}` } });
+        continue;
+      }
       if (!fs.exists(entry.path)) {
-        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `lexicon file "${entry.name}" does not exist (looked for ${entry.path})` } });
+        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `lexicon file "${excerpt(entry.name)}" does not exist (looked for ${excerpt(entry.path, 200)})` } });
         continue;
       }
       try {
@@ -134,13 +145,32 @@ export function resolveScriptContext(path: string, fs: ConfigFs, opts: ResolveOp
         pushAll(lexicon, lex.overrides);
         for (const p of lex.problems) problems.push({ file: entry.path, problem: p });
       } catch (err) {
-        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `cannot read lexicon file "${entry.name}" (${(err as NodeJS.ErrnoException).code ?? String(err)})` } });
+        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `cannot read lexicon file "${excerpt(entry.name)}" (${(err as NodeJS.ErrnoException).code ?? String(err)})` } });
       }
     }
   }
   const lint: LintSettings = { severities };
   if (Object.keys(ladder).length) lint.ladder = ladder;
   return { options, lexicon, lint, problems, configFiles: layers.filter((l) => l.fromFile).map((l) => l.file) };
+}
+
+/** True when `path` is `root` or lies below it. */
+function inside(root: string, path: string): boolean {
+  const r = relative(root, path);
+  return r === '' || (!r.startsWith('..') && !isAbsolute(r));
+}
+
+/**
+ * Why a lexicon may not be read, or null. A config file may name only files in its own folder tree
+ * (or, in the editor, the workspace folder): a config that arrives with a checked-out project must
+ * not read the machine's other files into lint output. Links are resolved before the check.
+ */
+function lexiconRefusal(path: string, roots: string[], fs: ConfigFs): string | null {
+  const real = (p: string) => (fs.realpath ? fs.realpath(p) : p);
+  const ok = roots.some((root) => inside(resolve(root), resolve(path)) && (!fs.exists(path) || inside(real(root), real(path))));
+  if (!ok) return 'is outside the folder of the config file that names it (a lexicon must be in that folder or below it)';
+  if (fs.exists(path) && fs.isFile && !fs.isFile(path)) return 'is not a regular file';
+  return null;
 }
 
 /** Config files name keys without the script's `@`: say so in messages and fixes. */

@@ -9,6 +9,7 @@ import { DEFAULT_WCM_OPTIONS } from './wcm';
 import { defaultRecordsOptions, RECORDS_KEYS } from './records/settings';
 import { TIMING_KEYS } from './timingKeys';
 import { DEFAULT_TIMING } from './timing';
+import { excerpt } from './excerpt';
 
 export function defaultOptions(): AnalysisOptions {
   return {
@@ -46,7 +47,7 @@ function positiveNumber(value: string, what: string, allowZero = false): number 
   const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*$/.exec(value);
   const n = m ? Number(m[1]) : NaN;
   if (!m || Number.isNaN(n) || (!allowZero && n <= 0)) {
-    return `${what} must be a ${allowZero ? 'number, 0 or more' : 'number above 0'}, not "${value.trim()}"`;
+    return `${what} must be a ${allowZero ? 'number, 0 or more' : 'number above 0'}, not "${excerpt(value.trim())}"`;
   }
   return n;
 }
@@ -90,7 +91,7 @@ function flagSetting(key: string, summary: string, set: (o: AnalysisOptions, v: 
     values: ['yes', 'no'],
     apply(value, o) {
       const v = yesNo(value);
-      if (v === null) return `@${key} takes yes or no, not "${value.trim()}"`;
+      if (v === null) return `@${key} takes yes or no, not "${excerpt(value.trim())}"`;
       set(o, v);
       return null;
     },
@@ -142,7 +143,7 @@ export const KEYS: KeySpec[] = [
     values: ['rising', 'falling'],
     apply(value, o) {
       const v = value.trim().toLowerCase();
-      if (v !== 'rising' && v !== 'falling') return `@direction is rising or falling, not "${value.trim()}"`;
+      if (v !== 'rising' && v !== 'falling') return `@direction is rising or falling, not "${excerpt(value.trim())}"`;
       o.direction = v as Direction;
       return null;
     },
@@ -175,7 +176,7 @@ export const KEYS: KeySpec[] = [
       if (named.length) {
         for (const m of named) w[m[1].toLowerCase() as keyof typeof w] = Number(m[2]);
         const rest = value.replace(/(length|complexity|rarity)\s*[=:]?\s*(\d+(?:\.\d+)?)/gi, '').replace(/[,\s]/g, '');
-        if (rest) return `cannot read "${rest}" in @weights: write e.g. "length 0.4, complexity 0.4, rarity 0.2"`;
+        if (rest) return `cannot read "${excerpt(rest)}" in @weights: write e.g. "length 0.4, complexity 0.4, rarity 0.2"`;
       } else {
         const nums = value.split(/[,\s]+/).filter(Boolean).map(Number);
         if (nums.length !== 3 || nums.some((n) => Number.isNaN(n) || n < 0)) {
@@ -293,7 +294,7 @@ export function applySettings(
       const p = settingProblem(
         s,
         'unknown-key',
-        `unknown setting "@${s.key}"${near ? `; did you mean "@${near}"?` : ''}`,
+        `unknown setting "@${excerpt(s.key)}"${near ? `; did you mean "@${near}"?` : ''}`,
         true,
       );
       if (near) {

@@ -3,6 +3,7 @@
 // pauses and phrase-final lengthening, so real items run somewhat longer.
 import type { Pace, PaceTiming, PaceUnit } from './types';
 import { pushAll } from './arrays';
+import { excerpt } from './excerpt';
 
 /** Adult reading-aloud rate: 183 words per minute = 3.05 words/s (Brysbaert 2019, JML 109). */
 export const READING_NORM_WPS = 183 / 60;
@@ -39,14 +40,14 @@ export function parsePaces(text: string): { paces: Pace[]; error: string | null 
     const m = /^(\d+(?:\.\d+)?|\.\d+)([a-z/]*)$/.exec(part);
     if (m) {
       const value = Number(m[1]);
-      if (!(value > 0)) return { paces: [], error: `pace "${part}" must be above 0` };
-      if (value > 20) return { paces: [], error: `pace ${part} is not a plausible speech rate (above 20 per second)` };
+      if (!(value > 0)) return { paces: [], error: `pace "${excerpt(part)}" must be above 0` };
+      if (value > 20) return { paces: [], error: `pace ${excerpt(part)} is not a plausible speech rate (above 20 per second)` };
       if (m[2]) {
         const unit = UNIT_WORDS[m[2]];
         if (m[2] === 'wpm' || m[2] === 'spm') {
           return { paces: [], error: `paces are per second, not per minute: divide by 60 (90 ${m[2]} = 1.5 ${m[2] === 'wpm' ? 'wps' : 'sps'})` };
         }
-        if (!unit) return { paces: [], error: `unknown unit "${m[2]}": use wps (words/s) or sps (syllables/s)` };
+        if (!unit) return { paces: [], error: `unknown unit "${excerpt(m[2])}": use wps (words/s) or sps (syllables/s)` };
         pushAll(paces, pending.map((v) => makePace(v, unit)));
         paces.push(makePace(value, unit));
         pending = [];
@@ -57,8 +58,8 @@ export function parsePaces(text: string): { paces: Pace[]; error: string | null 
     if (part === 'wpm' || part === 'spm') {
       return { paces: [], error: `paces are per second, not per minute: divide by 60 (90 ${part} = 1.5 ${part === 'wpm' ? 'wps' : 'sps'})` };
     }
-    if (!unit) return { paces: [], error: `cannot read "${part}" as a pace: write numbers with wps or sps, e.g. "1.5, 2 wps"` };
-    if (!pending.length) return { paces: [], error: `unit "${part}" has no number before it` };
+    if (!unit) return { paces: [], error: `cannot read "${excerpt(part)}" as a pace: write numbers with wps or sps, e.g. "1.5, 2 wps"` };
+    if (!pending.length) return { paces: [], error: `unit "${excerpt(part)}" has no number before it` };
     pushAll(paces, pending.map((v) => makePace(v, unit)));
     pending = [];
   }

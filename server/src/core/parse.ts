@@ -12,6 +12,7 @@ import type {
 } from './types';
 import { validatePhones } from './phones';
 import { pushAll } from './arrays';
+import { excerpt } from './excerpt';
 
 export const COMMENT = '//';
 export const RUNG_MARK = '==';
@@ -80,7 +81,7 @@ export function parseOverride(
   for (const b of bad) {
     const at = restStart + offsetOfNth(rest, b.index);
     problems.push(
-      problem('unknown-phone', `"${b.phone}" is not a CMU ARPAbet phone: ${b.reason}`, line, at, at + b.phone.length),
+      problem('unknown-phone', `"${excerpt(b.phone)}" is not a CMU ARPAbet phone: ${b.reason}`, line, at, at + b.phone.length),
     );
   }
   if (bad.length) return null;

@@ -1,7 +1,7 @@
 // Open scripts and their analyses. Each document keeps its last analysis, its Pronouncer and its
 // item cache, so a request always gets the analysis of the text it was sent against (analysed
 // synchronously when the text or the settings moved on) and an edit re-scores only what changed.
-import { readFileSync, statSync } from 'node:fs';
+import { statSync } from 'node:fs';
 import { dirname, isAbsolute, join, normalize, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { TextDocument } from 'vscode-languageserver-textdocument';
@@ -10,6 +10,7 @@ import { splitLines } from '../core/parse';
 import type { ItemAnalysis, Problem, RungAnalysis, WordData } from '../core/types';
 import { clearConfigCache, resolveScriptContext, type ConfigFs } from '../config/resolve';
 import { lint } from '../rules/index';
+import { isRegularFile, readTextBounded, realPath } from '../node/boundedRead';
 import { analyzeIncremental, type ItemCache } from './incremental';
 import { DEFAULT_SETTINGS, toConfigObject, type RungsSettings } from './settings';
 
@@ -53,11 +54,15 @@ function recordingFs(fs: ConfigFs, seen: Map<string, string>): ConfigFs {
   return {
     readFile: (p) => (seen.set(pathKey(p), p), fs.readFile(p)),
     exists: (p) => (seen.set(pathKey(p), p), fs.exists(p)),
+    isFile: fs.isFile,
+    realpath: fs.realpath,
   };
 }
 
 export const nodeConfigFs: ConfigFs = {
-  readFile: (p) => readFileSync(p, 'utf8'),
+  readFile: (p) => readTextBounded(p),
+  isFile: isRegularFile,
+  realpath: realPath,
   exists: (p) => {
     try {
       statSync(p);

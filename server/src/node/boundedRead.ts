@@ -1,0 +1,93 @@
+// Reads files the way a linter fed untrusted paths must: regular files only (a named pipe or a
+// device such as /dev/zero would block or never end) and never more than a fixed number of bytes.
+// Shared by the CLI and the language server.
+import { closeSync, constants, fstatSync, openSync, readSync, realpathSync, statSync } from 'node:fs';
+
+/** Largest script, config or lexicon file read, in bytes (README "Limits"). */
+export const MAX_FILE_BYTES = 32 * 1024 * 1024;
+
+/**
+ * A read refused on purpose. Callers print `(err.code)` after "cannot read ..."; here `code` is the
+ * reason in words ("not a regular file", "larger than 32 MiB") so those messages read plainly.
+ */
+export class ReadRefused extends Error {
+  readonly code: string;
+  constructor(reason: string) {
+    super(reason);
+    this.code = reason;
+  }
+}
+
+/** The bytes of a regular file, refusing other kinds of file and anything over `limit` bytes. */
+export function readBytesBounded(path: string, limit = MAX_FILE_BYTES): Buffer {
+  // O_NONBLOCK lets a named pipe open at once (without it the open waits for a writer); fstat on
+  // the open descriptor then checks the very file that will be read.
+  const fd = openSync(path, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
+  try {
+    if (!fstatSync(fd).isFile()) throw new ReadRefused('not a regular file');
+    // Sizes can lie (files in /proc report 0), so read until the end or one byte past the bound.
+    const chunks: Buffer[] = [];
+    let total = 0;
+    for (;;) {
+      const buf = Buffer.allocUnsafe(Math.min(1 << 20, limit + 1 - total));
+      const n = readSync(fd, buf, 0, buf.length, null);
+      if (n === 0) break;
+      chunks.push(buf.subarray(0, n));
+      total += n;
+      if (total > limit) throw new ReadRefused(`larger than ${formatBytes(limit)}`);
+    }
+    return Buffer.concat(chunks, total);
+  } finally {
+    closeSync(fd);
+  }
+}
+
+/** A regular file's text (UTF-8), bounded as readBytesBounded. */
+export function readTextBounded(path: string, limit = MAX_FILE_BYTES): string {
+  return readBytesBounded(path, limit).toString('utf8');
+}
+
+/** True for a regular file (following links); false for folders, pipes, devices and missing paths. */
+export function isRegularFile(path: string): boolean {
+  try {
+    return statSync(path).isFile();
+  } catch {
+    return false;
+  }
+}
+
+/** The real path (links resolved), or the path itself when it cannot be resolved. */
+export function realPath(path: string): string {
+  try {
+    return realpathSync(path);
+  } catch {
+    return path;
+  }
+}
+
+export function formatBytes(n: number): string {
+  return n % (1024 * 1024) === 0 ? `${n / (1024 * 1024)} MiB` : `${n} bytes`;
+}
+
+/** All of standard input as text, up to `limit` bytes (a pipe from /dev/zero must not hang us). */
+export function readStdinBounded(limit = MAX_FILE_BYTES): string {
+  const chunks: Buffer[] = [];
+  let total = 0;
+  for (;;) {
+    const buf = Buffer.allocUnsafe(1 << 16);
+    let n: number;
+    try {
+      n = readSync(0, buf, 0, buf.length, null);
+    } catch (err) {
+      // A non-blocking stdin with nothing ready yet: try again; end of input otherwise.
+      if ((err as NodeJS.ErrnoException).code === 'EAGAIN') continue;
+      if ((err as NodeJS.ErrnoException).code === 'EOF') break;
+      throw err;
+    }
+    if (n === 0) break;
+    chunks.push(buf.subarray(0, n));
+    total += n;
+    if (total > limit) throw new ReadRefused(`larger than ${formatBytes(limit)}`);
+  }
+  return Buffer.concat(chunks, total).toString('utf8');
+}
