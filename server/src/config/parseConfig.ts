@@ -140,6 +140,43 @@ function yamlErrorStart(doc: Document, pos: number, message: string): number {
   return opened;
 }
 
+/** Keys repeated within one map, as the parser reports them with `uniqueKeys` (in linear time). */
+function duplicateKeys(root: unknown): { message: string; pos: [number, number] }[] {
+  const out: { message: string; pos: [number, number] }[] = [];
+  // An explicit stack: a deeply nested file must not overflow the call stack.
+  const stack: unknown[] = [root];
+  while (stack.length) {
+    const node = stack.pop();
+    if (!isCollection(node)) continue;
+    const seen = new Set<string>();
+    for (const item of node.items as unknown[]) {
+      if (isMap(node)) {
+        const pair = item as { key: unknown; value: unknown };
+        const k = pair.key;
+        if (isScalar(k)) {
+          const id = `${typeof k.value}:${String(k.value)}`;
+          if (seen.has(id) && k.range) out.push({ message: 'Map keys must be unique', pos: [k.range[0], k.range[1]] });
+          seen.add(id);
+        }
+        stack.push(pair.value);
+      } else stack.push(item);
+    }
+  }
+  return out;
+}
+
+/** Whether a sorted list holds a value in [from, to). */
+function anyIn(sorted: number[], from: number, to: number): boolean {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (sorted[mid] < from) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo < sorted.length && sorted[lo] < to;
+}
+
 export function parseConfigText(text: string, file: string): ConfigLayer {
   if (/\.json$/i.test(file)) {
     const bad = jsonSyntaxError(text);
@@ -150,13 +187,16 @@ export function parseConfigText(text: string, file: string): ConfigLayer {
     }
   }
   const lc = new LineCounter();
-  const doc = parseDocument(text, { lineCounter: lc, uniqueKeys: true, prettyErrors: false });
+  // The parser's own duplicate-key check compares every key with every other (quadratic in the
+  // number of keys); duplicateKeys does the same job with a set per map.
+  const doc = parseDocument(text, { lineCounter: lc, uniqueKeys: false, prettyErrors: false });
   const at = (offset: number): Range => {
     const p = lc.linePos(offset);
     return { line: p.line - 1, character: p.col - 1, endLine: p.line - 1, endCharacter: p.col - 1 };
   };
   const errorAt: number[] = [];
-  const problems: Problem[] = doc.errors.map((e) => {
+  const errors = [...doc.errors.map((e) => ({ message: e.message, pos: e.pos })), ...duplicateKeys(doc.contents)].sort((x, y) => x.pos[0] - y.pos[0]);
+  const problems: Problem[] = errors.map((e) => {
     const first = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
     const start = yamlErrorStart(doc, e.pos[0], first);
     errorAt.push(e.pos[0], start);
@@ -176,11 +216,12 @@ export function parseConfigText(text: string, file: string): ConfigLayer {
   // is left out (it may be misread), so the rest of the file applies.
   const items = isMap(contents) ? contents.items : [];
   const lineStart = (offset: number) => text.lastIndexOf('\n', offset - 1) + 1;
+  const sortedErrors = [...errorAt].sort((x, y) => x - y);
   const kept = entries.filter((_e, i) => {
     const from = lineStart((items[i].key as YamlNode | null)?.range?.[0] ?? 0);
     const nextKey = (items[i + 1]?.key as YamlNode | null | undefined)?.range?.[0];
     const to = nextKey === undefined ? Infinity : lineStart(nextKey);
-    return !errorAt.some((pos) => pos >= from && pos < to);
+    return !anyIn(sortedErrors, from, to);
   });
   return interpret(kept, file, dirname(file), true, problems);
 }

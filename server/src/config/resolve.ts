@@ -65,7 +65,13 @@ function readLayer(file: string, fs: ConfigFs): ConfigLayer | { file: string; er
   }
   const hit = layerCache.get(file);
   if (hit && hit.text === text) return hit.layer;
-  const layer = parseConfigText(text, file);
+  let layer: ConfigLayer;
+  try {
+    layer = parseConfigText(text, file);
+  } catch (err) {
+    // The YAML library recurses over nesting; a file nested thousands deep must not stop the run.
+    return { file, error: `cannot read the config file (${err instanceof RangeError ? 'nested too deeply' : String(err)})` };
+  }
   layerCache.set(file, { text, layer });
   return layer;
 }

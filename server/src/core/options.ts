@@ -98,6 +98,10 @@ function flagSetting(key: string, summary: string, set: (o: AnalysisOptions, v: 
   };
 }
 
+// `name = 0.4`: spaces taken atomically (a lookahead and a back-reference), so a long run of spaces
+// after a name that is not followed by a number costs one pass, not one pass per space.
+const WEIGHT = /(length|complexity|rarity)(?=(\s*))\2[=:]?(?=(\s*))\3(\d+(?:\.\d+)?)/gi;
+
 export const KEYS: KeySpec[] = [
   {
     key: 'title',
@@ -128,7 +132,7 @@ export const KEYS: KeySpec[] = [
     summary: "The client's unassisted speech rate, in words per second.",
     example: '0.8 wps',
     apply(value, o) {
-      const n = positiveNumber(value.replace(/\s*(wps|w\/s|words\/s)\s*$/i, ''), '@baseline');
+      const n = positiveNumber(value.replace(/(?<!\s)\s*(wps|w\/s|words\/s)\s*$/i, ''), '@baseline');
       if (typeof n === 'string') return `${n} (words per second, e.g. "0.8 wps")`;
       o.baseline = n;
       return null;
@@ -171,11 +175,11 @@ export const KEYS: KeySpec[] = [
     summary: 'Weights of the difficulty components: length, complexity, rarity.',
     example: 'length 0.4, complexity 0.4, rarity 0.2',
     apply(value, o) {
-      const named = [...value.matchAll(/(length|complexity|rarity)\s*[=:]?\s*(\d+(?:\.\d+)?)/gi)];
+      const named = [...value.matchAll(WEIGHT)];
       const w = { ...o.weights };
       if (named.length) {
-        for (const m of named) w[m[1].toLowerCase() as keyof typeof w] = Number(m[2]);
-        const rest = value.replace(/(length|complexity|rarity)\s*[=:]?\s*(\d+(?:\.\d+)?)/gi, '').replace(/[,\s]/g, '');
+        for (const m of named) w[m[1].toLowerCase() as keyof typeof w] = Number(m[4]);
+        const rest = value.replace(WEIGHT, '').replace(/[,\s]/g, '');
         if (rest) return `cannot read "${excerpt(rest)}" in @weights: write e.g. "length 0.4, complexity 0.4, rarity 0.2"`;
       } else {
         const nums = value.split(/[,\s]+/).filter(Boolean).map(Number);
@@ -206,7 +210,7 @@ export const KEYS: KeySpec[] = [
     summary: 'Adult reading-aloud rate used to flag fast paces, words per second (default 3.05, Brysbaert 2019).',
     example: '3.05',
     apply(value, o) {
-      const n = positiveNumber(value.replace(/\s*wps\s*$/i, ''), '@reading-norm');
+      const n = positiveNumber(value.replace(/(?<!\s)\s*wps\s*$/i, ''), '@reading-norm');
       if (typeof n === 'string') return n;
       o.readingNormWps = n;
       return null;

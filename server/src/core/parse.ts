@@ -21,10 +21,15 @@ export const NOTE_MARK = '|';
 /** Keys a rung may carry, inline on its header or on `@` lines before its items. */
 export const RUNG_KEYS = new Set(['pace', 'paces', 'set']);
 
-const SETTING_LINE = /^@([A-Za-z][\w-]*)(?:\s*:)?\s*(.*?)\s*$/;
+// Applied to a line with its trailing spaces already cut, so no pattern here ends in `\s*$` (a lazy
+// group before `\s*$` re-scans a run of spaces from every position: quadratic in its length). The
+// `s` flag lets a value hold U+2028 and U+2029, which end no line in the format.
+const SETTING_LINE = /^@([A-Za-z][\w-]*)(?:\s*:)?\s*(.*)$/s;
 const INLINE_ATTR = /(^|\s)@([A-Za-z][\w-]*)/g;
 const ID_TOKEN = /(^|\s)#([\w.:-]+)/g;
-export const SET_ATTR = /(^|\s)@set\s+([^@#]+?)\s*(?=$|\s[@#])/g;
+// `(?=\S)` keeps `\s+` from giving spaces back and `(?<!\s)` starts the closing `\s*` only at the
+// start of a run of spaces, so a long run is scanned a bounded number of times.
+export const SET_ATTR = /(^|\s)@set\s+(?=\S)([^@#]+?)(?<!\s)\s*(?=$|\s[@#])/g;
 
 export function splitLines(text: string): string[] {
   return text.split(/\r\n|\r|\n/);
@@ -57,7 +62,7 @@ export function parseOverride(
   origin: string,
   problems: Problem[],
 ): Override | null {
-  const m = /^(\S+?)\s*(?:=|\s)\s*(.*)$/.exec(body);
+  const m = /^(\S+?)\s*(?:=|\s)\s*(.*)$/s.exec(body);
   if (!m || !m[2].trim()) {
     problems.push(
       problem(
@@ -112,19 +117,33 @@ export function parseLexicon(text: string, origin: string): { overrides: Overrid
   return { overrides, problems };
 }
 
+/** Where a header's closing `==` (with the spaces around it) starts, or the length when there is none. */
+export function closingMarkStart(body: string): number {
+  const space = (i: number) => /\s/.test(body[i]);
+  let end = body.length;
+  while (end > 0 && space(end - 1)) end--;
+  let i = end;
+  while (i > 0 && body[i - 1] === '=') i--;
+  if (i === end) return body.length;
+  while (i > 0 && space(i - 1)) i--;
+  return i;
+}
+
 function parseRungHeader(raw: string, line: number, start: number): RungNode {
   // "== Name @pace 1.5 @set trained ==": the name runs up to the first inline attribute.
   let bodyStart = start + RUNG_MARK.length;
   while (raw[bodyStart] === '=') bodyStart++;
   let body = raw.slice(bodyStart);
-  body = body.replace(/\s*=+\s*$/, (tail) => ' '.repeat(tail.length));
+  const tail = closingMarkStart(body);
+  body = body.slice(0, tail) + ' '.repeat(body.length - tail);
   const settings: Setting[] = [];
   const attrs = [...body.matchAll(INLINE_ATTR)];
   const nameEnd = attrs.length ? attrs[0].index! + attrs[0][1].length : body.length;
   attrs.forEach((a, i) => {
     const keyStart = bodyStart + a.index! + a[1].length;
     const keyEnd = keyStart + 1 + a[2].length;
-    const next = i + 1 < attrs.length ? bodyStart + attrs[i + 1].index! : bodyStart + body.length;
+    // The last value ends before the closing `==`, which is not part of it.
+    const next = i + 1 < attrs.length ? bodyStart + attrs[i + 1].index! : bodyStart + tail;
     const valueRaw = raw.slice(keyEnd, next);
     const lead = valueRaw.length - valueRaw.replace(/^[\s:]+/, '').length;
     const value = valueRaw.trim().replace(/^:\s*/, '');
@@ -217,7 +236,7 @@ export function parseScript(text: string): ParsedScript {
       return;
     }
     if (raw[start] === '@') {
-      const m = SETTING_LINE.exec(raw.slice(start));
+      const m = SETTING_LINE.exec(raw.slice(start).trimEnd());
       if (!m) {
         problems.push(
           problem('bad-value', 'a setting line needs a key after "@", e.g. "@paces 1.5, 2 wps"', line, start, raw.length),

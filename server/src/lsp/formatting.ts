@@ -5,30 +5,38 @@
 // Runs of blank lines shrink to one, a rung header after an item gets a blank line before it,
 // leading blank lines go, and the file ends with exactly one line ending.
 import type { TextEdit } from 'vscode-languageserver/node';
-import { parseScript, splitLines } from '../core/parse';
+import { closingMarkStart, parseScript, splitLines } from '../core/parse';
 import { eolOf } from './sortRung';
 
+// No pattern here scans a run of spaces from each of its positions (`\s*,` or `(.*?)\s*$` do, and cost
+// time quadratic in the run): values are trimmed and split with string methods instead. The `s`
+// flag lets a line hold U+2028 and U+2029, which the format does not treat as line ends.
 function formatSetting(t: string): string {
-  const m = /^(@[A-Za-z][\w-]*)(?:\s*:)?\s*(.*?)\s*$/.exec(t);
+  const m = /^(@[A-Za-z][\w-]*)(?:\s*:)?\s*(.*)$/s.exec(t.trimEnd());
   if (!m) return t;
   let value = m[2];
   const key = m[1].toLowerCase();
-  if (key === '@pace' || key === '@paces') value = value.replace(/\s*,\s*/g, ', ').replace(/\s+/g, ' ');
-  if (key === '@say') value = value.replace(/\s*=\s*/, ' = ').replace(/\s+/g, ' ');
+  if (key === '@pace' || key === '@paces') value = value.split(',').map((p) => p.trim()).join(', ').replace(/\s+/g, ' ');
+  if (key === '@say') {
+    const eq = value.indexOf('=');
+    if (eq >= 0) value = `${value.slice(0, eq).trimEnd()} = ${value.slice(eq + 1).trimStart()}`;
+    value = value.replace(/\s+/g, ' ');
+  }
   return value ? `${m[1]} ${value}` : m[1];
 }
 
 function formatHeader(t: string): string {
-  const m = /^(=+)\s*(.*?)\s*$/.exec(t)!;
+  const m = /^(=+)\s*(.*)$/s.exec(t.trimEnd())!;
   let body = m[2];
   let tail = '';
-  const close = /\s*(=+)$/.exec(body);
-  if (close && close.index > 0) {
-    tail = ` ${close[1]}`;
-    body = body.slice(0, close.index);
+  const close = closingMarkStart(body);
+  if (close < body.length && close > 0) {
+    tail = ` ${body.slice(close).trim()}`;
+    body = body.slice(0, close);
   }
-  // Split before each inline attribute and give every part single spacing.
-  const parts = body.split(/\s+(?=@[A-Za-z])/).map((p, i) => (i === 0 ? p.trim() : formatSetting(p.trim())));
+  // Split before each inline attribute and give every part single spacing. `(?<!\s)` starts a
+  // match only at the start of a run of spaces, so each run is scanned once.
+  const parts = body.split(/(?<!\s)\s+(?=@[A-Za-z])/).map((p, i) => (i === 0 ? p.trim() : formatSetting(p.trim())));
   const joined = parts.filter(Boolean).join(' ');
   return `${m[1]}${joined ? ` ${joined}` : ''}${tail}`;
 }
