@@ -9,6 +9,10 @@ export interface CliFs {
   isFile?(path: string): boolean;
   /** The path with links resolved, so a walk visits each folder and file once (absent: the path). */
   realpath?(path: string): string;
+  /** The file's bytes, so `--fix` can keep every byte it does not fix (absent: readFile's text). */
+  readBytes?(path: string): Uint8Array;
+  /** Replaces the file's content atomically, keeping its mode (absent: writeFile). */
+  writeBytes?(path: string, bytes: Uint8Array): void;
 }
 
 export interface CliIO {

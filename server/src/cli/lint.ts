@@ -9,7 +9,9 @@ import { loadWordTable } from '../data/wordTable';
 import { RULES, compareProblems, lint } from '../rules/index';
 import { applyFixes, batchFixes } from '../rules/fixes';
 import { parseArgs } from './args';
+import { excerpt } from '../core/excerpt';
 import { expandPaths } from './files';
+import { readForFix, writeFixed, type FixSource } from './writeFixes';
 import { unifiedDiff } from './formats/diff';
 import { formatGithub } from './formats/github';
 import { formatLintJson } from './formats/json';
@@ -37,7 +39,7 @@ const USAGE = [
   '  --fix           apply mechanical fixes in place, then report what is left',
   '  --fix-dry-run   print the fixes as a unified diff; change nothing',
   '  --quiet         report errors only, and no progress counter',
-  '  Exit codes: 0 clean, 1 errors (or too many warnings), 2 usage error or unreadable file.',
+  '  Exit codes: 0 clean, 1 errors (or too many warnings), 2 usage error, unreadable or unwritable file.',
 ].join('\n');
 
 interface Checked {
@@ -86,6 +88,8 @@ export const lintCommand: Command = {
     if (!args.positionals.length) throw new UsageError('give at least one script, folder or glob (or "-" for standard input)');
     const format = (args.flags.get('format') as (typeof FORMATS)[number] | undefined) ?? 'text';
     const maxRaw = args.flags.get('max-warnings');
+    // Digits only: Number() reads "" as 0 and takes "1e3", "0x10" and "Infinity".
+    if (maxRaw !== undefined && !/^\d{1,9}$/.test(String(maxRaw))) throw new UsageError(`--max-warnings takes a whole number from 0 to 999999999, not "${excerpt(String(maxRaw))}"`);
     const maxWarnings = maxRaw === undefined ? Infinity : Number(maxRaw);
     if (!Number.isInteger(maxWarnings) && maxWarnings !== Infinity) throw new UsageError(`--max-warnings takes a whole number, not "${String(maxRaw)}"`);
     if (maxWarnings < 0) throw new UsageError('--max-warnings takes a number, 0 or more');
@@ -117,8 +121,10 @@ export const lintCommand: Command = {
       if (progress) io.stderr(`\rrungs lint: ${n + 1}/${files.length} files`);
       const name = shown(io.cwd, file);
       let text: string;
+      let source: FixSource | null = null;
       try {
-        text = file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
+        if (file !== '-' && (fix || dryRun)) source = readForFix(io.fs, file);
+        text = source ? source.text : file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
       } catch (err) {
         io.stderr(`${progress ? '\r\u001b[K' : ''}rungs lint: ${name}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
         code = EXIT_USAGE;
@@ -134,11 +140,19 @@ export const lintCommand: Command = {
       let checked = check(text, data, ctx);
       if (fix || dryRun) {
         const fixed = fixAll(checked, data, ctx);
+        let written = true;
         if (fixed.text !== text) {
-          if (fix) io.fs.writeFile(file, fixed.text);
-          else diffs.push(unifiedDiff(name, text, fixed.text));
+          if (fix && source) {
+            const failed = writeFixed(io.fs, file, source, fixed.text);
+            if (failed) {
+              io.stderr(`${progress ? '\r\u001b[K' : ''}rungs lint: ${name}:1:1: ${failed}\n`);
+              code = EXIT_USAGE;
+              written = false;
+            }
+          } else diffs.push(unifiedDiff(name, text, fixed.text));
         }
-        checked = fixed;
+        // A file left unwritten is reported as it is on disk.
+        if (written) checked = fixed;
       }
       results.push({ file: name, problems: checked.problems });
     });

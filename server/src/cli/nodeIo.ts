@@ -1,6 +1,7 @@
 // The real file system and streams behind CliIO.
 import * as fs from 'node:fs';
-import { isRegularFile, readStdinBounded, readTextBounded, realPath } from '../node/boundedRead';
+import { writeFileAtomic } from '../node/atomicWrite';
+import { isRegularFile, readBytesBounded, readStdinBounded, readTextBounded, realPath } from '../node/boundedRead';
 import type { CliFs, CliIO } from './io';
 
 export const nodeFs: CliFs = {
@@ -17,6 +18,8 @@ export const nodeFs: CliFs = {
   readdir: (p) => fs.readdirSync(p),
   isFile: isRegularFile,
   realpath: realPath,
+  readBytes: (p) => readBytesBounded(p),
+  writeBytes: writeFileAtomic,
 };
 
 /**

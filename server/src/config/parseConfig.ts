@@ -20,6 +20,8 @@ const RESERVED = ['root', 'rules', 'ladder', 'lexicon'];
 /** Settings that only make sense inside one script. */
 const SCRIPT_ONLY = new Set(['title', 'say', 'set']);
 const SEVERITIES = ['error', 'warning', 'info', 'hint', 'off'];
+/** Largest ladder maxStep: in any metric's units (syllables, points), more than any real step. */
+const LADDER_MAX_STEP = 10_000;
 
 export interface ConfigLayer {
   file: string;
@@ -256,8 +258,8 @@ function interpret(entries: Entry[], file: string, baseDir: string, fromFile: bo
       for (const l of e.children ?? []) {
         if (l.key === 'metric' && LADDER_METRICS.includes(l.value as LadderMetric)) layer.ladder.metric = l.value as LadderMetric;
         else if (l.key === 'metric') bad(l.valueRange, `ladder metric is one of ${LADDER_METRICS.join(', ')}, not ${shown(l.value)}`);
-        else if (l.key === 'maxStep' && typeof l.value === 'number' && l.value > 0) layer.ladder.maxStep = l.value;
-        else if (l.key === 'maxStep') bad(l.valueRange, `ladder maxStep is a number above 0, not ${shown(l.value)}`);
+        else if (l.key === 'maxStep' && typeof l.value === 'number' && Number.isFinite(l.value) && l.value > 0 && l.value <= LADDER_MAX_STEP) layer.ladder.maxStep = l.value;
+        else if (l.key === 'maxStep') bad(l.valueRange, `ladder maxStep is a number above 0 and at most ${LADDER_MAX_STEP}, not ${shown(l.value)}`);
         else bad(l.keyRange, `unknown ladder key "${excerpt(l.key)}": use metric or maxStep`);
       }
     } else if (key === 'lexicon') {

@@ -2,7 +2,7 @@
 // by the caller), then the script's own header. One table of keys drives parsing, validation,
 // completion and docs, so they never disagree.
 import { DEFAULT_WEIGHTS } from './difficulty';
-import { makePace, parsePaces, READING_NORM_WPS } from './pace';
+import { makePace, MAX_PACE, parsePaces, READING_NORM_WPS } from './pace';
 import { DEFAULT_SET_OPTIONS, SET_KEYS } from './setOptions';
 import type { AnalysisOptions, Direction, Problem, Setting } from './types';
 import { DEFAULT_WCM_OPTIONS } from './wcm';
@@ -43,6 +43,41 @@ export interface KeySpec {
   apply(value: string, o: AnalysisOptions): string | null;
 }
 
+/**
+ * Plausible bounds of every numeric setting, inclusive (`above`: the minimum itself is excluded).
+ * A value outside is a problem, so no setting can make a score infinite or NaN.
+ */
+export interface NumberRange {
+  min: number;
+  max: number;
+  above?: boolean;
+  unit?: string;
+}
+
+export const NUMBER_RANGES: Record<string, NumberRange> = {
+  // Paces and rates: faster than MAX_PACE per second is no human speech (common practice).
+  paces: { min: 0, max: MAX_PACE, above: true, unit: 'per second' },
+  baseline: { min: 0, max: MAX_PACE, above: true, unit: 'words per second' },
+  'reading-norm': { min: 0, max: MAX_PACE, above: true, unit: 'words per second' },
+  // Points of the 0-100 difficulty scale.
+  'max-step': { min: 0, max: 100, above: true, unit: 'points' },
+  // Counts: far above any real rung or item, low enough to stay exact.
+  'min-items': { min: 0, max: 10_000 },
+  'max-words': { min: 0, max: 10_000 },
+  'max-syllables': { min: 0, max: 10_000 },
+  // Relative weights: only their ratios matter.
+  weights: { min: 0, max: 100 },
+};
+
+/** Null when `n` is inside the key's range; otherwise the problem's message. */
+export function outOfRange(key: string, n: number, what = `@${key}`): string | null {
+  const r = NUMBER_RANGES[key];
+  if (!r) return null;
+  const low = r.above ? n <= r.min : n < r.min;
+  if (Number.isFinite(n) && !low && n <= r.max) return null;
+  return `${what} must be ${r.above ? 'above' : 'at least'} ${r.min} and at most ${r.max}${r.unit ? ` ${r.unit}` : ''}, not ${Number.isFinite(n) ? n : 'a number that large'}`;
+}
+
 function positiveNumber(value: string, what: string, allowZero = false): number | string {
   const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*$/.exec(value);
   const n = m ? Number(m[1]) : NaN;
@@ -74,7 +109,9 @@ function integerSetting(
     apply(value, o) {
       const n = positiveNumber(value, `@${key}`, true);
       if (typeof n === 'string') return n;
-      if (!Number.isInteger(n)) return `@${key} must be a whole number, not ${n}`;
+      if (!Number.isInteger(n) && Number.isFinite(n)) return `@${key} must be a whole number, not ${n}`;
+      const range = outOfRange(key, n);
+      if (range) return range;
       set(o, n);
       return null;
     },
@@ -134,6 +171,8 @@ export const KEYS: KeySpec[] = [
     apply(value, o) {
       const n = positiveNumber(value.replace(/(?<!\s)\s*(wps|w\/s|words\/s)\s*$/i, ''), '@baseline');
       if (typeof n === 'string') return `${n} (words per second, e.g. "0.8 wps")`;
+      const range = outOfRange('baseline', n);
+      if (range) return range;
       o.baseline = n;
       return null;
     },
@@ -161,6 +200,8 @@ export const KEYS: KeySpec[] = [
     apply(value, o) {
       const n = positiveNumber(value, '@max-step');
       if (typeof n === 'string') return n;
+      const range = outOfRange('max-step', n);
+      if (range) return range;
       o.maxStep = n;
       return null;
     },
@@ -182,11 +223,16 @@ export const KEYS: KeySpec[] = [
         const rest = value.replace(WEIGHT, '').replace(/[,\s]/g, '');
         if (rest) return `cannot read "${excerpt(rest)}" in @weights: write e.g. "length 0.4, complexity 0.4, rarity 0.2"`;
       } else {
-        const nums = value.split(/[,\s]+/).filter(Boolean).map(Number);
+        // Plain decimals only: Number() would also take "0x10", "Infinity" and "1e309".
+        const nums = value.split(/[,\s]+/).filter(Boolean).map((x) => (/^(\d+(\.\d+)?|\.\d+)$/.test(x) ? Number(x) : NaN));
         if (nums.length !== 3 || nums.some((n) => Number.isNaN(n) || n < 0)) {
           return '@weights takes three numbers (length, complexity, rarity), e.g. "0.4, 0.4, 0.2"';
         }
         [w.length, w.complexity, w.rarity] = nums;
+      }
+      for (const part of ['length', 'complexity', 'rarity'] as const) {
+        const range = outOfRange('weights', w[part], `the ${part} weight in @weights`);
+        if (range) return range;
       }
       if (w.length + w.complexity + w.rarity <= 0) return '@weights must not all be 0';
       o.weights = w;
@@ -212,6 +258,8 @@ export const KEYS: KeySpec[] = [
     apply(value, o) {
       const n = positiveNumber(value.replace(/(?<!\s)\s*wps\s*$/i, ''), '@reading-norm');
       if (typeof n === 'string') return n;
+      const range = outOfRange('reading-norm', n);
+      if (range) return range;
       o.readingNormWps = n;
       return null;
     },

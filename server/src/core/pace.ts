@@ -8,6 +8,9 @@ import { excerpt } from './excerpt';
 /** Adult reading-aloud rate: 183 words per minute = 3.05 words/s (Brysbaert 2019, JML 109). */
 export const READING_NORM_WPS = 183 / 60;
 
+/** Fastest pace accepted, per second (words or syllables): no speech model runs faster. */
+export const MAX_PACE = 20;
+
 const UNIT_WORDS: Record<string, PaceUnit> = {
   wps: 'wps',
   'w/s': 'wps',
@@ -41,7 +44,7 @@ export function parsePaces(text: string): { paces: Pace[]; error: string | null 
     if (m) {
       const value = Number(m[1]);
       if (!(value > 0)) return { paces: [], error: `pace "${excerpt(part)}" must be above 0` };
-      if (value > 20) return { paces: [], error: `pace ${excerpt(part)} is not a plausible speech rate (above 20 per second)` };
+      if (value > MAX_PACE) return { paces: [], error: `pace ${excerpt(part)} is not a plausible speech rate (above 20 per second)` };
       if (m[2]) {
         const unit = UNIT_WORDS[m[2]];
         if (m[2] === 'wpm' || m[2] === 'spm') {

@@ -35,6 +35,17 @@ export function splitLines(text: string): string[] {
   return text.split(/\r\n|\r|\n/);
 }
 
+/**
+ * The line break after each line ("\r\n", "\r", "\n"; "" after the last), so an edit that moves
+ * lines can keep every break where it was in a file with mixed line endings.
+ */
+export function lineBreaks(text: string): string[] {
+  const out: string[] = [];
+  for (const m of text.matchAll(/\r\n|\r|\n/g)) out.push(m[0]);
+  out.push('');
+  return out;
+}
+
 function problem(
   rule: string,
   message: string,

@@ -2,6 +2,7 @@
 // command. The edit itself is the unsorted-rung rule's (rules/unsortedRung.ts): item lines move
 // byte-identical with the comments directly above them, every other line keeps its place.
 import type { RungAnalysis, TextEdit } from '../core/types';
+import { lineBreaks } from '../core/parse';
 import { sortRungEdit } from '../rules/unsortedRung';
 import type { Snapshot } from './documents';
 
@@ -16,6 +17,7 @@ export function sortRung(s: Snapshot, rung: RungAnalysis): TextEdit | null {
   const dir = s.analysis.options.direction === 'falling' ? -1 : 1;
   const e = sortRungEdit({ analysis: s.analysis, lines: s.lines, text: s.text, settings: { severities: {} } }, rung, dir);
   if (!e) return null;
-  const current = s.lines.slice(e.line, e.endLine + 1).join(eolOf(s.text));
+  const breaks = lineBreaks(s.text);
+  const current = s.lines.slice(e.line, e.endLine + 1).map((l, i, a) => (i < a.length - 1 ? l + breaks[e.line + i] : l)).join('');
   return current === e.newText ? null : e;
 }

@@ -67,8 +67,14 @@ export function applyFixes(text: string, fixes: Fix[]): { text: string; applied:
     }
     applied++;
   }
-  taken.sort((a, b) => b.start - a.start || b.end - a.end);
-  let out = text;
-  for (const s of taken) out = out.slice(0, s.start) + s.newText + out.slice(s.end);
-  return { text: out, applied, skipped };
+  // Built in one pass from the start (splicing from the end copies the whole text per edit).
+  taken.sort((a, b) => a.start - b.start || a.end - b.end);
+  const parts: string[] = [];
+  let at = 0;
+  for (const s of taken) {
+    parts.push(text.slice(at, s.start), s.newText);
+    at = s.end;
+  }
+  parts.push(text.slice(at));
+  return { text: parts.join(''), applied, skipped };
 }

@@ -1,4 +1,5 @@
 // unsorted-rung: items inside a rung that do not run from easiest to hardest.
+import { lineBreaks } from '../core/parse';
 import type { RungAnalysis, TextEdit } from '../core/types';
 import type { Rule, RuleContext } from './types';
 import { fmt, rungLabel, rungRange, sign } from './shared';
@@ -30,8 +31,10 @@ export function sortRungEdit(ctx: RuleContext, r: RungAnalysis, dir: 1 | -1): Te
       line = b.end;
     } else out.push(lines[line]);
   }
-  const eol = /\r\n/.test(ctx.text) ? '\r\n' : '\n';
-  return { line: first, character: 0, endLine: last, endCharacter: lines[last].length, newText: out.join(eol) };
+  // Lines move; their breaks stay in place, so a file with CR, LF and CRLF breaks keeps each one.
+  const breaks = lineBreaks(ctx.text);
+  const newText = out.map((l, i) => (i < out.length - 1 ? l + breaks[first + i] : l)).join('');
+  return { line: first, character: 0, endLine: last, endCharacter: lines[last].length, newText };
 }
 
 export const unsortedRung: Rule = {
