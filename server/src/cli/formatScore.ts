@@ -4,6 +4,7 @@ import { formatNumber } from '../core/pace';
 import { CAUTION } from '../core/caution';
 import { describeLengths, sessionLengths } from '../core/timing';
 import { jsonPieces } from './jsonStream';
+import { terminalSafe } from '../core/excerpt';
 
 export interface ScoredFile {
   file: string;
@@ -115,8 +116,13 @@ export function* formatJsonPieces(files: ScoredFile[]): Generator<string> {
   yield '\n';
 }
 
+/**
+ * A cell a spreadsheet will not run: text starting with =, +, -, @, a tab or a CR is a formula to
+ * Excel, LibreOffice and Google Sheets, so it gets a leading apostrophe (OWASP, "CSV Injection").
+ * Numbers are written as they are.
+ */
 function csvCell(v: string | number | null): string {
-  const s = v === null ? '' : String(v);
+  const s = v === null ? '' : typeof v === 'string' && /^[=+\-@\t\r]/.test(v) ? `'${v}` : String(v);
   return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 
@@ -154,7 +160,7 @@ export function formatTable(files: ScoredFile[], caution: string): string {
     const a = f.analysis;
     const title = a.script.header.find((h) => h.key === 'title')?.value;
     const base = a.options.baseline ? `; baseline ${formatNumber(a.options.baseline)} wps` : '';
-    out.push(`${f.file}${title ? ` — ${title}` : ''}  (paces ${a.options.paces.map((p) => p.label).join(', ')}${base})`);
+    out.push(`${terminalSafe(f.file)}${title ? ` — ${terminalSafe(title)}` : ''}  (paces ${a.options.paces.map((p) => p.label).join(', ')}${base})`);
     const session = sessionLengths(a);
     for (const r of a.rungs) {
       const cols = ['line', 'words', 'syl', 'phon', 'WCM', 'Zipf mean', 'Zipf min', 'diff', 'rank', ...r.paces.map((p) => `s@${p.label}`)];
@@ -175,13 +181,13 @@ export function formatTable(files: ScoredFile[], caution: string): string {
         .map((p, i) => `${formatNumber(r.totalSeconds[i], 1)} s at ${p.label}${paceNote(a, p)}`)
         .join(', ');
       out.push('');
-      out.push(`  == ${r.node.name} (line ${r.node.line + 1}): ${r.items.length} item${r.items.length === 1 ? '' : 's'}, median ${r.median.toFixed(1)}, range ${r.min.toFixed(1)}-${r.max.toFixed(1)}; total ${paceNotes || '—'}`);
+      out.push(`  == ${terminalSafe(r.node.name)} (line ${r.node.line + 1}): ${r.items.length} item${r.items.length === 1 ? '' : 's'}, median ${r.median.toFixed(1)}, range ${r.min.toFixed(1)}-${r.max.toFixed(1)}; total ${paceNotes || '—'}`);
       if (r.items.length) out.push(`     session with ${a.options.timing.gap} s gaps: ${describeLengths(session.rungs[r.index].paces)}`);
       out.push(`    ${cols.map((c, i) => pad(c, widths[i], true)).join('  ')}  text`);
       r.items.forEach((it, k) => {
         const est = it.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => w.spoken);
-        const mark = est.length ? `   [estimated: ${[...new Set(est)].join(', ')}]` : '';
-        out.push(`    ${rows[k].map((c, i) => pad(c, widths[i], true)).join('  ')}  ${it.node.text}${mark}`);
+        const mark = est.length ? `   [estimated: ${terminalSafe([...new Set(est)].join(', '))}]` : '';
+        out.push(`    ${rows[k].map((c, i) => pad(c, widths[i], true)).join('  ')}  ${terminalSafe(it.node.text)}${mark}`);
       });
     }
     if (a.items.length) out.push('', `  whole script with ${a.options.timing.gap} s gaps: ${describeLengths(session.script)}`);
@@ -189,7 +195,7 @@ export function formatTable(files: ScoredFile[], caution: string): string {
     if (fast.length) out.push('', `  note: ${fast.map((p) => p.label).join(', ')} is faster than adult reading aloud (${formatNumber(a.options.readingNormWps)} wps, Brysbaert 2019)`);
     if (f.problems.length) {
       out.push('', `  ${f.problems.length} problem${f.problems.length === 1 ? '' : 's'}:`);
-      for (const p of f.problems) out.push(`    ${p.line + 1}:${p.character + 1}  ${p.severity}  ${p.rule}  ${p.message}`);
+      for (const p of f.problems) out.push(`    ${p.line + 1}:${p.character + 1}  ${p.severity}  ${p.rule}  ${terminalSafe(p.message)}`);
     }
     out.push('');
   }

@@ -26,3 +26,13 @@ export function excerpt(text: string, max = EXCERPT_MAX): string {
   const cut = chars.length > max ? `${chars.slice(0, max - 1).join('')}…` : text;
   return escapeControls(cut);
 }
+
+// What a terminal would act on rather than show: C0 controls but tab, DEL, C1 controls (ESC and
+// CSI start colour, cursor and title sequences), and the bidirectional overrides and isolates,
+// which reorder what is shown.
+const TERMINAL = /[\u0000-\u0008\u000a-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g;
+
+/** User text for a terminal: controls escaped (`\x1b`), tabs and everything else kept. */
+export function terminalSafe(text: string): string {
+  return text.replace(TERMINAL, (c) => escapeControls(c) === c ? `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}` : escapeControls(c));
+}

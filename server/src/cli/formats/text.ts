@@ -1,5 +1,6 @@
 // The compact human format: one line per problem, `file:line:col severity rule message`, then a
 // summary line. Colour (ANSI) only when asked, i.e. on a terminal.
+import { terminalSafe } from '../../core/excerpt';
 import type { Severity } from '../../core/types';
 import { isBatchFix } from '../../rules/fixes';
 import { counts, type LintRun } from './types';
@@ -12,7 +13,7 @@ export function formatText(run: LintRun, colour = false): string {
   const all = run.results.flatMap((r) => r.problems);
   for (const r of run.results) {
     for (const p of r.problems) {
-      lines.push(`${paint('1', `${r.file}:${p.line + 1}:${p.character + 1}`)} ${paint(COLOURS[p.severity], p.severity)} ${paint('2', p.rule)} ${p.message}`);
+      lines.push(`${paint('1', `${terminalSafe(r.file)}:${p.line + 1}:${p.character + 1}`)} ${paint(COLOURS[p.severity], p.severity)} ${paint('2', p.rule)} ${terminalSafe(p.message)}`);
     }
   }
   const c = counts(all);
