@@ -206,7 +206,9 @@ export class AnalysisStore {
       this.states.set(doc.uri, state);
     }
     const s = state.snapshot;
-    if (s && s.version === doc.version && state.settingsGeneration === this.generation) return s;
+    // Keyed on the text as well as the version: a client that reuses an older version number
+    // must not be answered from the snapshot of another text.
+    if (s && s.version === doc.version && s.text === doc.getText() && state.settingsGeneration === this.generation) return s;
     const fresh = this.analyse(doc, state);
     state.snapshot = fresh;
     state.settingsGeneration = this.generation;

@@ -22,7 +22,8 @@ function formatSetting(t: string): string {
     if (eq >= 0) value = `${value.slice(0, eq).trimEnd()} = ${value.slice(eq + 1).trimStart()}`;
     value = value.replace(/\s+/g, ' ');
   }
-  return value ? `${m[1]} ${value}` : m[1];
+  // A value that itself starts with ":" keeps the key's colon, or the next reading would take it.
+  return value ? `${m[1]}${value.startsWith(':') ? ':' : ''} ${value}` : m[1];
 }
 
 function formatHeader(t: string): string {

@@ -22,7 +22,7 @@ import {
 } from 'vscode-languageserver/node';
 import { dirname } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { TextDocument } from 'vscode-languageserver-textdocument';
+import { SafeTextDocument } from './safeTextDocument';
 import type { WordData } from '../core/types';
 import { loadWordTable } from '../data/wordTable';
 import { codeActions, FIX_ALL_KIND } from './codeActions';
@@ -78,7 +78,8 @@ export function startServer(): Connection {
     );
   }
 
-  const documents = new TextDocuments(TextDocument);
+  // Changes are clamped to the document before they are applied (lsp/safeTextDocument.ts).
+  const documents = new TextDocuments(SafeTextDocument);
   const store = new AnalysisStore(data, {
     log: (m) => connection.console.log(m),
     error: (m) => connection.console.error(m),
