@@ -77,3 +77,16 @@ describe('--max-warnings', () => {
     expect((await run(['lint', 'a.rungs', '--max-warnings', '0'])).code).toBe(0);
   });
 });
+
+describe('the settings table states every range', () => {
+  it('grammar/README.md gives each numeric setting its range', async () => {
+    const { readFileSync } = await import('node:fs');
+    const { join } = await import('node:path');
+    const table = readFileSync(join(__dirname, '..', '..', 'grammar', 'README.md'), 'utf8').split('\n');
+    for (const [key, r] of Object.entries(NUMBER_RANGES)) {
+      const row = table.find((l) => l.startsWith('|') && (l.includes(`\`@${key}\``) || (key === 'paces' && l.includes('`@paces`'))));
+      expect(row, key).toBeDefined();
+      expect(row, key).toContain(`range: ${r.above ? 'above ' : ''}${r.min} to ${r.max}`);
+    }
+  });
+});
