@@ -74,3 +74,13 @@ describe('diff of a large file', () => {
     expect(d).toBe('--- a/a\n+++ b/a\n@@ -24998,7 +24998,7 @@\n line 24997\n line 24998\n line 24999\n-line 25000\n+changed\n line 25001\n line 25002\n line 25003\n');
   });
 });
+
+describe('messages quote short excerpts', () => {
+  it('a long repeated item and a long rung name are cut to 40 characters', () => {
+    const long = `${'Word '.repeat(60)}end.`;
+    const text = `== ${'N'.repeat(300)}\n${long}\n${long}\nHi.\n`;
+    const ps = lint(analyzeText(text), text, { severities: {} });
+    const dup = ps.find((p) => p.rule === 'duplicate-item')!;
+    expect(dup.message).toBe(`"${long.slice(0, 39)}…" repeats line 2 in rung 1 "${'N'.repeat(39)}…"`);
+  });
+});

@@ -4,6 +4,7 @@
 // Unknown ids and verbs are problems of their own (bad-directive), never silently ignored.
 import { editDistance } from '../core/options';
 import type { CommentLine, Problem } from '../core/types';
+import { excerpt } from '../core/excerpt';
 
 export const DIRECTIVE_PREFIX = 'rungs:';
 export const DIRECTIVE_VERBS = ['allow', 'allow-file'] as const;
@@ -40,7 +41,7 @@ export function readDirectives(comments: CommentLine[], lines: string[], knownId
       out.problems.push({ rule: 'bad-directive', severity: 'warning', message, line: c.line, character: from, endLine: c.line, endCharacter: to, fix });
     const verb = m[2].toLowerCase();
     if (!(DIRECTIVE_VERBS as readonly string[]).includes(verb)) {
-      bad(`unknown directive "${m[2]}": write "// rungs: allow RULE" (next line) or "// rungs: allow-file RULE"`, verbStart, verbStart + Math.max(1, m[2].length));
+      bad(`unknown directive "${excerpt(m[2])}": write "// rungs: allow RULE" (next line) or "// rungs: allow-file RULE"`, verbStart, verbStart + Math.max(1, m[2].length));
       continue;
     }
     const ids: string[] = [];
@@ -56,10 +57,10 @@ export function readDirectives(comments: CommentLine[], lines: string[], knownId
       }
       const near = nearest(id, knownIds);
       bad(
-        `unknown rule "${id}" in a directive${near ? `; did you mean "${near}"?` : ''}`,
+        `unknown rule "${excerpt(id)}" in a directive${near ? `; did you mean "${near}"?` : ''}`,
         from,
         from + id.length,
-        near ? { title: `Change "${id}" to "${near}"`, edits: [{ line: c.line, character: from, endLine: c.line, endCharacter: from + id.length, newText: near }] } : undefined,
+        near ? { title: `Change "${excerpt(id)}" to "${near}"`, edits: [{ line: c.line, character: from, endLine: c.line, endCharacter: from + id.length, newText: near }] } : undefined,
       );
     }
     if (!/[^\s,]/.test(m[3])) {

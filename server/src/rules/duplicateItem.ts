@@ -2,6 +2,7 @@
 import type { ItemAnalysis } from '../core/types';
 import type { Rule } from './types';
 import { itemRange, rungLabel } from './shared';
+import { excerpt } from '../core/excerpt';
 
 /** Two items are the same when their spoken words match, ignoring case, punctuation and spacing. */
 export function itemKey(text: string): string {
@@ -41,11 +42,11 @@ export const duplicateItem: Rule = {
       const last = line + 1 >= ctx.lines.length;
       report({
         ...itemRange(it),
-        message: `"${it.node.text}" repeats line ${first.node.line + 1} in ${rungLabel(firstRung)}`,
+        message: `"${excerpt(it.node.text)}" repeats line ${first.node.line + 1} in ${rungLabel(firstRung)}`,
         related: [{ ...itemRange(first), message: `first written here, in ${rungLabel(firstRung)}` }],
         unnecessary: true,
         fix: {
-          title: `Remove the repeated "${it.node.text}"`,
+          title: `Remove the repeated "${excerpt(it.node.text)}"`,
           // Removing an item (with its note, id and sets) is a person's choice, one repeat at a time.
           batch: false,
           edits: [

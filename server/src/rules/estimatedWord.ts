@@ -1,6 +1,7 @@
 // estimated-word: a word with no dictionary entry and no override, pronounced by estimate.
 import type { TextEdit } from '../core/types';
 import type { Rule, RuleContext } from './types';
+import { excerpt } from '../core/excerpt';
 
 /** Where a new `@say` line goes: after the last header line above the first rung or item. */
 export function headerInsertEdit(ctx: RuleContext, line: string): TextEdit {
@@ -40,16 +41,16 @@ export const estimatedWord: Rule = {
         const word = w.surface.toLowerCase() === w.spoken ? w.surface : w.spoken;
         const at = { line: it.node.line, character: w.start, endLine: it.node.line, endCharacter: w.end };
         if (!phones) {
-          report({ ...at, message: `no English letter-to-sound rule applies to "${word}"; add a pronunciation with @say ${word} = PHONES` });
+          report({ ...at, message: `no English letter-to-sound rule applies to "${excerpt(word)}"; add a pronunciation with @say ${excerpt(word)} = PHONES` });
           continue;
         }
         const how = w.source === 'morphology' ? 'built from a dictionary stem' : 'estimated by letter-to-sound rules';
         const say = `@say ${word} = ${phones}`;
         report({
           ...at,
-          message: `"${word}" is not in the dictionary; ${how} as ${phones} (${w.syllables} syllable${w.syllables === 1 ? '' : 's'}): check it and add "${say}"`,
+          message: `"${excerpt(word)}" is not in the dictionary; ${how} as ${excerpt(phones, 80)} (${w.syllables} syllable${w.syllables === 1 ? '' : 's'}): check it and add "${excerpt(say, 120)}"`,
           // Writing a guess as an override hides that it is a guess: a person confirms each one.
-          fix: { title: `Add "${say}" to the header`, edits: [headerInsertEdit(ctx, say)], batch: false },
+          fix: { title: `Add "${excerpt(say, 120)}" to the header`, edits: [headerInsertEdit(ctx, say)], batch: false },
         });
       }
     }

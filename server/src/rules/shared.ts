@@ -5,6 +5,7 @@ import { formatNumber } from '../core/pace';
 import type { ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
 import type { LadderMetric, RuleContext } from './types';
 import { maxOf, minOf } from '../core/arrays';
+import { excerpt } from '../core/excerpt';
 
 /** One decimal, as the score table shows difficulty: 21.7, 24.0. */
 export const fmt = (n: number): string => (Math.abs(n) < 0.05 ? 0 : n).toFixed(1);
@@ -68,7 +69,7 @@ export function rungStats(ctx: RuleContext): RungStat[] {
 
 /** `rung 3 "Back to short"`: 1-based, with the name, as every message writes it. */
 export function rungLabel(r: RungAnalysis): string {
-  return `rung ${r.index + 1} "${r.node.name}"`;
+  return `rung ${r.index + 1} "${excerpt(r.node.name)}"`;
 }
 
 /** The rung header line (or the first item of an implicit rung), for reports and related info. */

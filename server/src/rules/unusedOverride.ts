@@ -1,5 +1,6 @@
 // unused-override: a script `@say` line whose word no item ever speaks.
 import type { Rule } from './types';
+import { excerpt } from '../core/excerpt';
 
 /** Why a written word can never be looked up as one spoken word, when its spelling says so. */
 function whyNever(word: string): string {
@@ -36,7 +37,7 @@ export const unusedOverride: Rule = {
         character: o.character,
         endLine: o.line,
         endCharacter: o.character + o.word.length,
-        message: `"${written}" is never spoken as a word in any item, so this @say line is not used${whyNever(o.word)}`,
+        message: `"${excerpt(written)}" is never spoken as a word in any item, so this @say line is not used${whyNever(o.word)}`,
         unnecessary: true,
       });
     }
