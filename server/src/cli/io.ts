@@ -11,6 +11,8 @@ export interface CliFs {
   realpath?(path: string): string;
   /** The file's bytes, so `--fix` can keep every byte it does not fix (absent: readFile's text). */
   readBytes?(path: string): Uint8Array;
+  /** Whole lines from the start of a file over the size bound, up to the bound (absent: refused). */
+  readPrefix?(path: string): string;
   /** Replaces the file's content atomically, keeping its mode (absent: writeFile). */
   writeBytes?(path: string, bytes: Uint8Array): void;
 }

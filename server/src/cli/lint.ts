@@ -11,6 +11,7 @@ import { applyFixes, batchFixes } from '../rules/fixes';
 import { parseArgs } from './args';
 import { excerpt } from '../core/excerpt';
 import { expandPaths } from './files';
+import { readScript } from './readScript';
 import { readForFix, writeFixed, type FixSource } from './writeFixes';
 import { unifiedDiff } from './formats/diff';
 import { formatGithub } from './formats/github';
@@ -124,7 +125,12 @@ export const lintCommand: Command = {
       let source: FixSource | null = null;
       try {
         if (file !== '-' && (fix || dryRun)) source = readForFix(io.fs, file);
-        text = source ? source.text : file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
+        const read = source ?? readScript(io, file);
+        text = read.text;
+        if ('cut' in read && read.cut) {
+          io.stderr(`${progress ? '\r\u001b[K' : ''}rungs lint: ${name}:1:1: ${read.cut}\n`);
+          code = EXIT_USAGE;
+        }
       } catch (err) {
         io.stderr(`${progress ? '\r\u001b[K' : ''}rungs lint: ${name}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
         code = EXIT_USAGE;

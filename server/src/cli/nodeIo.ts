@@ -1,7 +1,7 @@
 // The real file system and streams behind CliIO.
 import * as fs from 'node:fs';
 import { writeFileAtomic } from '../node/atomicWrite';
-import { isRegularFile, readBytesBounded, readStdinBounded, readTextBounded, realPath } from '../node/boundedRead';
+import { isRegularFile, readBytesBounded, readStdinBounded, readTextBounded, readTextPrefix, realPath } from '../node/boundedRead';
 import type { CliFs, CliIO } from './io';
 
 export const nodeFs: CliFs = {
@@ -19,6 +19,7 @@ export const nodeFs: CliFs = {
   isFile: isRegularFile,
   realpath: realPath,
   readBytes: (p) => readBytesBounded(p),
+  readPrefix: (p) => readTextPrefix(p),
   writeBytes: writeFileAtomic,
 };
 

@@ -8,6 +8,7 @@ import { loadWordTable } from '../data/wordTable';
 import { lint } from '../rules/index';
 import { expandPaths } from './files';
 import { EXIT_OK, EXIT_USAGE, type CliIO } from './io';
+import { readScript } from './readScript';
 
 export interface LoadedScript {
   file: string;
@@ -40,7 +41,12 @@ export function loadScripts(
     const shown = file === '-' ? '<stdin>' : relative(io.cwd, file) || basename(file);
     let text: string;
     try {
-      text = file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
+      const read = readScript(io, file);
+      text = read.text;
+      if (read.cut) {
+        io.stderr(`rungs ${command}: ${shown}:1:1: ${read.cut}\n`);
+        code = EXIT_USAGE;
+      }
     } catch (err) {
       io.stderr(`rungs ${command}: ${shown}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
       code = EXIT_USAGE;

@@ -12,7 +12,11 @@ export const MAX_FILE_BYTES = 32 * 1024 * 1024;
  */
 export class ReadRefused extends Error {
   readonly code: string;
-  constructor(reason: string) {
+  constructor(
+    reason: string,
+    /** True when the file was refused for its size only (its first bytes can still be read). */
+    readonly tooLarge = false,
+  ) {
     super(reason);
     this.code = reason;
   }
@@ -34,7 +38,7 @@ export function readBytesBounded(path: string, limit = MAX_FILE_BYTES): Buffer {
       if (n === 0) break;
       chunks.push(buf.subarray(0, n));
       total += n;
-      if (total > limit) throw new ReadRefused(`larger than ${formatBytes(limit)}`);
+      if (total > limit) throw new ReadRefused(`larger than ${formatBytes(limit)}`, true);
     }
     return Buffer.concat(chunks, total);
   } finally {
@@ -90,4 +94,26 @@ export function readStdinBounded(limit = MAX_FILE_BYTES): string {
     if (total > limit) throw new ReadRefused(`larger than ${formatBytes(limit)}`);
   }
   return Buffer.concat(chunks, total).toString('utf8');
+}
+
+/**
+ * The first `limit` bytes of a regular file as text, cut after the last whole line, so a script
+ * over the bound can still be checked up to it.
+ */
+export function readTextPrefix(path: string, limit = MAX_FILE_BYTES): string {
+  const fd = openSync(path, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
+  try {
+    if (!fstatSync(fd).isFile()) throw new ReadRefused('not a regular file');
+    const buf = Buffer.alloc(limit);
+    let n = 0;
+    while (n < limit) {
+      const got = readSync(fd, buf, n, limit - n, null);
+      if (got === 0) break;
+      n += got;
+    }
+    const lastBreak = Math.max(buf.lastIndexOf(0x0a, n - 1), buf.lastIndexOf(0x0d, n - 1));
+    return buf.subarray(0, lastBreak + 1).toString('utf8');
+  } finally {
+    closeSync(fd);
+  }
 }
