@@ -21,19 +21,20 @@ export function sortRungEdit(ctx: RuleContext, r: RungAnalysis, dir: 1 | -1): Te
   const sorted = [...blocks].sort((a, b) => (a.difficulty - b.difficulty) * dir || a.start - b.start);
   const first = blocks[0].start;
   const last = blocks[blocks.length - 1].end;
-  const out: string[] = [];
-  let k = 0;
-  for (let line = first; line <= last; line++) {
-    const b = blocks[k];
-    if (b && line === b.start) {
-      const s = sorted[k++];
-      for (let l = s.start; l <= s.end; l++) out.push(lines[l]);
-      line = b.end;
-    } else out.push(lines[line]);
-  }
-  // Lines move; their breaks stay in place, so a file with CR, LF and CRLF breaks keeps each one.
+  // Each block moves with the line breaks inside it; what lies between blocks (the break after a
+  // block, blank and setting lines) stays where it is, byte for byte. So no line is lost or merged
+  // in a file with CR, LF and CRLF breaks mixed (a CR moved before an empty LF line would merge).
   const breaks = lineBreaks(ctx.text);
-  const newText = out.map((l, i) => (i < out.length - 1 ? l + breaks[first + i] : l)).join('');
+  const starts: number[] = [0];
+  for (let l = 0; l + 1 < lines.length; l++) starts.push(starts[l] + lines[l].length + breaks[l].length);
+  const endOf = (l: number) => starts[l] + lines[l].length;
+  const text = ctx.text;
+  const parts: string[] = [];
+  sorted.forEach((s, k) => {
+    parts.push(text.slice(starts[s.start], endOf(s.end)));
+    if (k + 1 < blocks.length) parts.push(text.slice(endOf(blocks[k].end), starts[blocks[k + 1].start]));
+  });
+  const newText = parts.join('');
   return { line: first, character: 0, endLine: last, endCharacter: lines[last].length, newText };
 }
 
