@@ -20,6 +20,7 @@ const LINES = [
   `@reading-norm 3${S}x`,
   `@weights length${S}x`,
   `@title a${S}b`,
+  `@set-bound 1${S}x`,
   `@paces 1${S},${S}2 wps`,
   `@say word${S}=${S}W ER1 D`,
   `== A${S}b${S}@pace 1${S}x`,

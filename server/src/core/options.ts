@@ -2,7 +2,8 @@
 // by the caller), then the script's own header. One table of keys drives parsing, validation,
 // completion and docs, so they never disagree.
 import { DEFAULT_WEIGHTS } from './difficulty';
-import { makePace, MAX_PACE, parsePaces, READING_NORM_WPS } from './pace';
+import { makePace, parsePaces, READING_NORM_WPS } from './pace';
+import { outOfRange } from './ranges';
 import { DEFAULT_SET_OPTIONS, SET_KEYS } from './setOptions';
 import type { AnalysisOptions, Direction, Problem, Setting } from './types';
 import { DEFAULT_WCM_OPTIONS } from './wcm';
@@ -43,40 +44,7 @@ export interface KeySpec {
   apply(value: string, o: AnalysisOptions): string | null;
 }
 
-/**
- * Plausible bounds of every numeric setting, inclusive (`above`: the minimum itself is excluded).
- * A value outside is a problem, so no setting can make a score infinite or NaN.
- */
-export interface NumberRange {
-  min: number;
-  max: number;
-  above?: boolean;
-  unit?: string;
-}
-
-export const NUMBER_RANGES: Record<string, NumberRange> = {
-  // Paces and rates: faster than MAX_PACE per second is no human speech (common practice).
-  paces: { min: 0, max: MAX_PACE, above: true, unit: 'per second' },
-  baseline: { min: 0, max: MAX_PACE, above: true, unit: 'words per second' },
-  'reading-norm': { min: 0, max: MAX_PACE, above: true, unit: 'words per second' },
-  // Points of the 0-100 difficulty scale.
-  'max-step': { min: 0, max: 100, above: true, unit: 'points' },
-  // Counts: far above any real rung or item, low enough to stay exact.
-  'min-items': { min: 0, max: 10_000 },
-  'max-words': { min: 0, max: 10_000 },
-  'max-syllables': { min: 0, max: 10_000 },
-  // Relative weights: only their ratios matter.
-  weights: { min: 0, max: 100 },
-};
-
-/** Null when `n` is inside the key's range; otherwise the problem's message. */
-export function outOfRange(key: string, n: number, what = `@${key}`): string | null {
-  const r = NUMBER_RANGES[key];
-  if (!r) return null;
-  const low = r.above ? n <= r.min : n < r.min;
-  if (Number.isFinite(n) && !low && n <= r.max) return null;
-  return `${what} must be ${r.above ? 'above' : 'at least'} ${r.min} and at most ${r.max}${r.unit ? ` ${r.unit}` : ''}, not ${Number.isFinite(n) ? n : 'a number that large'}`;
-}
+export { NUMBER_RANGES, outOfRange, type NumberRange } from './ranges';
 
 function positiveNumber(value: string, what: string, allowZero = false): number | string {
   const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*$/.exec(value);

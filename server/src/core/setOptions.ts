@@ -2,6 +2,8 @@
 // `@set-bound` (equivalence bound in SD units), `@set-min-items` (fewest items a set needs to be
 // tested) and `@set-scope` (compare sets over the whole script or rung by rung).
 import type { AnalysisOptions, SetScope } from './types';
+import { excerpt } from './excerpt';
+import { outOfRange } from './ranges';
 
 export interface SetOptions {
   setBound: number;
@@ -35,9 +37,13 @@ export const SET_KEYS: SetKeySpec[] = [
     summary: 'Equivalence bound for matched sets, in standard deviations (default 0.5; a project convention).',
     example: '0.5',
     apply(value, o) {
-      const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*(?:sd)?\s*$/i.exec(value);
+      // `(?:sd\s*)?$` rather than `(?:sd)?\s*$` after `\s*`: two runs of spaces side by side would
+      // split a long run every possible way (quadratic).
+      const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*(?:sd\s*)?$/i.exec(value);
       const n = m ? Number(m[1]) : NaN;
-      if (!(n > 0)) return `@set-bound must be a number of standard deviations above 0, e.g. "0.5", not "${value.trim()}"`;
+      if (!(n > 0)) return `@set-bound must be a number of standard deviations above 0, e.g. "0.5", not "${excerpt(value.trim())}"`;
+      const range = outOfRange('set-bound', n);
+      if (range) return range;
       o.setBound = n;
       return null;
     },
@@ -50,7 +56,9 @@ export const SET_KEYS: SetKeySpec[] = [
     example: '5',
     apply(value, o) {
       const v = value.trim();
-      if (!/^\d+$/.test(v) || Number(v) < 2) return `@set-min-items must be a whole number, 2 or more, not "${v}"`;
+      if (!/^\d+$/.test(v) || Number(v) < 2) return `@set-min-items must be a whole number, 2 or more, not "${excerpt(v)}"`;
+      const range = outOfRange('set-min-items', Number(v));
+      if (range) return range;
       o.setMinItems = Number(v);
       return null;
     },

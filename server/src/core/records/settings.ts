@@ -2,6 +2,8 @@
 // live in AnalysisOptions (`options.records`) and are read by the same key table as every other
 // setting (config files, editor settings), in a block of their own.
 import type { KeySpec } from '../options';
+import { excerpt } from '../excerpt';
+import { outOfRange } from '../ranges';
 
 export interface RecordsOptions {
   /** Paced/unassisted ratio that counts as a meaningful benefit (common practice: 1.2). */
@@ -32,7 +34,9 @@ export const RECORDS_KEYS: KeySpec[] = [
     example: '1.2',
     apply(value, o) {
       const m = NUMBER.exec(value);
-      if (!m || !(Number(m[1]) > 0)) return `@benefit-mark must be a number above 0, e.g. 1.2, not "${value.trim()}"`;
+      if (!m || !(Number(m[1]) > 0)) return `@benefit-mark must be a number above 0, e.g. 1.2, not "${excerpt(value.trim())}"`;
+      const range = outOfRange('benefit-mark', Number(m[1]));
+      if (range) return range;
       o.records = { ...o.records, benefitMark: Number(m[1]) };
       return null;
     },
@@ -57,7 +61,9 @@ export const RECORDS_KEYS: KeySpec[] = [
     example: '2',
     apply(value, o) {
       const m = /^\s*(\d+)\s*$/.exec(value);
-      if (!m || Number(m[1]) < 1) return `@ready-sessions must be a whole number, 1 or more, not "${value.trim()}"`;
+      if (!m || Number(m[1]) < 1) return `@ready-sessions must be a whole number, 1 or more, not "${excerpt(value.trim())}"`;
+      const range = outOfRange('ready-sessions', Number(m[1]));
+      if (range) return range;
       o.records = { ...o.records, readySessions: Number(m[1]) };
       return null;
     },
@@ -76,7 +82,7 @@ export const RECORDS_KEYS: KeySpec[] = [
       }
       const m = /^(\d+(?:\.\d+)?|\.\d+)\s*(%?)$/.exec(v);
       const n = m ? Number(m[1]) / (m[2] ? 100 : 1) : NaN;
-      if (!m || !(n >= 0 && n <= 1)) return `@accuracy-floor is a fraction 0-1 or a percentage, e.g. 0.8 or 80%, not "${v}"`;
+      if (!m || !(n >= 0 && n <= 1)) return `@accuracy-floor is a fraction 0-1 or a percentage, e.g. 0.8 or 80%, not "${excerpt(v)}"`;
       o.records = { ...o.records, accuracyFloor: n };
       return null;
     },
