@@ -1,0 +1,138 @@
+// The language-server half of `npm run bench`: spawns `rungs lsp --stdio`, speaks JSON-RPC to it
+// as an editor would, and times what a person waits for: opening a script until its diagnostics
+// arrive, a random one-line edit until diagnostics for exactly that version arrive, and the read
+// requests (hover, inlay hints, code lens, completion). Also the server's resident memory.
+import { spawn } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { createProtocolConnection, StreamMessageReader, StreamMessageWriter } from 'vscode-languageserver-protocol/node';
+import { mulberry32 } from './generate.mjs';
+
+/** p-th percentile (0-100) by the nearest-rank method. */
+export function percentile(xs, p) {
+  if (!xs.length) return NaN;
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.max(0, Math.ceil((p / 100) * s.length) - 1))];
+}
+
+/** Resident set size of a process in MB (Linux /proc), or NaN elsewhere. */
+export function rssMb(pid) {
+  try {
+    const m = /VmRSS:\s+(\d+) kB/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'));
+    return m ? Number(m[1]) / 1024 : NaN;
+  } catch {
+    return NaN;
+  }
+}
+
+class Client {
+  constructor(root) {
+    this.proc = spawn(process.execPath, [join(root, 'server/bin/rungs.js'), 'lsp', '--stdio'], { stdio: ['pipe', 'pipe', 'inherit'] });
+    this.conn = createProtocolConnection(new StreamMessageReader(this.proc.stdout), new StreamMessageWriter(this.proc.stdin));
+    this.versions = new Map();
+    this.waiters = [];
+    this.conn.onNotification('textDocument/publishDiagnostics', (p) => {
+      if (p.version !== undefined) this.versions.set(p.uri, p.version);
+      this.waiters = this.waiters.filter((w) => !(w.uri === p.uri && p.version === w.version && (w.resolve(), true)));
+    });
+    this.conn.onNotification('window/logMessage', () => undefined);
+    this.conn.onNotification('rungs/didAnalyze', () => undefined);
+    this.conn.onRequest('workspace/configuration', (p) => p.items.map(() => null));
+    this.conn.onRequest('client/registerCapability', () => null);
+    this.conn.listen();
+  }
+  diagnostics(uri, version) {
+    if (this.versions.get(uri) === version) return Promise.resolve();
+    return new Promise((resolve) => this.waiters.push({ uri, version, resolve }));
+  }
+  async initialize(root) {
+    await this.conn.sendRequest('initialize', {
+      processId: process.pid,
+      rootUri: pathToFileURL(root).href,
+      capabilities: { textDocument: { publishDiagnostics: { versionSupport: true } } },
+    });
+    await this.conn.sendNotification('initialized', {});
+  }
+  async close() {
+    await this.conn.sendRequest('shutdown');
+    await this.conn.sendNotification('exit');
+    await new Promise((r) => (this.proc.exitCode !== null ? r() : this.proc.on('exit', r)));
+    this.conn.dispose();
+  }
+}
+
+async function timed(fn) {
+  const t = performance.now();
+  await fn();
+  return performance.now() - t;
+}
+
+/**
+ * Opens a generated script of `items` items and measures. `edits` random one-line edits (insert or
+ * delete a character inside an item, seeded) each wait for that version's diagnostics before the
+ * next, so every figure is the full cost of one keystroke as the editor sees it.
+ */
+export async function measureLsp(root, dir, text, { edits = 40, reads = 60, seed = 7 } = {}) {
+  const c = new Client(root);
+  await c.initialize(root);
+  const uri = pathToFileURL(join(dir, `lsp-${text.length}.rungs`)).href;
+  const lines = text.split('\n');
+  let version = 1;
+  const openMs = await timed(async () => {
+    await c.conn.sendNotification('textDocument/didOpen', { textDocument: { uri, languageId: 'rungs', version, text } });
+    await c.diagnostics(uri, version);
+  });
+  const rssAfterOpen = rssMb(c.proc.pid);
+  const itemLines = lines.map((l, i) => (/^[A-Z]/.test(l) ? i : -1)).filter((i) => i >= 0);
+  const rand = mulberry32(seed);
+  const pickLine = () => itemLines[Math.floor(rand() * itemLines.length)];
+  const editMs = [];
+  for (let i = 0; i < edits; i++) {
+    const line = pickLine();
+    const bar = lines[line].indexOf('|');
+    const end = bar >= 0 ? bar - 1 : lines[line].length - 1;
+    const ch = 1 + Math.floor(rand() * Math.max(1, end - 1));
+    // Alternate typing a letter and deleting one, so the script stays like the original.
+    const insert = i % 2 === 0;
+    const change = insert
+      ? { range: { start: { line, character: ch }, end: { line, character: ch } }, text: 'e' }
+      : { range: { start: { line, character: ch }, end: { line, character: ch + 1 } }, text: '' };
+    lines[line] = insert ? lines[line].slice(0, ch) + 'e' + lines[line].slice(ch) : lines[line].slice(0, ch) + lines[line].slice(ch + 1);
+    version++;
+    const v = version;
+    editMs.push(
+      await timed(async () => {
+        await c.conn.sendNotification('textDocument/didChange', { textDocument: { uri, version: v }, contentChanges: [change] });
+        await c.diagnostics(uri, v);
+      }),
+    );
+  }
+  const td = { uri };
+  const hoverMs = [];
+  const inlayMs = [];
+  const lensMs = [];
+  const completionMs = [];
+  for (let i = 0; i < reads; i++) {
+    const line = pickLine();
+    hoverMs.push(await timed(() => c.conn.sendRequest('textDocument/hover', { textDocument: td, position: { line, character: 3 } })));
+    // A screenful of hints around the line, as an editor asks for the visible range.
+    const range = { start: { line: Math.max(0, line - 25), character: 0 }, end: { line: line + 25, character: 0 } };
+    inlayMs.push(await timed(() => c.conn.sendRequest('textDocument/inlayHint', { textDocument: td, range })));
+    lensMs.push(await timed(() => c.conn.sendRequest('textDocument/codeLens', { textDocument: td })));
+    completionMs.push(await timed(() => c.conn.sendRequest('textDocument/completion', { textDocument: td, position: { line: 2, character: 1 } })));
+  }
+  const rss = rssMb(c.proc.pid);
+  await c.close();
+  const stat = (xs) => ({ p50: percentile(xs, 50), p95: percentile(xs, 95) });
+  return {
+    items: itemLines.length,
+    openMs,
+    edit: stat(editMs),
+    hover: stat(hoverMs),
+    inlay: stat(inlayMs),
+    codeLens: stat(lensMs),
+    completion: stat(completionMs),
+    rssMb: Math.max(rss, rssAfterOpen),
+  };
+}
