@@ -48,9 +48,11 @@ export function composite(
 }
 
 /** Median of a list (0 for an empty list). */
-export function median(values: number[]): number {
+export function median(values: ArrayLike<number>): number {
   if (values.length === 0) return 0;
-  const s = [...values].sort((a, b) => a - b);
+  // A typed array sorts numerically without a comparator call per pair: several times faster on
+  // the rung sizes of a large library.
+  const s = Float64Array.from(values).sort();
   const mid = s.length >> 1;
   return s.length % 2 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
 }

@@ -6,6 +6,20 @@ import { excerpt } from '../core/excerpt';
 
 /** Two items are the same when their spoken words match, ignoring case, punctuation and spacing. */
 export function itemKey(text: string): string {
+  let key = keys.get(text);
+  if (key === undefined) {
+    // Bounded: a long editing session must not grow it without end.
+    if (keys.size >= MAX_KEYS) keys.clear();
+    keys.set(text, (key = spokenKey(text)));
+  }
+  return key;
+}
+
+/** Keys by item text, kept between runs: an edit changes one item, the rest are looked up. */
+const keys = new Map<string, string>();
+const MAX_KEYS = 100_000;
+
+function spokenKey(text: string): string {
   return text
     .toLowerCase()
     .replace(/[’‘ʼ]/g, "'")

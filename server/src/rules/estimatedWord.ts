@@ -2,15 +2,20 @@
 import type { TextEdit } from '../core/types';
 import type { Rule, RuleContext } from './types';
 import { excerpt } from '../core/excerpt';
+import { eolOf, memo } from './shared';
 
 /** Where a new `@say` line goes: after the last header line above the first rung or item. */
 export function headerInsertEdit(ctx: RuleContext, line: string): TextEdit {
   const { script } = ctx.analysis;
-  const firstBody = script.rungs.length ? script.rungs[0].line : ctx.lines.length;
-  // The last setting line above the body, including @say lines the core could not read.
-  let last = -1;
-  for (let l = 0; l < Math.min(firstBody, ctx.lines.length); l++) if (ctx.lines[l].trimStart().startsWith('@')) last = l;
-  const eol = /\r\n/.test(ctx.text) ? '\r\n' : '\n';
+  // The last setting line above the body, including @say lines the core could not read: found
+  // once per lint run, since a script may have hundreds of estimated words.
+  const last = memo(ctx, 'lastHeaderLine', () => {
+    const firstBody = script.rungs.length ? script.rungs[0].line : ctx.lines.length;
+    let found = -1;
+    for (let l = 0; l < Math.min(firstBody, ctx.lines.length); l++) if (ctx.lines[l].trimStart().startsWith('@')) found = l;
+    return found;
+  });
+  const eol = eolOf(ctx);
   if (last < 0) return { line: 0, character: 0, endLine: 0, endCharacter: 0, newText: line + eol };
   if (last + 1 < ctx.lines.length) return { line: last + 1, character: 0, endLine: last + 1, endCharacter: 0, newText: line + eol };
   const end = ctx.lines[last].length;
@@ -35,6 +40,8 @@ export const estimatedWord: Rule = {
   ].join(' '),
   check(ctx, report) {
     for (const it of ctx.analysis.items) {
+      // The item already counts its estimated words: most items have none to look through.
+      if (it.estimatedWords === 0) continue;
       for (const w of it.words) {
         if (w.source !== 'estimate' && w.source !== 'morphology') continue;
         const phones = w.phones.join(' ');

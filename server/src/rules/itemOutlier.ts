@@ -1,6 +1,6 @@
 // item-outlier: an item far from the spread of the other items in its rung.
 import type { Rule } from './types';
-import { fmt, itemRange, ladderMetric, median, METRIC_NAMES, metricOf, rungLabel } from './shared';
+import { fmt, itemRange, ladderMetric, median, METRIC_NAMES, rungLabel, rungStats } from './shared';
 
 /** Robust z-scores beyond this are outliers (a common cut-off for the MAD-based score). */
 export const OUTLIER_Z = 2.5;
@@ -24,10 +24,9 @@ export const itemOutlier: Rule = {
   ].join(' '),
   check(ctx, report) {
     const metric = ladderMetric(ctx);
-    for (const r of ctx.analysis.rungs) {
+    // The rung statistics the ladder rules use, computed once per run.
+    for (const { rung: r, values, median: mid } of rungStats(ctx)) {
       if (r.items.length < MIN_ITEMS) continue;
-      const values = r.items.map((it) => Number(metricOf(it, metric).toFixed(1)));
-      const mid = median(values);
       const mad = median(values.map((v) => Math.abs(v - mid)));
       if (!(mad > 0)) continue;
       r.items.forEach((it, i) => {

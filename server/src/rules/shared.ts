@@ -57,14 +57,36 @@ export function ladderMetric(ctx: RuleContext): LadderMetric {
   return ctx.settings.ladder?.metric ?? 'difficulty';
 }
 
+/**
+ * Values computed once per analysis and shared by every rule that needs them (rung statistics,
+ * the line ending), keyed by the analysis object so nothing outlives it. Keys must name
+ * everything else the value depends on (the ladder metric).
+ */
+const memos = new WeakMap<object, Map<string, unknown>>();
+
+export function memo<T>(ctx: RuleContext, key: string, make: () => T): T {
+  let m = memos.get(ctx.analysis);
+  if (!m) memos.set(ctx.analysis, (m = new Map()));
+  if (!m.has(key)) m.set(key, make());
+  return m.get(key) as T;
+}
+
+/** The script's line ending, for fixes that insert lines. */
+export function eolOf(ctx: RuleContext): string {
+  return memo(ctx, 'eol', () => (ctx.text.includes('\r\n') ? '\r\n' : '\n'));
+}
+
+/** Summaries of every rung with items on the ladder metric, computed once per lint run. */
 export function rungStats(ctx: RuleContext): RungStat[] {
   const metric = ladderMetric(ctx);
-  return ctx.analysis.rungs
-    .filter((r) => r.items.length > 0)
-    .map((rung) => {
-      const values = rung.items.map((i) => Number(metricOf(i, metric).toFixed(1)));
-      return { rung, values, median: median(values), min: minOf(values), max: maxOf(values) };
-    });
+  return memo(ctx, `stats:${metric}`, () =>
+    ctx.analysis.rungs
+      .filter((r) => r.items.length > 0)
+      .map((rung) => {
+        const values = rung.items.map((i) => Number(metricOf(i, metric).toFixed(1)));
+        return { rung, values, median: median(values), min: minOf(values), max: maxOf(values) };
+      }),
+  );
 }
 
 /** `rung 3 "Back to short"`: 1-based, with the name, as every message writes it. */
@@ -111,18 +133,32 @@ export function paceRange(ctx: RuleContext, r: RungAnalysis): Range {
   return s ? settingRange(s) : rungRange(ctx, r);
 }
 
+const totals = new WeakMap<RungAnalysis, { words: number; syllables: number }>();
+
+/** Words and syllables of a rung, summed once per rung (several rules ask for each pace). */
+export function rungTotals(r: RungAnalysis): { words: number; syllables: number } {
+  let t = totals.get(r);
+  if (!t) {
+    t = { words: 0, syllables: 0 };
+    for (const i of r.items) {
+      t.words += i.wordCount;
+      t.syllables += i.syllables;
+    }
+    totals.set(r, t);
+  }
+  return t;
+}
+
 /** Words per second a pace implies on a rung (sps paces depend on the rung's syllables per word). */
 export function rungWordRate(r: RungAnalysis, pace: Pace): number {
-  const words = r.items.reduce((n, i) => n + i.wordCount, 0);
-  const syllables = r.items.reduce((n, i) => n + i.syllables, 0);
+  const { words, syllables } = rungTotals(r);
   if (pace.unit === 'wps') return pace.value;
   return syllables > 0 ? (pace.value * words) / syllables : 0;
 }
 
 /** Syllables per second a pace implies on a rung. */
 export function rungSyllableRate(r: RungAnalysis, pace: Pace): number {
-  const words = r.items.reduce((n, i) => n + i.wordCount, 0);
-  const syllables = r.items.reduce((n, i) => n + i.syllables, 0);
+  const { words, syllables } = rungTotals(r);
   if (pace.unit === 'sps') return pace.value;
   return words > 0 ? (pace.value * syllables) / words : 0;
 }

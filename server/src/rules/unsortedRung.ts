@@ -2,7 +2,7 @@
 import { lineBreaks } from '../core/parse';
 import type { RungAnalysis, TextEdit } from '../core/types';
 import type { Rule, RuleContext } from './types';
-import { fmt, rungLabel, rungRange, sign } from './shared';
+import { fmt, memo, rungLabel, rungRange, sign } from './shared';
 
 /**
  * One edit that puts a rung's items in difficulty order. Each item moves as a whole line, with the
@@ -11,7 +11,7 @@ import { fmt, rungLabel, rungRange, sign } from './shared';
  */
 export function sortRungEdit(ctx: RuleContext, r: RungAnalysis, dir: 1 | -1): TextEdit | null {
   const { lines } = ctx;
-  const comments = new Set(ctx.analysis.script.comments.map((c) => c.line));
+  const comments = memo(ctx, 'commentLines', () => new Set(ctx.analysis.script.comments.map((c) => c.line)));
   const blocks = r.items.map((it) => {
     let start = it.node.line;
     while (start - 1 > r.node.line - (r.node.implicit ? 1 : 0) && comments.has(start - 1)) start--;
@@ -57,14 +57,24 @@ export const unsortedRung: Rule = {
       if (at < 0) continue;
       const it = r.items[at];
       const prev = r.items[at - 1];
-      const edit = sortRungEdit(ctx, r, dir);
+      // The sorted text of a rung is as long as the rung: it is built only when a fix is asked
+      // for (a code action, --fix), not on every keystroke that re-lints the script.
+      let edit: TextEdit | null | undefined;
+      const sorted = () => (edit === undefined ? (edit = sortRungEdit(ctx, r, dir)) : edit);
       report({
         ...rungRange(ctx, r),
         message:
           `${rungLabel(r)} is not in difficulty order: line ${it.node.line + 1} (${fmt(it.difficulty)}) is ` +
           `${dir === 1 ? 'easier' : 'harder'} than line ${prev.node.line + 1} (${fmt(prev.difficulty)}) before it`,
         related: [{ line: it.node.line, character: it.node.textStart, endLine: it.node.line, endCharacter: it.node.textEnd, message: `difficulty ${fmt(it.difficulty)}` }],
-        fix: edit ? { title: `Sort ${rungLabel(r)} by difficulty`, edits: [edit] } : undefined,
+        // An unsorted rung has at least two items, so there is always a sorted order to write.
+        fix: {
+          title: `Sort ${rungLabel(r)} by difficulty`,
+          get edits() {
+            const e = sorted();
+            return e ? [e] : [];
+          },
+        },
       });
     }
   },
