@@ -4,7 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyze, type AnalyzeOutput } from '../../server/src/core/analyze';
 import { lint } from '../../server/src/rules/index';
-import { analyzeIncremental, type ItemCache } from '../../server/src/lsp/incremental';
+import { analyzeIncremental, type IncrementalState } from '../../server/src/lsp/incremental';
 import { words } from '../helpers/data';
 import { benchScript, bigScript, SENTENCES } from './bigScript';
 
@@ -18,7 +18,7 @@ describe('incremental re-analysis', () => {
   it('equals analyze() after each of 60 random edits', () => {
     const rand = rng(42);
     let lines = bigScript(120, 20).split('\n');
-    let cache: ItemCache | undefined;
+    let cache: IncrementalState | undefined;
     let reuse: AnalyzeOutput['pronouncer'] | undefined;
     const edits = [
       (i: number) => (lines[i] = `${lines[i]} again`),

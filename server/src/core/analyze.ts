@@ -16,6 +16,7 @@ import type {
   Pace,
   Problem,
   RungAnalysis,
+  RungNode,
   WordAnalysis,
   WordData,
 } from './types';
@@ -49,7 +50,7 @@ export interface AnalyzeOutput extends Analysis {
   itemCache: ItemCache;
 }
 
-interface CachedItem {
+export interface CachedItem {
   item: ItemAnalysis;
   /** Problems found while scoring the item (their line is rewritten on reuse). */
   problems: Problem[];
@@ -194,6 +195,61 @@ function rankItems(items: ItemAnalysis[]): void {
   });
 }
 
+/** What every rung of one analysis shares. */
+export interface RungContext {
+  options: AnalysisOptions;
+  /** Labels of the script's `@set` lines, for rungs and items that name none. */
+  scriptSets: string[];
+  pronouncer: Pronouncer;
+  /** Item analyses of the previous run, when they are valid for this one. */
+  previous: Map<string, CachedItem> | undefined;
+  /** Item analyses of this run, filled as items are scored. */
+  entries: Map<string, CachedItem>;
+}
+
+/**
+ * One rung: its settings, its items (from the caches when unchanged), ranks and summary. Problems
+ * found go to `problems` in the order a reader meets them. The incremental path (segments.ts)
+ * calls this for the rungs an edit touched, so both paths score a rung the same way.
+ */
+export function analyzeRung(node: RungNode, index: number, shared: RungContext, problems: Problem[]): RungAnalysis {
+  const { options, scriptSets, pronouncer, previous, entries } = shared;
+  const rungSettings = applySettings(options, node.settings, 'rung');
+  pushAll(problems, rungSettings.problems);
+  const explicitPaces = node.settings.some((s) => s.key === 'pace' || s.key === 'paces');
+  const paces = explicitPaces ? rungSettings.options.paces : options.paces;
+  node.paces = explicitPaces ? paces : null;
+  const pacesKey = paces.map((p) => p.label).join(',');
+  const rungItems = node.items.map((it) => {
+    const itemKey = `${pacesKey}\u0001${it.textStart}\u0001${it.text}`;
+    const hit = entries.get(itemKey) ?? previous?.get(itemKey);
+    if (hit) {
+      entries.set(itemKey, hit);
+      for (const p of hit.problems) problems.push({ ...p, line: it.line, endLine: it.line });
+      return { ...hit.item, node: it, rung: index, rank: 0 };
+    }
+    const own: Problem[] = [];
+    const item = analyzeItem(it, index, paces, options, pronouncer, own);
+    entries.set(itemKey, { item, problems: own });
+    pushAll(problems, own);
+    return item;
+  });
+  const inherited = node.sets.length ? node.sets : scriptSets;
+  for (const it of rungItems) it.sets = it.node.sets.length ? it.node.sets : inherited;
+  rankItems(rungItems);
+  const ds = rungItems.map((i) => i.difficulty);
+  return {
+    node,
+    index,
+    paces,
+    items: rungItems,
+    median: median(ds),
+    min: ds.reduce((m, d) => Math.min(m, d), ds.length ? Infinity : 0),
+    max: ds.reduce((m, d) => Math.max(m, d), ds.length ? -Infinity : 0),
+    totalSeconds: paces.map((_, pi) => rungItems.reduce((sum, it) => sum + it.timings[pi].seconds, 0)),
+  };
+}
+
 export function analyze(input: AnalyzeInput): AnalyzeOutput {
   const script = parseScript(input.text);
   const problems: Problem[] = [...script.problems];
@@ -233,42 +289,11 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
   const scriptSets = script.header.filter((h) => h.key === 'set' || h.key === 'sets').flatMap((h) => splitLabels(h.value));
   const rungs: RungAnalysis[] = [];
   const items: ItemAnalysis[] = [];
+  const shared: RungContext = { options, scriptSets, pronouncer, previous, entries };
   script.rungs.forEach((node, index) => {
-    const rungSettings = applySettings(options, node.settings, 'rung');
-    pushAll(problems, rungSettings.problems);
-    const explicitPaces = node.settings.some((s) => s.key === 'pace' || s.key === 'paces');
-    const paces = explicitPaces ? rungSettings.options.paces : options.paces;
-    node.paces = explicitPaces ? paces : null;
-    const pacesKey = paces.map((p) => p.label).join(',');
-    const rungItems = node.items.map((it) => {
-      const itemKey = `${pacesKey}\u0001${it.textStart}\u0001${it.text}`;
-      const hit = entries.get(itemKey) ?? previous?.get(itemKey);
-      if (hit) {
-        entries.set(itemKey, hit);
-        for (const p of hit.problems) problems.push({ ...p, line: it.line, endLine: it.line });
-        return { ...hit.item, node: it, rung: index, rank: 0 };
-      }
-      const own: Problem[] = [];
-      const item = analyzeItem(it, index, paces, options, pronouncer, own);
-      entries.set(itemKey, { item, problems: own });
-      pushAll(problems, own);
-      return item;
-    });
-    const inherited = node.sets.length ? node.sets : scriptSets;
-    for (const it of rungItems) it.sets = it.node.sets.length ? it.node.sets : inherited;
-    rankItems(rungItems);
-    const ds = rungItems.map((i) => i.difficulty);
-    rungs.push({
-      node,
-      index,
-      paces,
-      items: rungItems,
-      median: median(ds),
-      min: ds.reduce((m, d) => Math.min(m, d), ds.length ? Infinity : 0),
-      max: ds.reduce((m, d) => Math.max(m, d), ds.length ? -Infinity : 0),
-      totalSeconds: paces.map((_, pi) => rungItems.reduce((sum, it) => sum + it.timings[pi].seconds, 0)),
-    });
-    pushAll(items, rungItems);
+    const rung = analyzeRung(node, index, shared, problems);
+    rungs.push(rung);
+    for (const it of rung.items) items.push(it);
   });
 
   problems.sort((a, b) => a.line - b.line || a.character - b.character);

@@ -11,7 +11,7 @@ import type { ItemAnalysis, Problem, RungAnalysis, WordData } from '../core/type
 import { clearConfigCache, resolveScriptContext, type ConfigFs } from '../config/resolve';
 import { lint } from '../rules/index';
 import { isRegularFile, readTextBounded, realPath } from '../node/boundedRead';
-import { analyzeIncremental, type ItemCache } from './incremental';
+import { analyzeIncremental, type IncrementalState } from './incremental';
 import { DEFAULT_SETTINGS, toConfigObject, type RungsSettings } from './settings';
 
 export interface Snapshot {
@@ -35,7 +35,7 @@ export interface Snapshot {
 interface DocState {
   snapshot?: Snapshot;
   settingsGeneration: number;
-  cache?: ItemCache;
+  cache?: IncrementalState;
   reuse?: AnalyzeOutput['pronouncer'];
   /** Every file the resolver read or looked for (config files and lexicons, found or missing), by pathKey. */
   dependencies: Map<string, string>;

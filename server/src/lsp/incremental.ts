@@ -1,14 +1,16 @@
-// Re-analysis of an open document that re-scores only what changed: the core's item cache from
-// the previous run goes back in, so after a one-character edit only the edited item is tokenised
-// and scored again (tests/lsp/incremental.test.ts checks the result equals a fresh analysis).
-import { analyze, type AnalyzeInput, type AnalyzeOutput, type ItemCache } from '../core/analyze';
+// Re-analysis of an open document that redoes only what changed: rungs an edit did not touch keep
+// their analyses (core/segments.ts), and in the rungs it did, unchanged items come from the item
+// cache, so after a one-character edit only the edited item is tokenised and scored again
+// (tests/core/incremental.property.test.ts checks the result equals a fresh analysis).
+import type { AnalyzeInput, AnalyzeOutput } from '../core/analyze';
+import { analyzeSegments, type SegmentState } from '../core/segments';
 
-export type { ItemCache };
+export type IncrementalState = SegmentState;
 
 export function analyzeIncremental(
   input: AnalyzeInput,
-  previous: ItemCache | undefined,
-): { output: AnalyzeOutput; cache: ItemCache } {
-  const output = analyze({ ...input, itemCache: previous });
-  return { output, cache: output.itemCache };
+  previous: IncrementalState | undefined,
+): { output: AnalyzeOutput; cache: IncrementalState } {
+  const state = analyzeSegments(input, previous);
+  return { output: state.output, cache: state };
 }
