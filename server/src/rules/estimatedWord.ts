@@ -1,6 +1,6 @@
 // estimated-word: a word with no dictionary entry and no override, pronounced by estimate.
 import type { TextEdit } from '../core/types';
-import type { Rule, RuleContext } from './types';
+import { eachRung, type Rule, type RuleContext } from './types';
 import { excerpt } from '../core/excerpt';
 import { eolOf, memo } from './shared';
 
@@ -38,8 +38,8 @@ export const estimatedWord: Rule = {
     'no estimate: it is reported with no fix, and counts as 0 syllables until a `@say` line gives',
     'its phones. A workspace lexicon file (`lexicon` in a config file) does the same for many scripts.',
   ].join(' '),
-  check(ctx, report) {
-    for (const it of ctx.analysis.items) {
+  ...eachRung((ctx, r, report) => {
+    for (const it of r.items) {
       // The item already counts its estimated words: most items have none to look through.
       if (it.estimatedWords === 0) continue;
       for (const w of it.words) {
@@ -61,5 +61,5 @@ export const estimatedWord: Rule = {
         });
       }
     }
-  },
+  }),
 };

@@ -1,5 +1,5 @@
 // The rule registry and the one entry point both the CLI and the language server call.
-import type { Analysis, Problem } from '../core/types';
+import type { Analysis, Problem, RungAnalysis } from '../core/types';
 import { splitLines } from '../core/parse';
 import { badConfig } from './badConfig';
 import { badDirective } from './badDirective';
@@ -19,7 +19,8 @@ import { smallSet } from './smallSet';
 import { stepBackwards } from './stepBackwards';
 import { stepTooBig } from './stepTooBig';
 import { thinRung } from './thinRung';
-import type { LintSettings, Rule } from './types';
+import type { LintSettings, Rule, RuleContext } from './types';
+import { eolOf } from './shared';
 import { unevenSteps } from './unevenSteps';
 import { unknownKey } from './unknownKey';
 import { unknownPhone } from './unknownPhone';
@@ -71,6 +72,26 @@ export function compareProblems(a: Problem, b: Problem): number {
 }
 
 /**
+ * A rung-local rule's reports on one rung, kept with the rung's analysis: the incremental path
+ * hands back the same analysis object for every rung an edit did not touch, so those rungs are
+ * not checked again. The key holds what else the reports read (the lint settings, line endings).
+ */
+const byRung = new WeakMap<RungAnalysis, Map<string, Problem[]>>();
+
+function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis): Problem[] {
+  let m = byRung.get(r);
+  if (!m) byRung.set(r, (m = new Map()));
+  const key = `${rule.id}|${eolOf(ctx)}|${JSON.stringify(ctx.settings.ladder ?? null)}`;
+  let out = m.get(key);
+  if (!out) {
+    const found: Problem[] = [];
+    rule.checkRung!(ctx, r, (p) => found.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
+    m.set(key, (out = found));
+  }
+  return out;
+}
+
+/**
  * All problems of an analysed script: the core's own (syntax, settings, phones) and every rule's,
  * with ignore directives and severity overrides applied, sorted by position.
  */
@@ -78,10 +99,13 @@ export function lint(analysis: Analysis, text: string, settings: LintSettings = 
   const problems: Problem[] = [];
   const lines = splitLines(text);
   for (const p of analysis.problems) problems.push(p);
+  const ctx = { analysis, lines, text, settings };
   for (const rule of RULES) {
-    rule.check({ analysis, lines, text, settings }, (p) =>
-      problems.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }),
-    );
+    if (rule.checkRung) {
+      for (const r of analysis.rungs) for (const p of rungReports(ctx, rule, r)) problems.push(p);
+      continue;
+    }
+    rule.check(ctx, (p) => problems.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
   }
   const directives = readDirectives(analysis.script.comments, lines, RULE_IDS);
   const out: Problem[] = [];

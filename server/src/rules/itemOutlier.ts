@@ -1,6 +1,6 @@
 // item-outlier: an item far from the spread of the other items in its rung.
-import type { Rule } from './types';
-import { fmt, itemRange, ladderMetric, median, METRIC_NAMES, rungLabel, rungStats } from './shared';
+import { eachRung, type Rule } from './types';
+import { fmt, itemRange, ladderMetric, median, METRIC_NAMES, rungLabel, rungValues } from './shared';
 
 /** Robust z-scores beyond this are outliers (a common cut-off for the MAD-based score). */
 export const OUTLIER_Z = 2.5;
@@ -22,23 +22,23 @@ export const itemOutlier: Rule = {
     'the mean and standard deviation. A rung whose items mostly share one value (MAD 0) is skipped.',
     'Fix it by moving the item to a rung of its level, or by replacing it.',
   ].join(' '),
-  check(ctx, report) {
+  ...eachRung((ctx, r, report) => {
     const metric = ladderMetric(ctx);
-    // The rung statistics the ladder rules use, computed once per run.
-    for (const { rung: r, values, median: mid } of rungStats(ctx)) {
-      if (r.items.length < MIN_ITEMS) continue;
-      const mad = median(values.map((v) => Math.abs(v - mid)));
-      if (!(mad > 0)) continue;
-      r.items.forEach((it, i) => {
-        const z = (values[i] - mid) / (MAD_SCALE * mad);
-        if (Math.abs(z) <= OUTLIER_Z) return;
-        report({
-          ...itemRange(it),
-          message:
-            `${METRIC_NAMES[metric]} ${fmt(values[i])} is far ${z > 0 ? 'above' : 'below'} the rest of ${rungLabel(r)} ` +
-            `(median ${fmt(mid)}, MAD ${fmt(mad)}, robust z ${z > 0 ? '+' : ''}${fmt(z)}; limit ±${OUTLIER_Z})`,
-        });
+    if (r.items.length < MIN_ITEMS) return;
+    // The rung's values on the ladder metric, as the ladder rules read them.
+    const values = rungValues(r, metric);
+    const mid = median(values);
+    const mad = median(values.map((v) => Math.abs(v - mid)));
+    if (!(mad > 0)) return;
+    r.items.forEach((it, i) => {
+      const z = (values[i] - mid) / (MAD_SCALE * mad);
+      if (Math.abs(z) <= OUTLIER_Z) return;
+      report({
+        ...itemRange(it),
+        message:
+          `${METRIC_NAMES[metric]} ${fmt(values[i])} is far ${z > 0 ? 'above' : 'below'} the rest of ${rungLabel(r)} ` +
+          `(median ${fmt(mid)}, MAD ${fmt(mad)}, robust z ${z > 0 ? '+' : ''}${fmt(z)}; limit ±${OUTLIER_Z})`,
       });
-    }
-  },
+    });
+  }),
 };

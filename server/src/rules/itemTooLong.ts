@@ -1,5 +1,5 @@
 // item-too-long: an item over the script's word or syllable limit.
-import type { Rule } from './types';
+import { eachRung, type Rule } from './types';
 import { itemRange, rungLabel } from './shared';
 
 export const itemTooLong: Rule = {
@@ -14,9 +14,9 @@ export const itemTooLong: Rule = {
     'times and abbreviations are spelt out; each part of a hyphenated compound counts), syllables',
     'come from the pronunciations. Fix it by shortening or splitting the item.',
   ].join(' '),
-  check(ctx, report) {
+  ...eachRung((ctx, r, report) => {
     const { maxWords, maxSyllables } = ctx.analysis.options;
-    for (const it of ctx.analysis.items) {
+    for (const it of r.items) {
       const over: string[] = [];
       if (maxWords > 0 && it.wordCount > maxWords) over.push(`${it.wordCount} words, over the limit of ${maxWords} (@max-words)`);
       if (maxSyllables > 0 && it.syllables > maxSyllables) {
@@ -28,5 +28,5 @@ export const itemTooLong: Rule = {
         message: `item in ${rungLabel(ctx.analysis.rungs[it.rung])} has ${over.join(' and ')}`,
       });
     }
-  },
+  }),
 };

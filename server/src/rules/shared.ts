@@ -76,6 +76,20 @@ export function eolOf(ctx: RuleContext): string {
   return memo(ctx, 'eol', () => (ctx.text.includes('\r\n') ? '\r\n' : '\n'));
 }
 
+const valuesByRung = new WeakMap<RungAnalysis, Map<LadderMetric, number[]>>();
+
+/**
+ * A rung's items on a ladder metric, rounded as messages show them. Kept per rung analysis, so
+ * rungs an edit did not touch are not read again.
+ */
+export function rungValues(rung: RungAnalysis, metric: LadderMetric): number[] {
+  let m = valuesByRung.get(rung);
+  if (!m) valuesByRung.set(rung, (m = new Map()));
+  let v = m.get(metric);
+  if (!v) m.set(metric, (v = rung.items.map((i) => Number(metricOf(i, metric).toFixed(1)))));
+  return v;
+}
+
 /** Summaries of every rung with items on the ladder metric, computed once per lint run. */
 export function rungStats(ctx: RuleContext): RungStat[] {
   const metric = ladderMetric(ctx);
@@ -83,7 +97,7 @@ export function rungStats(ctx: RuleContext): RungStat[] {
     ctx.analysis.rungs
       .filter((r) => r.items.length > 0)
       .map((rung) => {
-        const values = rung.items.map((i) => Number(metricOf(i, metric).toFixed(1)));
+        const values = rungValues(rung, metric);
         return { rung, values, median: median(values), min: minOf(values), max: maxOf(values) };
       }),
   );

@@ -1,5 +1,5 @@
 // silent-item: an item line with nothing in it to say (only punctuation or symbols).
-import type { Rule } from './types';
+import { eachRung, type Rule } from './types';
 import { itemRange } from './shared';
 
 export const silentItem: Rule = {
@@ -15,10 +15,10 @@ export const silentItem: Rule = {
     'item made of them is not silent. A placeholder or a stage direction written as an item is',
     'reported here; write the sentence, turn the line into a `//` comment, or delete it.',
   ].join(' '),
-  check(ctx, report) {
-    for (const it of ctx.analysis.items) {
+  ...eachRung((ctx, r, report) => {
+    for (const it of r.items) {
       if (it.wordCount !== 0) continue;
       report({ ...itemRange(it), message: 'this item has no words to say (0 words)' });
     }
-  },
+  }),
 };

@@ -1,5 +1,5 @@
 // thin-rung: a rung with fewer items than the script's minimum.
-import type { Rule } from './types';
+import { eachRung, type Rule } from './types';
 import { rungLabel, rungRange } from './shared';
 
 export const thinRung: Rule = {
@@ -13,18 +13,16 @@ export const thinRung: Rule = {
     'and the minimum. An empty rung is reported too. Fix it by adding items or by merging the rung',
     'into a neighbour. A script without rung headers is a plain list, not a ladder, and is not checked.',
   ].join(' '),
-  check(ctx, report) {
+  ...eachRung((ctx, r, report) => {
     const min = ctx.analysis.options.minItems;
     if (!(min > 0)) return;
     // A file of bare sentences is one implicit rung: a list to score, not a ladder to grade.
     if (ctx.analysis.rungs.length === 1 && ctx.analysis.rungs[0].node.implicit) return;
-    for (const r of ctx.analysis.rungs) {
-      const n = r.items.length;
-      if (n >= min) continue;
-      report({
-        ...rungRange(ctx, r),
-        message: `${rungLabel(r)} has ${n === 0 ? 'no items' : `${n} item${n === 1 ? '' : 's'}`}; rungs need at least ${min} (@min-items)`,
-      });
-    }
-  },
+    const n = r.items.length;
+    if (n >= min) return;
+    report({
+      ...rungRange(ctx, r),
+      message: `${rungLabel(r)} has ${n === 0 ? 'no items' : `${n} item${n === 1 ? '' : 's'}`}; rungs need at least ${min} (@min-items)`,
+    });
+  }),
 };

@@ -1,6 +1,6 @@
 // The shape every ladder/quality rule shares. One rule per file, metadata first; the id is the
 // join key everywhere (LSP diagnostic code and docs link, SARIF ruleId, JSON output, settings).
-import type { Analysis, Fix, Problem, RelatedInfo, Severity } from '../core/types';
+import type { Analysis, Fix, Problem, RelatedInfo, RungAnalysis, Severity } from '../core/types';
 
 export interface RuleContext {
   analysis: Analysis;
@@ -34,6 +34,22 @@ export interface Rule {
   /** A paragraph for the docs: what it checks, the numbers it uses, how to fix it. */
   docs: string;
   check(ctx: RuleContext, report: Report): void;
+  /**
+   * A rung-local rule also checks one rung at a time: what it reports about a rung depends only on
+   * that rung, the script's settings and head, and the lint settings. lint() keeps each rung's
+   * reports while the rung's analysis is unchanged, so an edit re-checks only the rungs it touched.
+   */
+  checkRung?(ctx: RuleContext, rung: RungAnalysis, report: Report): void;
+}
+
+/** `check` for a rung-local rule: its `checkRung` over every rung in order. */
+export function eachRung(checkRung: NonNullable<Rule['checkRung']>): Pick<Rule, 'check' | 'checkRung'> {
+  return {
+    checkRung,
+    check(ctx, report) {
+      for (const r of ctx.analysis.rungs) checkRung(ctx, r, report);
+    },
+  };
 }
 
 /** Per-rule severity overrides ("off" silences a rule), from config files or editor settings. */

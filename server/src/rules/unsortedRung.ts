@@ -1,7 +1,7 @@
 // unsorted-rung: items inside a rung that do not run from easiest to hardest.
 import { lineBreaks } from '../core/parse';
 import type { RungAnalysis, TextEdit } from '../core/types';
-import type { Rule, RuleContext } from './types';
+import { eachRung, type Rule, type RuleContext } from './types';
 import { fmt, memo, rungLabel, rungRange, sign } from './shared';
 
 /**
@@ -50,32 +50,30 @@ export const unsortedRung: Rule = {
     'whole, with the comment lines directly above it, and blank lines, settings and every other line',
     'stay where they are. Turn the rule off when item order is deliberate (e.g. randomised).',
   ].join(' '),
-  check(ctx, report) {
+  ...eachRung((ctx, r, report) => {
     const dir = sign(ctx);
-    for (const r of ctx.analysis.rungs) {
-      const at = r.items.findIndex((it, i) => i > 0 && (r.items[i - 1].difficulty - it.difficulty) * dir > 0.05);
-      if (at < 0) continue;
-      const it = r.items[at];
-      const prev = r.items[at - 1];
-      // The sorted text of a rung is as long as the rung: it is built only when a fix is asked
-      // for (a code action, --fix), not on every keystroke that re-lints the script.
-      let edit: TextEdit | null | undefined;
-      const sorted = () => (edit === undefined ? (edit = sortRungEdit(ctx, r, dir)) : edit);
-      report({
-        ...rungRange(ctx, r),
-        message:
-          `${rungLabel(r)} is not in difficulty order: line ${it.node.line + 1} (${fmt(it.difficulty)}) is ` +
-          `${dir === 1 ? 'easier' : 'harder'} than line ${prev.node.line + 1} (${fmt(prev.difficulty)}) before it`,
-        related: [{ line: it.node.line, character: it.node.textStart, endLine: it.node.line, endCharacter: it.node.textEnd, message: `difficulty ${fmt(it.difficulty)}` }],
-        // An unsorted rung has at least two items, so there is always a sorted order to write.
-        fix: {
-          title: `Sort ${rungLabel(r)} by difficulty`,
-          get edits() {
-            const e = sorted();
-            return e ? [e] : [];
-          },
+    const at = r.items.findIndex((it, i) => i > 0 && (r.items[i - 1].difficulty - it.difficulty) * dir > 0.05);
+    if (at < 0) return;
+    const it = r.items[at];
+    const prev = r.items[at - 1];
+    // The sorted text of a rung is as long as the rung: it is built only when a fix is asked
+    // for (a code action, --fix), not on every keystroke that re-lints the script.
+    let edit: TextEdit | null | undefined;
+    const sorted = () => (edit === undefined ? (edit = sortRungEdit(ctx, r, dir)) : edit);
+    report({
+      ...rungRange(ctx, r),
+      message:
+        `${rungLabel(r)} is not in difficulty order: line ${it.node.line + 1} (${fmt(it.difficulty)}) is ` +
+        `${dir === 1 ? 'easier' : 'harder'} than line ${prev.node.line + 1} (${fmt(prev.difficulty)}) before it`,
+      related: [{ line: it.node.line, character: it.node.textStart, endLine: it.node.line, endCharacter: it.node.textEnd, message: `difficulty ${fmt(it.difficulty)}` }],
+      // An unsorted rung has at least two items, so there is always a sorted order to write.
+      fix: {
+        title: `Sort ${rungLabel(r)} by difficulty`,
+        get edits() {
+          const e = sorted();
+          return e ? [e] : [];
         },
-      });
-    }
-  },
+      },
+    });
+  }),
 };
