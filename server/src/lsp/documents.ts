@@ -11,6 +11,7 @@ import type { ItemAnalysis, Problem, RungAnalysis, WordData } from '../core/type
 import { clearConfigCache, resolveScriptContext, type ConfigFs } from '../config/resolve';
 import { lint } from '../rules/index';
 import { isRegularFile, readTextBounded, realPath } from '../node/boundedRead';
+import type { LintSettings } from '../rules/types';
 import { analyzeIncremental, type IncrementalState } from './incremental';
 import { DEFAULT_SETTINGS, toConfigObject, type RungsSettings } from './settings';
 
@@ -23,7 +24,7 @@ export interface Snapshot {
   /** Every problem: the core's and every rule's, severities applied. */
   problems: Problem[];
   settings: RungsSettings;
-  /** Milliseconds the analysis and lint took (for the log and the report). */
+  /** Milliseconds the analysis took (for the log and the report); the rules run when problems are first read. */
   ms: number;
   itemAt(line: number): ItemAnalysis | undefined;
   /** The rung whose header (or, for the implicit rung, first item) is on this line. */
@@ -87,24 +88,42 @@ function makeSnapshot(
   version: number,
   text: string,
   analysis: AnalyzeOutput,
-  problems: Problem[],
+  problems: () => Problem[],
   settings: RungsSettings,
   ms: number,
 ): Snapshot {
-  let byLine: Map<number, ItemAnalysis> | undefined;
+  // The lines and the problems (every rule) are worked out when first asked for: a read request
+  // (hover, inlay hints, code lens, completion) answers from the analysis and never waits for
+  // the rules, and a burst of edits lints only the version that gets published.
+  let lines: string[] | undefined;
+  let linted: Problem[] | undefined;
   let headers: Map<number, RungAnalysis> | undefined;
   return {
     uri,
     version,
     text,
-    lines: splitLines(text),
+    get lines() {
+      return (lines ??= splitLines(text));
+    },
     analysis,
-    problems,
+    get problems() {
+      return (linted ??= problems());
+    },
     settings,
     ms,
     itemAt(line) {
-      byLine ??= new Map(analysis.items.map((it) => [it.node.line, it]));
-      return byLine.get(line);
+      // Items are in line order: a binary search, not a table of 10,000 items per version.
+      const items = analysis.items;
+      let lo = 0;
+      let hi = items.length - 1;
+      while (lo <= hi) {
+        const mid = (lo + hi) >> 1;
+        const l = items[mid].node.line;
+        if (l === line) return items[mid];
+        if (l < line) lo = mid + 1;
+        else hi = mid - 1;
+      }
+      return undefined;
     },
     rungAtHeader(line) {
       headers ??= new Map(analysis.rungs.map((r) => [r.node.line, r]));
@@ -236,7 +255,7 @@ export class AnalysisStore {
       );
       state.cache = cache;
       state.reuse = output.pronouncer;
-      const problems = lint(output, text, ctx.lint);
+      const problems = () => this.lintSafely(doc.uri, output, text, ctx.lint);
       // Problems in files become diagnostics on those files; editor settings have no file to
       // show them in, so those are logged.
       state.fileProblems = ctx.problems.filter((c) => c.file !== EDITOR_LAYER && isAbsolute(c.file));
@@ -260,7 +279,18 @@ export class AnalysisStore {
         endLine: 0,
         endCharacter: 0,
       };
-      return makeSnapshot(doc.uri, doc.version, text, empty, [problem], settings, performance.now() - t0);
+      return makeSnapshot(doc.uri, doc.version, text, empty, () => [problem], settings, performance.now() - t0);
+    }
+  }
+
+  /** Every rule's problems; a rule that throws becomes one problem, never a broken server. */
+  private lintSafely(uri: string, output: AnalyzeOutput, text: string, settings: LintSettings): Problem[] {
+    try {
+      return lint(output, text, settings);
+    } catch (err) {
+      this.hooks.error(`checking ${uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
+      const message = `Rungs could not check this script (${err instanceof Error ? err.message : String(err)}); see the Rungs output for details`;
+      return [{ rule: 'internal-error', severity: 'error', message, line: 0, character: 0, endLine: 0, endCharacter: 0 }];
     }
   }
 

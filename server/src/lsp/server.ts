@@ -39,13 +39,14 @@ import { LEGEND, semanticTokens } from './semanticTokens';
 import { normalizeSettings } from './settings';
 import { sortRung } from './sortRung';
 import { documentSymbols, foldingRanges } from './symbols';
+import { AdaptiveDelay } from './debounce';
 import { fileWatchers, uriPaths, isConfigFile } from './watch';
 import { PROGRESS_METHOD, type ProgressView } from './contract';
 import { findRecordsFiles, isRecordsPath, progressView, recordsHover, recordsLenses, recordsProgress, rungRecordsNote } from './records';
 import { uriToPath } from './documents';
 import type { ProgressResult } from '../core/records';
 
-/** Quiet time after the last keystroke before diagnostics are published again. */
+/** Longest quiet time after the last keystroke before diagnostics are published again. */
 export const PUBLISH_DELAY_MS = 150;
 
 const TRANSPORT_FLAGS = ['--stdio', '--node-ipc', '--socket', '--pipe', '--clientProcessId'];
@@ -88,6 +89,7 @@ export function startServer(): Connection {
   let caps: ClientCapabilities = {};
   let configurationSupport = false;
   const timers = new Map<string, NodeJS.Timeout>();
+  const publishDelay = new AdaptiveDelay(PUBLISH_DELAY_MS);
   const published = new Map<string, number>();
 
   const cancelled = () => new ResponseError(LSPErrorCodes.RequestCancelled, 'request cancelled');
@@ -206,9 +208,18 @@ export function startServer(): Connection {
       }
     });
   }
-  function schedule(uri: string, delay = PUBLISH_DELAY_MS): void {
+  function schedule(uri: string, delay = publishDelay.next()): void {
     clearTimeout(timers.get(uri));
-    timers.set(uri, setTimeout(() => publish(uri), delay));
+    timers.set(
+      uri,
+      setTimeout(() => {
+        // What an edit's re-check costs sets the wait after the next keystroke (opening a
+        // script is a cold start, not an edit, so it does not count).
+        const t0 = performance.now();
+        publish(uri);
+        publishDelay.record(performance.now() - t0);
+      }, delay),
+    );
   }
 
   async function refreshSettings(uri: string): Promise<boolean> {
