@@ -28,7 +28,9 @@ export function rssMb(pid) {
 
 class Client {
   constructor(root) {
-    this.proc = spawn(process.execPath, [join(root, 'server/bin/rungs.js'), 'lsp', '--stdio'], { stdio: ['pipe', 'pipe', 'inherit'] });
+    // BENCH_PROFILE=DIR writes a CPU profile of each server to DIR (open it in a profiler).
+    const prof = process.env.BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`] : [];
+    this.proc = spawn(process.execPath, [...prof, join(root, 'server/bin/rungs.js'), 'lsp', '--stdio'], { stdio: ['pipe', 'pipe', 'inherit'] });
     this.conn = createProtocolConnection(new StreamMessageReader(this.proc.stdout), new StreamMessageWriter(this.proc.stdin));
     this.versions = new Map();
     this.waiters = [];

@@ -34,6 +34,7 @@ export function segmentsOf(text: string): Segment[] {
   let i = 0;
   const n = text.length;
   const HEADER = /[^\S\r\n]*==/y;
+  const noCr = !text.includes('\r');
   while (i <= n) {
     // i is the start of a line.
     const c = text.charCodeAt(i);
@@ -45,12 +46,19 @@ export function segmentsOf(text: string): Segment[] {
         segLine = line;
       }
     }
-    // Find the end of this line (\r\n, \r or \n, as splitLines reads them).
-    let j = i;
-    while (j < n) {
-      const d = text.charCodeAt(j);
-      if (d === 0x0a || d === 0x0d) break;
-      j++;
+    // Find the end of this line (\r\n, \r or \n, as splitLines reads them); text without a
+    // carriage return is searched natively.
+    let j: number;
+    if (noCr) {
+      j = text.indexOf('\n', i);
+      if (j < 0) j = n;
+    } else {
+      j = i;
+      while (j < n) {
+        const d = text.charCodeAt(j);
+        if (d === 0x0a || d === 0x0d) break;
+        j++;
+      }
     }
     if (j >= n) break;
     i = text.charCodeAt(j) === 0x0d && text.charCodeAt(j + 1) === 0x0a ? j + 2 : j + 1;

@@ -4,7 +4,7 @@
 import type { CodeLens } from 'vscode-languageserver/node';
 import type { Snapshot } from './documents';
 import { diffMarked, ESTIMATED_MARK, secs } from './format';
-import { sortRung } from './sortRung';
+import { rungNeedsSort } from './sortRung';
 import { SORT_RUNG_COMMAND } from './contract';
 import { describeLengths, rungLength } from '../core/timing';
 
@@ -29,7 +29,7 @@ export function codeLenses(s: Snapshot): CodeLens[] {
       const gap = s.analysis.options.timing.gap;
       lenses.push({ range, command: { title: `session ${describeLengths(rungLength(s.analysis, rung.index).paces)} (with ${gap} s gaps)`, command: '' } });
     }
-    if (sortRung(s, rung)) {
+    if (rungNeedsSort(s, rung)) {
       lenses.push({ range, command: { title: 'Sort by difficulty', command: SORT_RUNG_COMMAND, arguments: [s.uri, line] } });
     }
   }

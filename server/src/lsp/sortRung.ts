@@ -12,6 +12,18 @@ export function eolOf(text: string): string {
   return m ? m[0] : '\n';
 }
 
+const needsSort = new WeakMap<RungAnalysis, boolean>();
+
+/**
+ * Whether sorting would change a rung, kept with the rung's analysis: the code lens asks on every
+ * request, and the analysis of a rung an edit did not touch is the same object with the same lines.
+ */
+export function rungNeedsSort(s: Snapshot, rung: RungAnalysis): boolean {
+  let v = needsSort.get(rung);
+  if (v === undefined) needsSort.set(rung, (v = sortRung(s, rung) !== null));
+  return v;
+}
+
 /** The edit that sorts a rung, or null when it is already in order (or has fewer than two items). */
 export function sortRung(s: Snapshot, rung: RungAnalysis): TextEdit | null {
   const dir = s.analysis.options.direction === 'falling' ? -1 : 1;

@@ -1,5 +1,5 @@
 // duplicate-item: the same sentence written twice in one script.
-import type { ItemAnalysis } from '../core/types';
+import type { ItemAnalysis, ItemNode } from '../core/types';
 import type { Rule } from './types';
 import { itemRange, rungLabel } from './shared';
 import { excerpt } from '../core/excerpt';
@@ -12,6 +12,15 @@ export function itemKey(text: string): string {
     if (keys.size >= MAX_KEYS) keys.clear();
     keys.set(text, (key = spokenKey(text)));
   }
+  return key;
+}
+
+/** Keys by parsed item: rungs an edit did not touch keep their nodes, so their keys are found by identity. */
+const byNode = new WeakMap<ItemNode, string>();
+
+function nodeKey(node: ItemNode): string {
+  let key = byNode.get(node);
+  if (key === undefined) byNode.set(node, (key = itemKey(node.text)));
   return key;
 }
 
@@ -44,7 +53,7 @@ export const duplicateItem: Rule = {
   check(ctx, report) {
     const seen = new Map<string, ItemAnalysis>();
     for (const it of ctx.analysis.items) {
-      const key = itemKey(it.node.text);
+      const key = nodeKey(it.node);
       if (!key) continue;
       const first = seen.get(key);
       if (!first) {
