@@ -2,7 +2,7 @@
 // Exit codes: 0 clean, 1 an error-level problem or more warnings than --max-warnings, 2 a usage
 // error or an unreadable file (every other file is still linted and reported).
 import { join, relative, sep } from 'node:path';
-import { analyze } from '../core/analyze';
+import { analyze, type AnalyzeOutput } from '../core/analyze';
 import type { Problem, WordData } from '../core/types';
 import { resolveScriptContext, type ScriptContext } from '../config/resolve';
 import { loadWordTable } from '../data/wordTable';
@@ -48,8 +48,17 @@ interface Checked {
   text: string;
 }
 
+/**
+ * Word scores of the last script checked: the next script reuses them when its pronunciation
+ * settings and overrides are the same (the core checks), so a library of scripts scores each
+ * spelling once instead of once per file.
+ */
+let last: { data: WordData; pronouncer: AnalyzeOutput['pronouncer'] } | undefined;
+
 function check(text: string, data: WordData, ctx: ScriptContext): Checked {
-  const analysis = analyze({ text, data, options: ctx.options, lexicon: ctx.lexicon });
+  const reuse = last?.data === data ? last.pronouncer : undefined;
+  const analysis = analyze({ text, data, options: ctx.options, lexicon: ctx.lexicon, reuse });
+  last = { data, pronouncer: analysis.pronouncer };
   return { problems: lint(analysis, text, ctx.lint), text };
 }
 
