@@ -1,7 +1,7 @@
 // How long the server waits after a keystroke before it re-checks and publishes. A fixed wait
 // long enough for a slow re-check makes every edit of a small script slow too; no wait at all
 // lets a slow re-check run once per keystroke while the person keeps typing. So the wait follows
-// what re-checking costs: about twice a recent re-check, between a few milliseconds and the most
+// what re-checking costs: about as long as a recent re-check, between a few milliseconds and the most
 // it may be. Handlers run one at a time, so keystrokes that arrive during a re-check wait in the
 // input and all land before the next one: a typing burst never builds a queue of re-checks.
 
@@ -24,6 +24,6 @@ export class AdaptiveDelay {
   /** The wait before the next re-check. Until a cost is known, the longest. */
   next(): number {
     if (this.cost === null) return this.max;
-    return Math.round(Math.min(this.max, Math.max(MIN_DELAY_MS, 2 * this.cost)));
+    return Math.round(Math.min(this.max, Math.max(MIN_DELAY_MS, this.cost)));
   }
 }

@@ -88,7 +88,7 @@ function makeSnapshot(
   version: number,
   text: string,
   analysis: AnalyzeOutput,
-  problems: () => Problem[],
+  problems: (lines: string[]) => Problem[],
   settings: RungsSettings,
   ms: number,
 ): Snapshot {
@@ -107,7 +107,7 @@ function makeSnapshot(
     },
     analysis,
     get problems() {
-      return (linted ??= problems());
+      return (linted ??= problems((lines ??= splitLines(text))));
     },
     settings,
     ms,
@@ -255,7 +255,7 @@ export class AnalysisStore {
       );
       state.cache = cache;
       state.reuse = output.pronouncer;
-      const problems = () => this.lintSafely(doc.uri, output, text, ctx.lint);
+      const problems = (lines: string[]) => this.lintSafely(doc.uri, output, text, ctx.lint, lines);
       // Problems in files become diagnostics on those files; editor settings have no file to
       // show them in, so those are logged.
       state.fileProblems = ctx.problems.filter((c) => c.file !== EDITOR_LAYER && isAbsolute(c.file));
@@ -284,9 +284,9 @@ export class AnalysisStore {
   }
 
   /** Every rule's problems; a rule that throws becomes one problem, never a broken server. */
-  private lintSafely(uri: string, output: AnalyzeOutput, text: string, settings: LintSettings): Problem[] {
+  private lintSafely(uri: string, output: AnalyzeOutput, text: string, settings: LintSettings, lines: string[]): Problem[] {
     try {
-      return lint(output, text, settings);
+      return lint(output, text, settings, lines);
     } catch (err) {
       this.hooks.error(`checking ${uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
       const message = `Rungs could not check this script (${err instanceof Error ? err.message : String(err)}); see the Rungs output for details`;

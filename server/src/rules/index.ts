@@ -95,9 +95,14 @@ function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis): Problem[] {
  * All problems of an analysed script: the core's own (syntax, settings, phones) and every rule's,
  * with ignore directives and severity overrides applied, sorted by position.
  */
-export function lint(analysis: Analysis, text: string, settings: LintSettings = { severities: {} }): Problem[] {
+export function lint(
+  analysis: Analysis,
+  text: string,
+  settings: LintSettings = { severities: {} },
+  /** The text's lines when the caller has them already (the language server's snapshot). */
+  lines: string[] = splitLines(text),
+): Problem[] {
   const problems: Problem[] = [];
-  const lines = splitLines(text);
   for (const p of analysis.problems) problems.push(p);
   const ctx = { analysis, lines, text, settings };
   for (const rule of RULES) {
