@@ -1,11 +1,8 @@
 // What the CLI may touch, passed in so tests can run commands in-process on a fake file system.
-export interface CliFs {
-  readFile(path: string): string;
-  writeFile(path: string, text: string): void;
-  isDirectory(path: string): boolean;
-  exists(path: string): boolean;
-  readdir(path: string): string[];
-}
+import type { NodeFs } from '../node/nodeFs';
+
+/** The file system the CLI may touch (node/nodeFs.ts is the real one). */
+export type CliFs = NodeFs;
 
 export interface CliIO {
   argv: string[];

@@ -1,7 +1,8 @@
-// Settings of the matched-set checks, kept together so the settings table can take them as a block:
+// Settings of the matched-set checks, kept together as a block of the settings table (settings.ts):
 // `@set-bound` (equivalence bound in SD units), `@set-min-items` (fewest items a set needs to be
 // tested) and `@set-scope` (compare sets over the whole script or rung by rung).
-import type { AnalysisOptions, SetScope } from './types';
+import type { SettingSpec } from './settings';
+import type { SetScope } from './types';
 
 export interface SetOptions {
   setBound: number;
@@ -17,27 +18,25 @@ export interface SetOptions {
  */
 export const DEFAULT_SET_OPTIONS: SetOptions = { setBound: 0.5, setMinItems: 5, setScope: 'script' };
 
-interface SetKeySpec {
-  key: string;
-  aliases: string[];
-  scope: 'script';
-  summary: string;
-  example: string;
-  values?: string[];
-  apply(value: string, o: AnalysisOptions): string | null;
-}
+const BOUND_RANGE = { min: 0, max: 5, above: true };
+const MIN_ITEMS_RANGE = { min: 2, max: 1000 };
 
-export const SET_KEYS: SetKeySpec[] = [
+export const SET_SETTINGS: SettingSpec[] = [
   {
     key: 'set-bound',
     aliases: [],
     scope: 'script',
+    type: 'number',
+    default: DEFAULT_SET_OPTIONS.setBound,
     summary: 'Equivalence bound for matched sets, in standard deviations (default 0.5; a project convention).',
     example: '0.5',
+    // Five SD is far beyond any difference a matched pair could be meant to allow.
+    range: BOUND_RANGE,
     apply(value, o) {
       const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*(?:sd)?\s*$/i.exec(value);
       const n = m ? Number(m[1]) : NaN;
       if (!(n > 0)) return `@set-bound must be a number of standard deviations above 0, e.g. "0.5", not "${value.trim()}"`;
+      if (n > BOUND_RANGE.max) return `@set-bound must be at most ${BOUND_RANGE.max}, not ${n}`;
       o.setBound = n;
       return null;
     },
@@ -46,11 +45,15 @@ export const SET_KEYS: SetKeySpec[] = [
     key: 'set-min-items',
     aliases: [],
     scope: 'script',
+    type: 'integer',
+    default: DEFAULT_SET_OPTIONS.setMinItems,
     summary: 'Fewest items a matched set needs before it is compared (default 5; at least 2).',
     example: '5',
+    range: MIN_ITEMS_RANGE,
     apply(value, o) {
       const v = value.trim();
       if (!/^\d+$/.test(v) || Number(v) < 2) return `@set-min-items must be a whole number, 2 or more, not "${v}"`;
+      if (Number(v) > MIN_ITEMS_RANGE.max) return `@set-min-items must be at most ${MIN_ITEMS_RANGE.max}, not ${v}`;
       o.setMinItems = Number(v);
       return null;
     },
@@ -59,6 +62,8 @@ export const SET_KEYS: SetKeySpec[] = [
     key: 'set-scope',
     aliases: [],
     scope: 'script',
+    type: 'choice',
+    default: DEFAULT_SET_OPTIONS.setScope,
     summary: 'Compare matched sets over the whole script (default) or rung by rung.',
     example: 'rung',
     values: ['script', 'rung'],

@@ -2,20 +2,15 @@
 // command. The edit itself is the unsorted-rung rule's (rules/unsortedRung.ts): item lines move
 // byte-identical with the comments directly above them, every other line keeps its place.
 import type { RungAnalysis, TextEdit } from '../core/types';
+import { lineEnding } from '../core/parse';
 import { sortRungEdit } from '../rules/unsortedRung';
 import type { Snapshot } from './documents';
-
-/** The line ending a text uses ("\n" when it has none). */
-export function eolOf(text: string): string {
-  const m = /\r\n|\r|\n/.exec(text);
-  return m ? m[0] : '\n';
-}
 
 /** The edit that sorts a rung, or null when it is already in order (or has fewer than two items). */
 export function sortRung(s: Snapshot, rung: RungAnalysis): TextEdit | null {
   const dir = s.analysis.options.direction === 'falling' ? -1 : 1;
-  const e = sortRungEdit({ analysis: s.analysis, lines: s.lines, text: s.text, settings: { severities: {} } }, rung, dir);
+  const e = sortRungEdit({ analysis: s.analysis, lines: s.lines, text: s.text }, rung, dir);
   if (!e) return null;
-  const current = s.lines.slice(e.line, e.endLine + 1).join(eolOf(s.text));
+  const current = s.lines.slice(e.line, e.endLine + 1).join(lineEnding(s.text));
   return current === e.newText ? null : e;
 }

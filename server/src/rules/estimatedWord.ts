@@ -1,4 +1,6 @@
 // estimated-word: a word with no dictionary entry and no override, pronounced by estimate.
+import { isEstimated } from '../core/pronounce';
+import { lineEnding } from '../core/parse';
 import type { TextEdit } from '../core/types';
 import type { Rule, RuleContext } from './types';
 
@@ -9,7 +11,7 @@ export function headerInsertEdit(ctx: RuleContext, line: string): TextEdit {
   // The last setting line above the body, including @say lines the core could not read.
   let last = -1;
   for (let l = 0; l < Math.min(firstBody, ctx.lines.length); l++) if (ctx.lines[l].trimStart().startsWith('@')) last = l;
-  const eol = /\r\n/.test(ctx.text) ? '\r\n' : '\n';
+  const eol = lineEnding(ctx.text);
   if (last < 0) return { line: 0, character: 0, endLine: 0, endCharacter: 0, newText: line + eol };
   if (last + 1 < ctx.lines.length) return { line: last + 1, character: 0, endLine: last + 1, endCharacter: 0, newText: line + eol };
   const end = ctx.lines[last].length;
@@ -35,7 +37,7 @@ export const estimatedWord: Rule = {
   check(ctx, report) {
     for (const it of ctx.analysis.items) {
       for (const w of it.words) {
-        if (w.source !== 'estimate' && w.source !== 'morphology') continue;
+        if (!isEstimated(w)) continue;
         const phones = w.phones.join(' ');
         const word = w.surface.toLowerCase() === w.spoken ? w.surface : w.spoken;
         const at = { line: it.node.line, character: w.start, endLine: it.node.line, endCharacter: w.end };

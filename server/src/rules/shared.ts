@@ -2,8 +2,8 @@
 // reads (the composite difficulty or one metric), robust statistics, and where paces were set.
 import { median } from '../core/difficulty';
 import { formatNumber } from '../core/pace';
-import type { ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
-import type { LadderMetric, RuleContext } from './types';
+import type { Analysis, ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
+import type { LadderMetric, LintSettings, Report, RuleContext } from './types';
 
 /** One decimal, as the score table shows difficulty: 21.7, 24.0. */
 export const fmt = (n: number): string => (Math.abs(n) < 0.05 ? 0 : n).toFixed(1);
@@ -51,11 +51,35 @@ export interface RungStat {
   max: number;
 }
 
-export function ladderMetric(ctx: RuleContext): LadderMetric {
+export function ladderMetric(ctx: Pick<RuleContext, 'settings'>): LadderMetric {
   return ctx.settings.ladder?.metric ?? 'difficulty';
 }
 
-export function rungStats(ctx: RuleContext): RungStat[] {
+/** The largest step the ladder is judged by, and where it was set; undefined: no limit. */
+export interface StepLimit {
+  value: number | undefined;
+  /** `@max-step` (difficulty ladders without a configured step) or `ladder.maxStep`. */
+  source: '@max-step' | 'ladder.maxStep';
+}
+
+/**
+ * The step limit of a ladder: for `difficulty`, `ladder.maxStep` when configured, else the
+ * script's `@max-step`; for another metric only `ladder.maxStep` (difficulty points do not carry
+ * over). step-too-big, the ladder view, the rung hover and the code lens all read this.
+ */
+export function stepLimit(analysis: Analysis, settings: LintSettings): StepLimit {
+  const metric = settings.ladder?.metric ?? 'difficulty';
+  const configured = settings.ladder?.maxStep;
+  if (metric === 'difficulty' && configured === undefined) return { value: analysis.options.maxStep, source: '@max-step' };
+  return { value: configured, source: 'ladder.maxStep' };
+}
+
+/** One rung's summary on the ladder metric in force (undefined for a rung without items). */
+export function rungStatsByIndex(analysis: Analysis, settings: LintSettings): Map<number, RungStat> {
+  return new Map(rungStats({ analysis, settings }).map((st) => [st.rung.index, st]));
+}
+
+export function rungStats(ctx: Pick<RuleContext, 'analysis' | 'settings'>): RungStat[] {
   const metric = ladderMetric(ctx);
   return ctx.analysis.rungs
     .filter((r) => r.items.length > 0)
@@ -107,6 +131,27 @@ export function settingRange(s: Setting): Range {
 export function paceRange(ctx: RuleContext, r: RungAnalysis): Range {
   const s = paceSetting(ctx, r);
   return s ? settingRange(s) : rungRange(ctx, r);
+}
+
+/**
+ * Visits each pace of each rung with items, and reports what `judge` says about it (a message, or
+ * null when the pace is fine) on the line that set the pace. A pace set once in the header and
+ * inherited by several rungs is reported once, on the first rung it is judged on.
+ */
+export function reportPaces(ctx: RuleContext, judge: (r: RungAnalysis, pace: Pace) => string | null, report: Report): void {
+  const done = new Set<string>();
+  for (const r of ctx.analysis.rungs) {
+    if (!r.items.length) continue;
+    const range = paceRange(ctx, r);
+    for (const pace of r.paces) {
+      const key = `${range.line}:${pace.label}`;
+      if (done.has(key)) continue;
+      const message = judge(r, pace);
+      if (message === null) continue;
+      done.add(key);
+      report({ ...range, message });
+    }
+  }
 }
 
 /** Words per second a pace implies on a rung (sps paces depend on the rung's syllables per word). */

@@ -1,4 +1,5 @@
 // unsorted-rung: items inside a rung that do not run from easiest to hardest.
+import { lineEnding } from '../core/parse';
 import type { RungAnalysis, TextEdit } from '../core/types';
 import type { Rule, RuleContext } from './types';
 import { fmt, rungLabel, rungRange, sign } from './shared';
@@ -8,7 +9,7 @@ import { fmt, rungLabel, rungRange, sign } from './shared';
  * comment lines directly above it (no blank between); blank, setting and detached comment lines
  * keep their places. Lines are moved byte for byte, so nothing is lost or altered.
  */
-export function sortRungEdit(ctx: RuleContext, r: RungAnalysis, dir: 1 | -1): TextEdit | null {
+export function sortRungEdit(ctx: Pick<RuleContext, 'analysis' | 'lines' | 'text'>, r: RungAnalysis, dir: 1 | -1): TextEdit | null {
   const { lines } = ctx;
   const comments = new Set(ctx.analysis.script.comments.map((c) => c.line));
   const blocks = r.items.map((it) => {
@@ -30,7 +31,7 @@ export function sortRungEdit(ctx: RuleContext, r: RungAnalysis, dir: 1 | -1): Te
       line = b.end;
     } else out.push(lines[line]);
   }
-  const eol = /\r\n/.test(ctx.text) ? '\r\n' : '\n';
+  const eol = lineEnding(ctx.text);
   return { line: first, character: 0, endLine: last, endCharacter: lines[last].length, newText: out.join(eol) };
 }
 

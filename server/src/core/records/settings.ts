@@ -1,7 +1,7 @@
 // Settings of the records side: the benefit mark, the filler list and the readiness rule. They
-// live in AnalysisOptions (`options.records`) and are read by the same key table as every other
-// setting (config files, editor settings), in a block of their own.
-import type { KeySpec } from '../options';
+// live in AnalysisOptions (`options.records`) and are a block of the one settings table
+// (core/settings.ts), read like every other setting (headers, config files).
+import type { SettingSpec } from '../settings';
 
 export interface RecordsOptions {
   /** Paced/unassisted ratio that counts as a meaningful benefit (common practice: 1.2). */
@@ -23,16 +23,24 @@ export function defaultRecordsOptions(): RecordsOptions {
 
 const NUMBER = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*$/;
 
-export const RECORDS_KEYS: KeySpec[] = [
+const DEFAULTS = defaultRecordsOptions();
+const MARK_RANGE = { min: 0, max: 10, above: true };
+const SESSIONS_RANGE = { min: 1, max: 100 };
+
+export const RECORDS_KEYS: SettingSpec[] = [
   {
     key: 'benefit-mark',
     aliases: [],
     scope: 'script',
+    type: 'number',
+    default: DEFAULTS.benefitMark,
+    range: MARK_RANGE,
     summary: 'Rate records: paced/unassisted words-per-second ratio that marks a meaningful benefit (default 1.2).',
     example: '1.2',
     apply(value, o) {
       const m = NUMBER.exec(value);
       if (!m || !(Number(m[1]) > 0)) return `@benefit-mark must be a number above 0, e.g. 1.2, not "${value.trim()}"`;
+      if (Number(m[1]) > MARK_RANGE.max) return `@benefit-mark must be at most ${MARK_RANGE.max}, not ${m[1]}`;
       o.records = { ...o.records, benefitMark: Number(m[1]) };
       return null;
     },
@@ -41,6 +49,8 @@ export const RECORDS_KEYS: KeySpec[] = [
     key: 'fillers',
     aliases: [],
     scope: 'script',
+    type: 'labels',
+    default: DEFAULTS.fillers.join(', '),
     summary: 'Rate records: words left out when counting a transcript (default um, uh, er, erm, hmm).',
     example: 'um, uh, er',
     apply(value, o) {
@@ -53,11 +63,15 @@ export const RECORDS_KEYS: KeySpec[] = [
     key: 'ready-sessions',
     aliases: [],
     scope: 'script',
+    type: 'integer',
+    default: DEFAULTS.readySessions,
+    range: SESSIONS_RANGE,
     summary: 'Rate records: latest sessions that must meet the mark before a rung is called ready (default 2).',
     example: '2',
     apply(value, o) {
       const m = /^\s*(\d+)\s*$/.exec(value);
       if (!m || Number(m[1]) < 1) return `@ready-sessions must be a whole number, 1 or more, not "${value.trim()}"`;
+      if (Number(m[1]) > SESSIONS_RANGE.max) return `@ready-sessions must be at most ${SESSIONS_RANGE.max}, not ${m[1]}`;
       o.records = { ...o.records, readySessions: Number(m[1]) };
       return null;
     },
@@ -66,6 +80,10 @@ export const RECORDS_KEYS: KeySpec[] = [
     key: 'accuracy-floor',
     aliases: [],
     scope: 'script',
+    type: 'number',
+    // "none": no floor (null in the options).
+    default: 'none',
+    range: { min: 0, max: 1 },
     summary: 'Rate records: accuracy (correct/words) the ready sessions must reach too, 0-1 or a percentage (default none).',
     example: '80%',
     apply(value, o) {
