@@ -40,7 +40,10 @@ export function renderLadderBody(ladder: Ladder | null): string {
   const n = ladder.rungs.length;
   const width = PLOT.left + PLOT.right + n * PLOT.band;
   const plotH = PLOT.height - PLOT.top - PLOT.bottom;
-  const y = (d: number): number => PLOT.top + ((100 - Math.max(0, Math.min(100, d))) / 100) * plotH;
+  // The scale is the ladder metric's: difficulty 0-100, or 0 to the largest value (syllables, ...).
+  const top = ladder.scaleMax ?? 100;
+  const metric = ladder.metric ?? 'difficulty';
+  const y = (d: number): number => PLOT.top + ((top - Math.max(0, Math.min(top, d))) / top) * plotH;
   const x = (i: number): number => PLOT.left + (i + 0.5) * PLOT.band;
   const out: string[] = [];
   const label = ladder.title ? `Difficulty ladder of ${ladder.title}` : 'Difficulty ladder';
@@ -49,19 +52,20 @@ export function renderLadderBody(ladder: Ladder | null): string {
   );
 
   // Grid and axis: difficulty runs 0-100 bottom to top.
-  for (const v of [0, 25, 50, 75, 100]) {
+  for (const v of [0, 0.25, 0.5, 0.75, 1].map((f) => Math.round(f * top * 10) / 10)) {
     out.push(`<line class="grid" x1="${PLOT.left}" x2="${width - PLOT.right}" y1="${y(v)}" y2="${y(v)}"/>`);
     out.push(`<text class="axis" x="${PLOT.left - 6}" y="${y(v) + 4}" text-anchor="end">${v}</text>`);
   }
 
   // The allowed step: from each rung's median, how far the next rung's median may move.
-  for (const s of ladder.steps) {
+  const maxStep = ladder.maxStep;
+  for (const s of maxStep === null ? [] : ladder.steps) {
     const m = ladder.rungs[s.from].median;
-    const [lo, hi] = ladder.direction === 'falling' ? [m - ladder.maxStep, m] : [m, m + ladder.maxStep];
+    const [lo, hi] = ladder.direction === 'falling' ? [m - maxStep!, m] : [m, m + maxStep!];
     const w = PLOT.band * 0.8;
     out.push(
       `<rect class="allowed" x="${x(s.to) - w / 2}" y="${y(hi)}" width="${w}" height="${Math.max(1, y(lo) - y(hi))}">` +
-        `<title>Allowed range for the median of ${escapeHtml(ladder.rungs[s.to].name)}: ${fmt(Math.max(0, lo))}-${fmt(Math.min(100, hi))} (step ${fmt(ladder.maxStep)})</title></rect>`,
+        `<title>Allowed range for the median of ${escapeHtml(ladder.rungs[s.to].name)}: ${fmt(Math.max(0, lo))}-${fmt(Math.min(top, hi))} (step ${fmt(maxStep!)})</title></rect>`,
     );
   }
 
@@ -76,9 +80,9 @@ export function renderLadderBody(ladder: Ladder | null): string {
       const est = it.estimatedWords ?? 0;
       const note = estimatedNote(est);
       out.push(
-        `<circle class="item" data-line="${it.line}"${est ? ` data-estimated="${est}"` : ''} tabindex="0" role="button" cx="${cx.toFixed(1)}" cy="${y(it.difficulty).toFixed(1)}" r="4.5">` +
-          `<title>${escapeHtml(it.text)} — difficulty ${estimatedMark(est)}${fmt(it.difficulty)}, rank ${it.rank} of ${count} (line ${it.line + 1})${note ? `; ${note}` : ''}${it.sets?.length ? `; set ${escapeHtml(it.sets.join(', '))}` : ''}</title></circle>` +
-          setMarkSvg(marks, it, cx, y(it.difficulty), escapeHtml),
+        `<circle class="item" data-line="${it.line}"${est ? ` data-estimated="${est}"` : ''} tabindex="0" role="button" cx="${cx.toFixed(1)}" cy="${y(it.value ?? it.difficulty).toFixed(1)}" r="4.5">` +
+          `<title>${escapeHtml(it.text)} — ${escapeHtml(metric)} ${estimatedMark(est)}${fmt(it.value ?? it.difficulty)}, rank ${it.rank} of ${count} (line ${it.line + 1})${note ? `; ${note}` : ''}${it.sets?.length ? `; set ${escapeHtml(it.sets.join(', '))}` : ''}</title></circle>` +
+          setMarkSvg(marks, it, cx, y(it.value ?? it.difficulty), escapeHtml),
       );
     });
   });
@@ -142,7 +146,7 @@ export function renderLadderBody(ladder: Ladder | null): string {
   const dir = ladder.direction === 'falling' ? 'falling' : 'rising';
   const anyEstimated = ladder.rungs.some((r) => rungEstimated(r) > 0);
   const estimatedLegend = anyEstimated ? ` Hollow points and ${estimatedMark(1)} mark difficulties that rest on words with an estimated pronunciation.` : '';
-  out.push(`<p class="legend">Direction ${dir}; allowed step ${fmt(ladder.maxStep)} points (shaded).${estimatedLegend}${setLegend(marks, escapeHtml)} Click a point, a mark or a rung to go to its line.</p>`);
+  out.push(`<p class="legend">Direction ${dir}; ${maxStep === null ? `${escapeHtml(metric)} ladder, no step limit set` : `allowed step ${fmt(maxStep)} ${metric === 'difficulty' ? 'points' : escapeHtml(metric)} (shaded)`}.${estimatedLegend}${setLegend(marks, escapeHtml)} Click a point, a mark or a rung to go to its line.</p>`);
   return out.join('\n');
 }
 

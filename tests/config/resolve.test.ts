@@ -2,13 +2,17 @@
 // walk, header over config over editor settings over defaults, and bad config reported with
 // file, line and column.
 import { describe, expect, it } from 'vitest';
-import { clearConfigCache, parseConfigText, resolveScriptContext } from '../../server/src/config/resolve';
+import { clearConfigCache, parseConfigText, resolveScriptContext, type ConfigLayer, type ScriptContext } from '../../server/src/config/resolve';
+import { renderFindings } from '../../server/src/rules/index';
 import { analyze } from '../../server/src/core/analyze';
 import { MemFs } from '../cli/memfs';
 import { words } from '../helpers/data';
 
 const at = (p: { file: string; problem: { line: number; character: number; rule: string; message: string } }) =>
   `${p.file}:${p.problem.line + 1}:${p.problem.character + 1} ${p.problem.rule} ${p.problem.message}`;
+
+/** The resolver's findings as the rules word them (what `rungs lint` and the editor show). */
+const rendered = (ctx: ScriptContext) => ctx.findings.map(({ file, finding }) => ({ file, problem: renderFindings([finding])[0] }));
 
 describe('resolveScriptContext', () => {
   it('merges config files from the script folder up, the nearer winning', () => {
@@ -19,7 +23,7 @@ describe('resolveScriptContext', () => {
       '/lib/clinic/a.rungs': 'Hello.\n',
     });
     const ctx = resolveScriptContext('/lib/clinic/a.rungs', fs);
-    expect(ctx.problems).toEqual([]);
+    expect(rendered(ctx)).toEqual([]);
     expect(ctx.configFiles).toEqual(['/lib/.rungs.yaml', '/lib/clinic/.rungs.json']);
     expect(ctx.options.maxStep).toBe(9);
     expect(ctx.options.minItems).toBe(5);
@@ -64,7 +68,7 @@ describe('resolveScriptContext', () => {
     });
     const ctx = resolveScriptContext('/w/a.rungs', fs);
     expect(ctx.lexicon.map((o) => o.word)).toEqual(['teodric']);
-    expect(ctx.problems.map(at)).toEqual([
+    expect(rendered(ctx).map(at)).toEqual([
       '/w/names.lexicon:3:22 unknown-phone "NX" is not a CMU ARPAbet phone: use one of the 39 phones, e.g. AE1, K, NG',
       '/w/.rungs.json:2:14 bad-config lexicon file "gone.lexicon" does not exist (looked for /w/gone.lexicon)',
     ]);
@@ -77,7 +81,7 @@ describe('resolveScriptContext', () => {
       '/w/a.rungs': 'Hello.\n',
     });
     const ctx = resolveScriptContext('/w/a.rungs', fs);
-    expect(ctx.problems.map(at)).toEqual([
+    expect(rendered(ctx).map(at)).toEqual([
       '/w/.rungs.yaml:1:1 unknown-key unknown key "max-stp"; did you mean "max-step"?',
       '/w/.rungs.yaml:4:3 bad-config unknown rule "step-backward"; did you mean "step-backwards"?',
       '/w/.rungs.yaml:5:14 bad-config the severity of "thin-rung" is one of error, warning, info, hint, off, not "loud"',
@@ -85,13 +89,13 @@ describe('resolveScriptContext', () => {
       '/w/.rungs.yaml:8:1 bad-value "title" belongs in a script, not in a config file',
       '/w/.rungs.yaml:2:8 bad-value pace 90 is not a plausible speech rate (above 20 per second)',
     ]);
-    const fix = ctx.problems[0].problem.fix!;
+    const fix = rendered(ctx)[0].problem.fix!;
     expect(fix.edits).toEqual([{ line: 0, character: 0, endLine: 0, endCharacter: 7, newText: 'max-step' }]);
     expect(ctx.options.paces.map((p) => p.label)).toEqual(['1 wps', '1.5 wps', '2 wps']);
   });
 
-  const shown = (l: { problems: { line: number; character: number; rule: string; message: string }[] }) =>
-    l.problems.map((p) => `${p.line + 1}:${p.character + 1} ${p.rule} ${p.message}`);
+  const shown = (l: ConfigLayer) =>
+    renderFindings(l.findings).map((p) => `${p.line + 1}:${p.character + 1} ${p.rule} ${p.message}`);
   const values = (l: { settings: { key: string; value: string }[] }) => l.settings.map((s) => `${s.key}=${s.value}`);
 
   it('reports an unclosed YAML bracket where it opens, and the rest of the file still applies', () => {

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { composite, difficultyComponents } from '../../server/src/core/difficulty';
 import { makePace, parsePaces, timeAt, READING_NORM_WPS } from '../../server/src/core/pace';
 import { analyzeText } from '../helpers/data';
+import { renderFindings } from '../../server/src/rules/index';
 
 describe('projected durations', () => {
   it('word pacing vs syllable pacing (computed from cmu-pronouncing-dictionary@3.0.0)', () => {
@@ -60,7 +61,7 @@ describe('script format', () => {
     expect(a.rungs).toHaveLength(1);
     expect(a.rungs[0].node.implicit).toBe(true);
     expect(a.rungs[0].paces.map((p) => p.label)).toEqual(['1 wps', '1.5 wps', '2 wps']);
-    expect(a.problems).toEqual([]);
+    expect(renderFindings(a.findings)).toEqual([]);
   });
 
   it('reads rungs, rung paces, notes, ids and sets', () => {
@@ -92,7 +93,7 @@ describe('script format', () => {
     const w = a.items[0].words;
     expect(w[0]).toMatchObject({ spoken: 'marisol', source: 'override', syllables: 3 });
     expect(w[2].phones.join(' ')).toBe('R IY1 D');
-    const bad = a.problems.find((p) => p.rule === 'unknown-phone')!;
+    const bad = renderFindings(a.findings).find((p) => p.rule === 'unknown-phone')!;
     // "@say Zed = Z EH1 DX": DX starts at column 17 (0-based).
     expect(bad).toMatchObject({ line: 2, character: 17, endCharacter: 19 });
   });
@@ -120,15 +121,15 @@ describe('script format', () => {
     const [well, read] = a.items[0].words.slice(2);
     expect(well).toMatchObject({ spoken: 'well', variant: 1 });
     expect(read.phones.join(' ')).toBe('R IY1 D');
-    expect(a.problems.filter((p) => p.rule === 'bad-variant')).toEqual([]);
+    expect(renderFindings(a.findings).filter((p) => p.rule === 'bad-variant')).toEqual([]);
   });
 
   it('unknown and malformed settings become problems with a nearest-key fix, never a throw', () => {
     const a = analyzeText('@pacse 1 wps\n@baseline fast\nHello.\n');
-    const unknown = a.problems.find((p) => p.rule === 'unknown-key')!;
+    const unknown = renderFindings(a.findings).find((p) => p.rule === 'unknown-key')!;
     expect(unknown.message).toContain('did you mean "@paces"');
     expect(unknown.fix!.edits[0]).toMatchObject({ line: 0, character: 0, endCharacter: 6, newText: '@paces' });
-    const bad = a.problems.find((p) => p.rule === 'bad-value')!;
+    const bad = renderFindings(a.findings).find((p) => p.rule === 'bad-value')!;
     expect(bad).toMatchObject({ line: 1, character: 10 });
   });
 

@@ -9,7 +9,7 @@ import { analyze, type AnalyzeOutput } from '../../server/src/core/analyze';
 import { defaultOptions } from '../../server/src/core/options';
 import { analyzeSegments, segmentsOf, type SegmentState } from '../../server/src/core/segments';
 import type { AnalysisOptions } from '../../server/src/core/types';
-import { lint } from '../../server/src/rules/index';
+import { lint, renderFindings } from '../../server/src/rules/index';
 import { words } from '../helpers/data';
 import { bigScript } from '../lsp/bigScript';
 
@@ -28,7 +28,7 @@ const view = (a: AnalyzeOutput, text: string) =>
       i.node.line, i.node.textStart, i.node.text, i.rung, i.rank, i.difficulty, i.wordCount, i.syllables, i.phonemes, i.wcm,
       i.zipfMean, i.zipfMin, i.estimatedWords, i.sets, i.timings.map((t) => t.seconds), i.words.map((w) => [w.start, w.spoken, w.source, w.syllables]),
     ]),
-    problems: a.problems,
+    problems: renderFindings(a.findings),
     lint: lint(a, text),
   });
 

@@ -5,6 +5,7 @@ import { defaultOptions } from '../../server/src/core/options';
 import { makePace } from '../../server/src/core/pace';
 import { describeRungLength, formatLength, planSession, sessionLengths } from '../../server/src/core/timing';
 import { analyzeText } from '../helpers/data';
+import { renderFindings } from '../../server/src/rules/index';
 
 describe('word slots inside an item', () => {
   // "My granddaughter visits every Sunday afternoon." is 6 words and 14 syllables
@@ -118,7 +119,7 @@ describe('timing settings', () => {
 
   it('reports unreadable values at the value, keeping the default', () => {
     const a = analyzeText('@item-gap soon\n@word-slots by-ear\nHi.\n');
-    const p = a.problems.filter((x) => x.rule === 'bad-value');
+    const p = renderFindings(a.findings).filter((x) => x.rule === 'bad-value');
     expect(p.map((x) => [x.line, x.character])).toEqual([[0, 10], [1, 12]]);
     expect(p[0].message).toMatch(/@item-gap takes a time in seconds/);
     expect(a.options.timing.gap).toBe(2);

@@ -229,7 +229,8 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
     await editorLine(page, o.expect.hoverLine).waitFor({ timeout: 15_000 });
     const hoverText = await showHover(page, o.expect.hoverTexts[0]);
     await shot('hover');
-    await page.mouse.move(700, 880);
+    // Move the pointer off the editor (onto the status bar's cursor position, found by its text).
+    await page.locator('.statusbar-item', { hasText: 'Ln ' }).first().hover();
     await page.keyboard.press('Escape');
     lap('hover');
 
@@ -260,9 +261,8 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
 
     // 5. Quick fix on the planted misspelt key.
     await goToLine(page, o.expect.fixLineNumber + 1);
-    const target = editorLine(page, o.expect.fixLine).locator('span span').first();
-    const tb = (await target.boundingBox())!;
-    await page.mouse.click(tb.x + 12, tb.y + tb.height / 2);
+    // The first token of the line is the misspelt key: a click on it puts the cursor there.
+    await editorLine(page, o.expect.fixLine).locator('span span').first().click();
     await page.keyboard.press('Control+.');
     const action = page.locator('.action-widget .monaco-list-row', { hasText: o.expect.fixTitle }).first();
     await action.waitFor({ timeout: 15_000 });
@@ -285,14 +285,14 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
     lap('quickFix');
 
     // 6. The view follows edits: a new item at the end of the script is drawn at once.
-    await page.mouse.click(tb.x + 12, tb.y + tb.height / 2);
+    await editorLine(page, o.expect.fixedLine).click();
     await page.keyboard.press('Control+End');
     await page.keyboard.press('Enter');
     await page.keyboard.type(o.expect.newItem);
     await frame.locator('svg.ladder circle.item').nth(items).waitFor({ timeout: 15_000 });
     const itemsAfterEdit = await frame.locator('svg.ladder circle.item').count();
     await page.keyboard.press('Escape');
-    await page.mouse.move(700, 500);
+    await page.locator('.statusbar-item', { hasText: 'Ln ' }).first().hover();
     await shot('overview');
     lap('liveEdit');
 

@@ -60,7 +60,7 @@ describe.skipIf(skip)('VS Code workbench (code-server + Chromium)', () => {
         hoverLine: '== Back to short',
         hoverLineNumber: back.line,
         // The first text is one only the server's rung hover has (diagnostics share the line).
-        hoverTexts: [`${signed(backStep.delta)} (largest allowed ${fmt1(oracle.ladder.maxStep)}`, `median ${fmt1(back.median)}`],
+        hoverTexts: [`${signed(backStep.delta)} (largest allowed ${fmt1(oracle.ladder.maxStep!)}`, `median ${fmt1(back.median)}`],
         fixLine: '@pacse',
         fixLineNumber: oracle.diagnostics.find((d) => d.code === 'unknown-key')!.range.start.line,
         fixTitle: 'Change "@pacse" to "@paces"',
@@ -97,7 +97,7 @@ describe.skipIf(skip)('VS Code workbench (code-server + Chromium)', () => {
     expect(step.delta).toBeLessThan(0);
     expect(report.hoverText).toContain(`Back to short" · ${back.items.length} items`);
     expect(report.hoverText).toContain(`median ${fmt1(back.median)}`);
-    expect(report.hoverText).toContain(`): ${signed(step.delta)} (largest allowed ${fmt1(oracle.ladder.maxStep)}`);
+    expect(report.hoverText).toContain(`): ${signed(step.delta)} (largest allowed ${fmt1(oracle.ladder.maxStep!)}`);
   });
 
   it('applies the quick fix for the misspelt setting', () => {

@@ -8,9 +8,13 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { expandPaths } from '../../server/src/cli/files';
 import { main } from '../../server/src/cli/main';
 import { nodeFs } from '../../server/src/cli/nodeIo';
-import { resolveScriptContext } from '../../server/src/config/resolve';
+import { resolveScriptContext, type ScriptContext } from '../../server/src/config/resolve';
+import { renderFindings } from '../../server/src/rules/index';
 import { excerpt } from '../../server/src/core/excerpt';
 import { MAX_FILE_BYTES, readBytesBounded } from '../../server/src/node/boundedRead';
+
+/** The resolver's findings as the rules word them (what `rungs lint` and the editor show). */
+const rendered = (ctx: ScriptContext) => ctx.findings.map(({ file, finding }) => ({ file, problem: renderFindings([finding])[0] }));
 
 const root = join(__dirname, '..', '..');
 const SCRIPT = '== One\nSee you soon.\nHi there.\nThank you.\n';
@@ -63,8 +67,8 @@ describe('what a config may read', () => {
       writeFileSync(join(dir, 'proj', '.rungs.json'), JSON.stringify({ lexicon: name }));
       const ctx = resolveScriptContext(join(dir, 'proj', 'a.rungs'), nodeFs);
       expect(ctx.lexicon).toEqual([]);
-      expect(ctx.problems.map((p) => p.problem.message).join('\n')).toMatch(/is outside the folder of the config file/);
-      expect(JSON.stringify(ctx.problems)).not.toContain('S3CR3T');
+      expect(rendered(ctx).map((p) => p.problem.message).join('\n')).toMatch(/is outside the folder of the config file/);
+      expect(JSON.stringify(rendered(ctx))).not.toContain('S3CR3T');
     }
   });
 
@@ -72,7 +76,7 @@ describe('what a config may read', () => {
     writeFileSync(join(dir, '.rungs.json'), JSON.stringify({ lexicon: 'names.lexicon' }));
     writeFileSync(join(dir, 'names.lexicon'), 'Okafor = OW0 K AA1 F AO0 R\n');
     const ctx = resolveScriptContext(join(dir, 'a.rungs'), nodeFs);
-    expect(ctx.problems).toEqual([]);
+    expect(rendered(ctx)).toEqual([]);
     expect(ctx.lexicon.map((o) => o.word)).toEqual(['okafor']);
   });
 
@@ -80,15 +84,15 @@ describe('what a config may read', () => {
     symlinkSync('/dev/zero', join(dir, 'zero.lexicon'));
     writeFileSync(join(dir, '.rungs.json'), JSON.stringify({ lexicon: 'zero.lexicon' }));
     const ctx = resolveScriptContext(join(dir, 'a.rungs'), nodeFs);
-    expect(ctx.problems.map((p) => p.problem.message)).toEqual(['lexicon file "zero.lexicon" is outside the folder of the config file that names it (a lexicon must be in that folder or below it)']);
+    expect(rendered(ctx).map((p) => p.problem.message)).toEqual(['lexicon file "zero.lexicon" is outside the folder of the config file that names it (a lexicon must be in that folder or below it)']);
     execFileSync('mkfifo', [join(dir, 'pipe.lexicon')]);
     writeFileSync(join(dir, '.rungs.json'), JSON.stringify({ lexicon: 'pipe.lexicon' }));
     const ctx1 = resolveScriptContext(join(dir, 'a.rungs'), nodeFs);
-    expect(ctx1.problems.map((p) => p.problem.message)).toEqual(['lexicon file "pipe.lexicon" is not a regular file']);
+    expect(rendered(ctx1).map((p) => p.problem.message)).toEqual(['lexicon file "pipe.lexicon" is not a regular file']);
     rmSync(join(dir, '.rungs.json'));
     execFileSync('mkfifo', [join(dir, '.rungs.yaml')]);
     const ctx2 = resolveScriptContext(join(dir, 'a.rungs'), nodeFs);
-    expect(ctx2.problems.map((p) => p.problem.message)).toEqual(['cannot read the config file (not a regular file)']);
+    expect(rendered(ctx2).map((p) => p.problem.message)).toEqual(['cannot read the config file (not a regular file)']);
   });
 
   it('reads at most the bound', () => {
@@ -103,7 +107,7 @@ describe('what a config may read', () => {
     // A lexicon line whose "phones" are a long secret with a terminal escape in it.
     writeFileSync(join(dir, '.rungs.json'), JSON.stringify({ lexicon: 'names.lexicon' }));
     writeFileSync(join(dir, 'names.lexicon'), `word = \u001b]0;${'x'.repeat(500)}\n`);
-    const msgs = resolveScriptContext(join(dir, 'a.rungs'), nodeFs).problems.map((p) => p.problem.message);
+    const msgs = rendered(resolveScriptContext(join(dir, 'a.rungs'), nodeFs)).map((p) => p.problem.message);
     expect(msgs.length).toBe(1);
     expect(msgs[0]).not.toContain('\u001b');
     expect(msgs[0]).toContain('\\x1b');

@@ -7,7 +7,7 @@ import { parseScript } from '../../server/src/core/parse';
 import { resolveScriptContext } from '../../server/src/config/resolve';
 import { formatJson, formatJsonPieces, scoreJson } from '../../server/src/cli/formatScore';
 import { batched, jsonPieces } from '../../server/src/cli/jsonStream';
-import { lint } from '../../server/src/rules/index';
+import { lint, renderFindings } from '../../server/src/rules/index';
 import { analyzeText } from '../helpers/data';
 import { MemFs } from '../cli/memfs';
 
@@ -49,14 +49,14 @@ describe('large inputs', () => {
     const lex = Array.from({ length: N }, (_, i) => `w${i} = W IH1 N`).join('\n');
     const fs = new MemFs({ '.rungs.json': '{"lexicon": "words.txt"}', 'words.txt': lex, 'a.rungs': 'Hi.\n' });
     const ctx = resolveScriptContext('/clinic/a.rungs', fs);
-    expect(ctx.problems).toEqual([]);
+    expect(ctx.findings).toEqual([]);
     expect(ctx.lexicon.length).toBe(N);
   });
 
   it('writes score JSON in bounded pieces that join to JSON.stringify', () => {
     const text = `== Big\n${'Hi there.\n'.repeat(3_000)}`;
     const a = analyzeText(text);
-    const files = [{ file: 'big.rungs', analysis: a, problems: a.problems }];
+    const files = [{ file: 'big.rungs', analysis: a, problems: renderFindings(a.findings) }];
     const pieces = [...batched(formatJsonPieces(files), 1 << 16)];
     // Each write is a batch of small pieces: at most the batch size plus one item's JSON.
     expect(Math.max(...pieces.map((p) => p.length))).toBeLessThan((1 << 16) + 4096);

@@ -4,7 +4,7 @@ import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
 import { formatCsv, formatTable } from '../../server/src/cli/formatScore';
 import { unifiedDiff } from '../../server/src/cli/formats/diff';
-import { formatText } from '../../server/src/cli/formats/text';
+import { formatLintText as formatText } from '../../server/src/cli/formats/text';
 import type { CliIO } from '../../server/src/cli/io';
 import { main } from '../../server/src/cli/main';
 import { lint } from '../../server/src/rules/index';

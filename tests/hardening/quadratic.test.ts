@@ -6,7 +6,8 @@ import { describe, expect, it } from 'vitest';
 import { parseScript } from '../../server/src/core/parse';
 import { applySettings, defaultOptions } from '../../server/src/core/options';
 import { parseConfigText } from '../../server/src/config/parseConfig';
-import { formatText } from '../../server/src/lsp/formatting';
+import { formatScript as formatText } from '../../server/src/lsp/formatScript';
+import { renderFindings } from '../../server/src/rules/index';
 import { analyzeText } from '../helpers/data';
 
 const S = ' '.repeat(100_000);
@@ -31,7 +32,7 @@ describe('long runs of spaces', () => {
   it.each(LINES.map((l, i) => [i, l]))('parses, analyses and formats line %i', (_i, line) => {
     const text = `== R\n${line}\nSee you.\n`;
     const a = analyzeText(text);
-    for (const p of a.problems) expect(p.endCharacter).toBeLessThanOrEqual(text.split('\n')[p.line].length + 1);
+    for (const p of renderFindings(a.findings)) expect(p.endCharacter).toBeLessThanOrEqual(text.split('\n')[p.line].length + 1);
     const f = formatText(text);
     expect(formatText(f)).toBe(f);
   }, T.timeout);
@@ -45,7 +46,7 @@ describe('long runs of spaces', () => {
     expect(s.rungs[0].items[0].note).toBe('note');
     expect(s.header.map((x) => [x.key, x.value])).toEqual([['title', 'Week 3']]);
     const o = applySettings(defaultOptions(), [{ key: 'weights', value: `length${S}= 0.4, complexity: 0.4, rarity 0.2`, line: 0, keyStart: 0, keyEnd: 1, valueStart: 1, valueEnd: 2 }], 'script');
-    expect(o.problems).toEqual([]);
+    expect(o.findings).toEqual([]);
     expect(o.options.weights).toEqual({ length: 0.4, complexity: 0.4, rarity: 0.2 });
     expect(formatText(`== A${S}@pace${S}1${S}==\n@paces 1 ,2${S},3 wps\n@say  x${S}=${S}K S\n`)).toBe('== A @pace 1 ==\n@paces 1, 2, 3 wps\n@say x = K S\n');
   });
@@ -56,10 +57,10 @@ describe('config files with many keys', () => {
     const keys = Array.from({ length: 20_000 }, (_, i) => `"k${i}": ${i}`);
     const json = `{${keys.join(',\n')},\n"max-step": 10,\n"max-step": 12}`;
     const layer = parseConfigText(json, '/p/.rungs.json');
-    const dup = layer.problems.filter((p) => /unique/.test(p.message));
+    const dup = renderFindings(layer.findings).filter((p) => /unique/.test(p.message));
     expect(dup.map((p) => [p.line, p.character])).toEqual([[20_001, 0]]);
-    expect(layer.problems.filter((p) => p.rule === 'unknown-key').length).toBe(20_000);
+    expect(renderFindings(layer.findings).filter((p) => p.rule === 'unknown-key').length).toBe(20_000);
     const yaml = Array.from({ length: 20_000 }, (_, i) => `k${i}: ${i}`).join('\n');
-    expect(parseConfigText(yaml, '/p/.rungs.yaml').problems.length).toBe(20_000);
+    expect(parseConfigText(yaml, '/p/.rungs.yaml').findings.length).toBe(20_000);
   }, 40_000);
 });

@@ -3,16 +3,17 @@
 import { describe, expect, it } from 'vitest';
 import type { CliIO } from '../../server/src/cli/io';
 import { main } from '../../server/src/cli/main';
-import { KEYS, NUMBER_RANGES } from '../../server/src/core/options';
+import { SETTINGS as KEYS } from '../../server/src/core/settings';
+import { NUMBER_RANGES } from '../../server/src/core/ranges';
 import { parseConfigText } from '../../server/src/config/parseConfig';
-import { lint } from '../../server/src/rules/index';
+import { lint, renderFindings } from '../../server/src/rules/index';
 import { analyzeText } from '../helpers/data';
 import { MemFs } from '../cli/memfs';
 
 const ITEMS = '== A\nHi.\nSee you soon.\nThank you very much.\n== B\nMy granddaughter visits every Sunday afternoon.\nPlease pass the bread.\nGood morning.\n';
 
 function settingProblems(line: string) {
-  return analyzeText(`${line}\n${ITEMS}`).problems.filter((p) => p.line === 0);
+  return renderFindings(analyzeText(`${line}\n${ITEMS}`).findings).filter((p) => p.line === 0);
 }
 
 describe('numeric settings', () => {
@@ -60,7 +61,7 @@ describe('numeric settings', () => {
 
   it('config files: a YAML .inf ladder step and a huge value are problems', () => {
     const layer = parseConfigText('ladder:\n  maxStep: .inf\nbaseline: 1e20\n', '/p/.rungs.yaml');
-    expect(layer.problems.map((p) => p.line)).toEqual([1]);
+    expect(renderFindings(layer.findings).map((p) => p.line)).toEqual([1]);
     expect(layer.ladder.maxStep).toBeUndefined();
   });
 });

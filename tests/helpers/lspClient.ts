@@ -36,7 +36,8 @@ export function applyTextEdits(text: string, edits: TextEdit[]): string {
   }
   const offset = (p: { line: number; character: number }) =>
     p.line >= starts.length ? text.length : Math.min(starts[p.line] + p.character, text.length);
-  const sorted = [...edits].sort((a, b) => offset(b.range.start) - offset(a.range.start));
+  // From the end backwards; at one start an insertion listed first lands before the replacement.
+  const sorted = edits.map((e, i) => ({ e, i })).sort((a, b) => offset(b.e.range.start) - offset(a.e.range.start) || b.i - a.i).map((x) => x.e);
   let out = text;
   for (const e of sorted) out = out.slice(0, offset(e.range.start)) + e.newText + out.slice(offset(e.range.end));
   return out;

@@ -1,12 +1,15 @@
-// The server's incremental re-analysis must give exactly what `analyze()` gives (the CLI's
+// The server's incremental re-analysis (checkScript with a document's cache) must give exactly what `analyze()` gives (the CLI's
 // path), after any edit, including a one-character edit of a 10,000-item script. Timings are
 // printed for people; the benchmark (`npm run bench`) is where speed is judged.
 import { describe, expect, it } from 'vitest';
 import { analyze, type AnalyzeOutput } from '../../server/src/core/analyze';
-import { lint } from '../../server/src/rules/index';
-import { analyzeIncremental, type IncrementalState } from '../../server/src/lsp/incremental';
+import { checkScript, type CheckCache } from '../../server/src/check/checkScript';
 import { words } from '../helpers/data';
 import { benchScript, bigScript, SENTENCES } from './bigScript';
+
+// The server's path: checkScript with the document's cache (no config files on this file system).
+const noFiles = { readFile: (p: string): string => { throw new Error(`no file ${p}`); }, exists: () => false };
+const check = (text: string, cache: CheckCache | undefined) => checkScript({ text, path: '/w/a.rungs', fs: noFiles, data: words, cache });
 
 const strip = (a: AnalyzeOutput) => JSON.stringify({ ...a, pronouncer: undefined, itemCache: undefined });
 
@@ -18,8 +21,7 @@ describe('incremental re-analysis', () => {
   it('equals analyze() after each of 60 random edits', () => {
     const rand = rng(42);
     let lines = bigScript(120, 20).split('\n');
-    let cache: IncrementalState | undefined;
-    let reuse: AnalyzeOutput['pronouncer'] | undefined;
+    let cache: CheckCache | undefined;
     const edits = [
       (i: number) => (lines[i] = `${lines[i]} again`),
       (i: number) => lines.splice(i, 0, SENTENCES[Math.floor(rand() * SENTENCES.length)]),
@@ -33,10 +35,9 @@ describe('incremental re-analysis', () => {
     for (let step = 0; step < 60; step++) {
       edits[Math.floor(rand() * edits.length)](Math.floor(rand() * lines.length));
       const text = lines.join('\n');
-      const inc = analyzeIncremental({ text, data: words, reuse }, cache);
+      const inc = check(text, cache);
       cache = inc.cache;
-      reuse = inc.output.pronouncer;
-      expect(strip(inc.output)).toBe(strip(analyze({ text, data: words })));
+      expect(strip(inc.analysis)).toBe(strip(analyze({ text, data: words })));
     }
   });
 
@@ -44,8 +45,7 @@ describe('incremental re-analysis', () => {
   it('a one-character edit of a 10,000-item script re-analyses to the same result', async () => {
     const text = await benchScript(10_000);
     let t = performance.now();
-    const cold = analyzeIncremental({ text, data: words }, undefined);
-    lint(cold.output, text);
+    const cold = check(text, undefined);
     const coldMs = performance.now() - t;
     const at = text.indexOf('the bread');
     const times: number[] = [];
@@ -53,19 +53,18 @@ describe('incremental re-analysis', () => {
     for (let i = 0; i < 5; i++) {
       const edited = `${text.slice(0, at)}the${'!'.repeat(i + 1)}${text.slice(at + 3)}`;
       t = performance.now();
-      state = analyzeIncremental({ text: edited, data: words, reuse: state.output.pronouncer }, state.cache);
-      lint(state.output, edited);
+      state = check(edited, state.cache);
       times.push(performance.now() - t);
     }
     t = performance.now();
-    analyze({ text, data: words, reuse: state.output.pronouncer });
+    analyze({ text, data: words, reuse: state.cache.pronouncer });
     const fullMs = performance.now() - t;
     const median = [...times].sort((a, b) => a - b)[2];
     console.log(
       `10,000 items: cold analysis + lint ${coldMs.toFixed(0)} ms; after a one-character edit ${median.toFixed(0)} ms ` +
         `(median of 5; analyze() with a warm pronouncer alone: ${fullMs.toFixed(0)} ms)`,
     );
-    expect(state.output.items.length).toBe(10_000);
-    expect(strip(state.output)).toBe(strip(analyze({ text: `${text.slice(0, at)}the${'!'.repeat(5)}${text.slice(at + 3)}`, data: words })));
+    expect(state.analysis.items.length).toBe(10_000);
+    expect(strip(state.analysis)).toBe(strip(analyze({ text: `${text.slice(0, at)}the${'!'.repeat(5)}${text.slice(at + 3)}`, data: words })));
   });
 });

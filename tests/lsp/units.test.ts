@@ -8,7 +8,8 @@ import { renderLadderBody } from '../../client/src/ladderHtml';
 import { describeItem } from '../../client/src/present';
 import type { Ladder } from '../../client/src/protocol';
 import type { Problem } from '../../server/src/core/types';
-import { codeActions, compatibleFixes, FIX_ALL_KIND } from '../../server/src/lsp/codeActions';
+import { codeActions, FIX_ALL_KIND } from '../../server/src/lsp/codeActions';
+import { batchEdits } from '../../server/src/rules/fixes';
 import { AnalysisStore } from '../../server/src/lsp/documents';
 import { fileWatchers } from '../../server/src/lsp/watch';
 import { normalizeSettings } from '../../server/src/lsp/settings';
@@ -31,8 +32,8 @@ describe('fix-all leaves out fixes marked batch: false', () => {
     context: { diagnostics: [], ...(only ? { only } : {}) },
   });
 
-  it('compatibleFixes (also the CLI --fix path) skips it', () => {
-    expect(compatibleFixes(problems).map((e) => e.newText)).toEqual(['Hi']);
+  it('batchEdits (the fix-all and the CLI --fix path) skips it', () => {
+    expect(batchEdits(text, problems).map((e) => e.newText)).toEqual(['Hi']);
   });
 
   it('source.fixAll.rungs applies only the batchable fix', () => {

@@ -6,6 +6,7 @@ import jStat from 'jstat';
 import { describe, expect, it } from 'vitest';
 import { defaultOptions, applySettings } from '../../server/src/core/options';
 import { parseScript } from '../../server/src/core/parse';
+import { renderFindings } from '../../server/src/rules/index';
 import { readProgress, scriptFacts, type ProgressResult, type ScriptLookup } from '../../server/src/core/records';
 import { tokenize } from '../../server/src/core/tokenize';
 import { words } from '../helpers/data';
@@ -103,7 +104,7 @@ describe('the benefit mark is compared exactly', () => {
     const lines = [HEAD, '2026-03-02,C-0417,,,unassisted,10,10,,', '2026-03-02,C-0417,s.rungs,Short,paced,23,20,,'];
     expect(run(lines).records[1].benefit).toBe(false);
     const o = applySettings(defaultOptions(), parseScript('@benefit-mark 1.15\n').header, 'script');
-    expect(o.problems).toEqual([]);
+    expect(renderFindings(o.findings)).toEqual([]);
     expect(run(lines, { options: o.options.records }).records[1].benefit).toBe(true);
   });
 });
@@ -265,8 +266,8 @@ describe('trends', () => {
   });
 
   it('rejects unreadable settings with a message', () => {
-    const p = applySettings(defaultOptions(), parseScript('@benefit-mark lots\n@accuracy-floor 120%\n').header, 'script').problems;
-    expect(p.map((x) => x.message)).toEqual([
+    const p = applySettings(defaultOptions(), parseScript('@benefit-mark lots\n@accuracy-floor 120%\n').header, 'script').findings;
+    expect(renderFindings(p).map((x) => x.message)).toEqual([
       '@benefit-mark must be a number above 0, e.g. 1.2, not "lots"',
       '@accuracy-floor is a fraction 0-1 or a percentage, e.g. 0.8 or 80%, not "120%"',
     ]);

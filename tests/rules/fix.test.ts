@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { splitLines } from '../../server/src/core/parse';
 import type { Problem, TextEdit } from '../../server/src/core/types';
 import { applyFixes, batchFixes } from '../../server/src/rules/fixes';
-import { fixtureNames, lintText, readFixture } from './check';
+import { fixtureNames, lintText, readFixture, SEVERAL_FIXES } from './check';
 
 const demo = readFileSync(join(__dirname, '..', '..', 'sample-scripts', 'family-visits-draft.rungs'), 'utf8');
 const sources: [string, string][] = [['family-visits-draft.rungs', demo], ...fixtureNames().map((n): [string, string] => [n, readFixture(n)])];
@@ -90,22 +90,7 @@ describe('every fix', () => {
 describe('several fixes at once, as --fix gathers them', () => {
   // unknown-key, bad-directive and unsorted-rung fixes in one file, next to a duplicate item and an
   // estimated word whose fixes are quick fixes only (batch: false).
-  const TEXT = [
-    '// rungs: allow-file thin-rung, step-too-big, uneven-steps',
-    '// rungs: allow-file item-outlyer',
-    '@title Several fixes',
-    '@pacse 1, 1.5 wps',
-    '',
-    '== Mixed',
-    'Would anyone like a cup of coffee?',
-    'Tea?',
-    'Come in.',
-    '',
-    '== Later',
-    'Come in.',
-    'Teodric is here.',
-    '',
-  ].join('\n');
+  const TEXT = SEVERAL_FIXES;
   const problems = lintText(TEXT);
   const fixes = batchFixes(problems);
 

@@ -94,6 +94,14 @@ describe('rungs score, other formats and errors', () => {
     expect(rows[1]).toContain('"Pass the bread, please."');
   });
 
+  it('CSV cells that a spreadsheet would run as a formula are escaped', async () => {
+    // OWASP "CSV Injection": cells starting with = + - @ are formulas in spreadsheets (common practice).
+    const r = await run(['score', '--format', 'csv', 'a.rungs'], { '/w/a.rungs': '+1 for tea.\n=SUM(2, 3) cups.\n' });
+    const rows = r.out.trim().split('\n');
+    expect(rows[1]).toContain(",'+1 for tea.,");
+    expect(rows[2]).toContain(`,"'=SUM(2, 3) cups.",`);
+  });
+
   it('the table has rung headers, aligned rows and the caution', async () => {
     const r = await run(['score', 'a.rungs'], { '/w/a.rungs': '== One\nThank you.\nGood morning.\n' });
     expect(r.out).toContain('== One (line 1): 2 items');

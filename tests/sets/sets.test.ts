@@ -11,6 +11,7 @@ import { balanceRows } from '../../server/src/core/setTable';
 import { hedgesG, summarize, welch } from '../../server/src/core/stats';
 import { MemFs } from '../cli/memfs';
 import { analyzeText } from '../helpers/data';
+import { renderFindings } from '../../server/src/rules/index';
 
 const root = join(__dirname, '..', '..');
 const kitchen = readFileSync(join(root, 'sample-scripts', 'kitchen-sets.rungs'), 'utf8');
@@ -81,7 +82,7 @@ describe('set settings', () => {
 
   it('reports unreadable values at their line and column', () => {
     const a = analyzeText('@set-bound wide\n@set-min-items 1\n@set-scope item\nTea.\n');
-    expect(a.problems.map((p) => `${p.rule} ${p.line}:${p.character}`)).toEqual(['bad-value 0:11', 'bad-value 1:15', 'bad-value 2:11']);
+    expect(renderFindings(a.findings).map((p) => `${p.rule} ${p.line}:${p.character}`)).toEqual(['bad-value 0:11', 'bad-value 1:15', 'bad-value 2:11']);
   });
 });
 

@@ -1,6 +1,8 @@
 // Formatters for `rungs score`: one result type in, one string out (table, CSV, JSON).
+import { isEstimated } from '../core/pronounce';
 import type { Analysis, ItemAnalysis, Pace, Problem } from '../core/types';
-import { formatNumber } from '../core/pace';
+import { stringify } from 'csv-stringify/sync';
+import { baselineRatio, fasterThanReadingWords, formatNumber } from '../core/pace';
 import { CAUTION } from '../core/caution';
 import { describeLengths, sessionLengths } from '../core/timing';
 import { jsonPieces } from './jsonStream';
@@ -59,8 +61,8 @@ export function scoreJson(s: ScoredFile): unknown {
 function paceFacts(a: Analysis, p: Pace): { baselineRatio: number | null; aboveReadingNorm: boolean | null } {
   if (p.unit !== 'wps') return { baselineRatio: null, aboveReadingNorm: null };
   return {
-    baselineRatio: a.options.baseline ? round(p.value / a.options.baseline, 3) : null,
-    aboveReadingNorm: p.value > a.options.readingNormWps,
+    baselineRatio: a.options.baseline ? round(baselineRatio(p.value, a.options.baseline)!, 3) : null,
+    aboveReadingNorm: fasterThanReadingWords(p.value, a.options.readingNormWps),
   };
 }
 
@@ -92,7 +94,7 @@ function itemJson(it: ItemAnalysis): unknown {
     durations: Object.fromEntries(it.timings.map((t) => [t.pace.label, round(t.seconds, 3)])),
     syllableRates: Object.fromEntries(it.timings.map((t) => [t.pace.label, round(t.syllableRate, 3)])),
     estimates: it.words
-      .filter((w) => w.source === 'estimate' || w.source === 'morphology')
+      .filter((w) => isEstimated(w))
       .map((w) => ({ word: w.spoken, phones: w.phones.join(' '), source: w.source })),
   };
 }
@@ -116,35 +118,23 @@ export function* formatJsonPieces(files: ScoredFile[]): Generator<string> {
   yield '\n';
 }
 
-/**
- * A cell a spreadsheet will not run: text starting with =, +, -, @, a tab or a CR is a formula to
- * Excel, LibreOffice and Google Sheets, so it gets a leading apostrophe (OWASP, "CSV Injection").
- * Numbers are written as they are.
- */
-function csvCell(v: string | number | null): string {
-  const s = v === null ? '' : typeof v === 'string' && /^[=+\-@\t\r]/.test(v) ? `'${v}` : String(v);
-  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-}
-
 /** One row per item; duration columns are the union of the paces in the files, in first-seen order. */
 export function formatCsv(files: ScoredFile[]): string {
   const paceLabels: string[] = [];
   for (const f of files) for (const r of f.analysis.rungs) for (const p of r.paces) if (!paceLabels.includes(p.label)) paceLabels.push(p.label);
   const head = ['file', 'rung', 'line', 'id', 'sets', 'text', 'words', 'syllables', 'phonemes', 'wcm', 'zipf_mean', 'zipf_min', 'low_frequency_words', 'estimated_words', 'difficulty', 'rank', ...paceLabels.map((l) => `seconds_at_${l.replace(' ', '_')}`)];
-  const rows = [head.join(',')];
+  const rows: (string | number | null)[][] = [head];
   for (const f of files) {
     for (const r of f.analysis.rungs) {
       for (const it of r.items) {
         const byLabel = new Map(it.timings.map((t) => [t.pace.label, round(t.seconds, 3)]));
-        rows.push(
-          [f.file, r.node.name, it.node.line + 1, it.node.id, it.sets.join(' '), it.node.text, it.wordCount, it.syllables, it.phonemes, it.wcm, round(it.zipfMean, 4), round(it.zipfMin, 4), it.lowFrequencyWords, it.estimatedWords, it.difficulty, it.rank, ...paceLabels.map((l) => byLabel.get(l) ?? null)]
-            .map(csvCell)
-            .join(','),
-        );
+        rows.push([f.file, r.node.name, it.node.line + 1, it.node.id, it.sets.join(' '), it.node.text, it.wordCount, it.syllables, it.phonemes, it.wcm, round(it.zipfMean, 4), round(it.zipfMin, 4), it.lowFrequencyWords, it.estimatedWords, it.difficulty, it.rank, ...paceLabels.map((l) => byLabel.get(l) ?? null)]);
       }
     }
   }
-  return `${rows.join('\n')}\n`;
+  // csv-stringify quotes as RFC 4180 asks, and escape_formulas puts a ' before a text cell that
+  // starts with =, +, -, @ (an item may), so a spreadsheet shows it instead of running it.
+  return stringify(rows, { escape_formulas: true, record_delimiter: 'unix' });
 }
 
 function pad(s: string, width: number, right = false): string {
@@ -185,13 +175,13 @@ export function formatTable(files: ScoredFile[], caution: string): string {
       if (r.items.length) out.push(`     session with ${a.options.timing.gap} s gaps: ${describeLengths(session.rungs[r.index].paces)}`);
       out.push(`    ${cols.map((c, i) => pad(c, widths[i], true)).join('  ')}  text`);
       r.items.forEach((it, k) => {
-        const est = it.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => w.spoken);
+        const est = it.words.filter((w) => isEstimated(w)).map((w) => w.spoken);
         const mark = est.length ? `   [estimated: ${terminalSafe([...new Set(est)].join(', '))}]` : '';
         out.push(`    ${rows[k].map((c, i) => pad(c, widths[i], true)).join('  ')}  ${terminalSafe(it.node.text)}${mark}`);
       });
     }
     if (a.items.length) out.push('', `  whole script with ${a.options.timing.gap} s gaps: ${describeLengths(session.script)}`);
-    const fast = a.options.paces.filter((p) => p.unit === 'wps' && p.value > a.options.readingNormWps);
+    const fast = a.options.paces.filter((p) => p.unit === 'wps' && fasterThanReadingWords(p.value, a.options.readingNormWps));
     if (fast.length) out.push('', `  note: ${fast.map((p) => p.label).join(', ')} is faster than adult reading aloud (${formatNumber(a.options.readingNormWps)} wps, Brysbaert 2019)`);
     if (f.problems.length) {
       out.push('', `  ${f.problems.length} problem${f.problems.length === 1 ? '' : 's'}:`);

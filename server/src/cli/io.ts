@@ -1,21 +1,8 @@
 // What the CLI may touch, passed in so tests can run commands in-process on a fake file system.
-export interface CliFs {
-  readFile(path: string): string;
-  writeFile(path: string, text: string): void;
-  isDirectory(path: string): boolean;
-  exists(path: string): boolean;
-  readdir(path: string): string[];
-  /** False for pipes, devices and sockets, which the folder walk skips (absent: every file is regular). */
-  isFile?(path: string): boolean;
-  /** The path with links resolved, so a walk visits each folder and file once (absent: the path). */
-  realpath?(path: string): string;
-  /** The file's bytes, so `--fix` can keep every byte it does not fix (absent: readFile's text). */
-  readBytes?(path: string): Uint8Array;
-  /** Whole lines from the start of a file over the size bound, up to the bound (absent: refused). */
-  readPrefix?(path: string): string;
-  /** Replaces the file's content atomically, keeping its mode (absent: writeFile). */
-  writeBytes?(path: string, bytes: Uint8Array): void;
-}
+import type { NodeFs } from '../node/nodeFs';
+
+/** The file system the CLI may touch (node/nodeFs.ts is the real one). */
+export type CliFs = NodeFs;
 
 export interface CliIO {
   argv: string[];

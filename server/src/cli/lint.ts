@@ -1,32 +1,28 @@
 // `rungs lint PATH|GLOB|- ...`: checks scripts against every rule, for people and for CI.
 // Exit codes: 0 clean, 1 an error-level problem or more warnings than --max-warnings, 2 a usage
 // error or an unreadable file (every other file is still linted and reported).
-import { join, relative, sep } from 'node:path';
-import { analyze, type AnalyzeOutput } from '../core/analyze';
-import type { Problem, WordData } from '../core/types';
-import { resolveScriptContext, type ScriptContext } from '../config/resolve';
+import { relative, sep } from 'node:path';
+import { checkAndFix, checkScript, mergeFileProblems, type CheckCache, type FileProblem } from '../check/checkScript';
 import { loadWordTable } from '../data/wordTable';
-import { RULES, compareProblems, lint } from '../rules/index';
-import { applyFixes, batchFixes } from '../rules/fixes';
+import { RULES } from '../rules/index';
+import { VERSION } from '../version';
 import { parseArgs } from './args';
 import { excerpt } from '../core/excerpt';
 import { expandPaths } from './files';
 import { readScript } from './readScript';
-import { readForFix, writeFixed, type FixSource } from './writeFixes';
+import { writeFixed } from './writeFixes';
 import { unifiedDiff } from './formats/diff';
 import { formatGithub } from './formats/github';
 import { formatLintJson } from './formats/json';
 import { formatSarif } from './formats/sarif';
-import { formatText } from './formats/text';
+import { formatLintText } from './formats/text';
 import type { LintFileResult, LintRun } from './formats/types';
 import { EXIT_OK, EXIT_PROBLEMS, EXIT_USAGE, UsageError, type CliIO } from './io';
-import { VERSION, type Command } from './main';
+import type { Command } from './main';
 
 export const FORMATS = ['text', 'json', 'sarif', 'github'] as const;
 /** Runs of at least this many files show a progress counter (on a terminal, outside CI). */
 export const PROGRESS_MIN_FILES = 10;
-/** Fixes can enable others (a sorted rung after a removed duplicate): re-lint up to this often. */
-const FIX_PASSES = 5;
 
 const USAGE = [
   'Usage: rungs lint PATH|GLOB|- ... [--format text|json|sarif|github] [--max-warnings N]',
@@ -43,40 +39,12 @@ const USAGE = [
   '  Exit codes: 0 clean, 1 errors (or too many warnings), 2 usage error, unreadable or unwritable file.',
 ].join('\n');
 
-interface Checked {
-  problems: Problem[];
-  text: string;
-}
-
 /**
  * Word scores of the last script checked: the next script reuses them when its pronunciation
  * settings and overrides are the same (the core checks), so a library of scripts scores each
- * spelling once instead of once per file.
+ * spelling once instead of once per file. Only the word scores: items are never shared by files.
  */
-let last: { data: WordData; pronouncer: AnalyzeOutput['pronouncer'] } | undefined;
-
-function check(text: string, data: WordData, ctx: ScriptContext): Checked {
-  const reuse = last?.data === data ? last.pronouncer : undefined;
-  const analysis = analyze({ text, data, options: ctx.options, lexicon: ctx.lexicon, reuse });
-  last = { data, pronouncer: analysis.pronouncer };
-  return { problems: lint(analysis, text, ctx.lint), text };
-}
-
-/**
- * Applies batch fixes until none is left (or FIX_PASSES runs), re-linting between passes. Fixes a
- * person must choose one by one (`batch: false`) are left for the editor's quick fixes.
- */
-function fixAll(first: Checked, data: WordData, ctx: ScriptContext): Checked {
-  let cur = first;
-  for (let pass = 0; pass < FIX_PASSES; pass++) {
-    const fixes = batchFixes(cur.problems);
-    if (!fixes.length) break;
-    const { text } = applyFixes(cur.text, fixes);
-    if (text === cur.text) break;
-    cur = check(text, data, ctx);
-  }
-  return cur;
-}
+let lastPronouncer: CheckCache['pronouncer'];
 
 const shown = (cwd: string, file: string) => (file === '-' ? '<stdin>' : relative(cwd, file).split(sep).join('/') || file);
 
@@ -125,54 +93,41 @@ export const lintCommand: Command = {
     const progress = Boolean(io.isTTY) && !env.CI && !quiet && files.length >= PROGRESS_MIN_FILES;
     const data = loadWordTable();
     const results: LintFileResult[] = [];
-    const configProblems = new Map<string, Map<string, Problem>>();
+    const fileProblems: FileProblem[][] = [];
     const diffs: string[] = [];
     files.forEach((file, n) => {
       if (progress) io.stderr(`\rrungs lint: ${n + 1}/${files.length} files`);
       const name = shown(io.cwd, file);
-      let text: string;
-      let source: FixSource | null = null;
-      try {
-        if (file !== '-' && (fix || dryRun)) source = readForFix(io.fs, file);
-        const read = source ?? readScript(io, file);
-        text = read.text;
-        if ('cut' in read && read.cut) {
-          io.stderr(`${progress ? '\r\u001b[K' : ''}rungs lint: ${name}:1:1: ${read.cut}\n`);
-          code = EXIT_USAGE;
-        }
-      } catch (err) {
-        io.stderr(`${progress ? '\r\u001b[K' : ''}rungs lint: ${name}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
+      const clear = progress ? '\r\u001b[K' : '';
+      const read = readScript(io, file, name, 'lint', fix || dryRun);
+      if ('error' in read) {
+        io.stderr(`${clear}${read.error}\n`);
         code = EXIT_USAGE;
         return;
       }
-      const ctx = resolveScriptContext(file === '-' ? join(io.cwd, 'stdin.rungs') : file, io.fs);
-      for (const { file: cf, problem } of ctx.problems) {
-        const key = shown(io.cwd, cf);
-        const seen = configProblems.get(key) ?? new Map<string, Problem>();
-        seen.set(JSON.stringify(problem), problem);
-        configProblems.set(key, seen);
+      if (read.cut) {
+        io.stderr(`${clear}rungs lint: ${name}:1:1: ${read.cut}\n`);
+        code = EXIT_USAGE;
       }
-      let checked = check(text, data, ctx);
-      if (fix || dryRun) {
-        const fixed = fixAll(checked, data, ctx);
-        let written = true;
-        if (fixed.text !== text) {
-          if (fix && source) {
-            const failed = writeFixed(io.fs, file, source, fixed.text);
-            if (failed) {
-              io.stderr(`${progress ? '\r\u001b[K' : ''}rungs lint: ${name}:1:1: ${failed}\n`);
-              code = EXIT_USAGE;
-              written = false;
-            }
-          } else diffs.push(unifiedDiff(name, text, fixed.text));
-        }
-        // A file left unwritten is reported as it is on disk.
-        if (written) checked = fixed;
+      const input = { text: read.text, path: read.path, fs: io.fs, data, cache: { pronouncer: lastPronouncer } };
+      let checked = fix || dryRun ? checkAndFix(input) : checkScript(input);
+      lastPronouncer = checked.cache.pronouncer;
+      fileProblems.push(checked.fileProblems);
+      if (checked.text !== read.text) {
+        if (fix && read.source) {
+          const failed = writeFixed(io.fs, file, read.source, checked.text);
+          if (failed) {
+            io.stderr(`${clear}rungs lint: ${name}:1:1: ${failed}\n`);
+            code = EXIT_USAGE;
+            // A file left unwritten is reported as it is on disk.
+            checked = checkScript({ ...input, cache: checked.cache });
+          }
+        } else diffs.push(unifiedDiff(name, read.text, checked.text));
       }
       results.push({ file: name, problems: checked.problems });
     });
     if (progress) io.stderr('\r\u001b[K');
-    for (const [file, ps] of configProblems) results.push({ file, problems: [...ps.values()].sort(compareProblems) });
+    for (const [file, ps] of mergeFileProblems(fileProblems)) results.push({ file: shown(io.cwd, file), problems: ps });
     // Count before --quiet hides warnings, so --quiet changes the output, never the exit code.
     const all = results.flatMap((r) => r.problems);
     const errors = all.filter((p) => p.severity === 'error').length;
@@ -185,7 +140,7 @@ export const lintCommand: Command = {
     else if (format === 'json') io.stdout(formatLintJson(run));
     else if (format === 'sarif') io.stdout(formatSarif(run, RULES));
     else if (format === 'github') io.stdout(formatGithub(run));
-    else io.stdout(formatText(run, colour));
+    else io.stdout(formatLintText(run, colour));
 
     if (warnings > maxWarnings) io.stderr(`rungs lint: ${warnings} warnings, more than --max-warnings ${maxWarnings}\n`);
     if (code === EXIT_OK && (errors > 0 || warnings > maxWarnings)) code = EXIT_PROBLEMS;

@@ -10,6 +10,7 @@ import { progressCommand } from './progress';
 import { cuesCommand } from './cues';
 import { audioCommand } from './audio';
 import { practiceCommand } from './practice';
+import { VERSION } from '../version';
 
 export interface Command {
   name: string;
@@ -18,7 +19,7 @@ export interface Command {
   run(io: CliIO, args: string[]): number | null | Promise<number | null>;
 }
 
-export const VERSION = '0.1.0';
+export { VERSION } from '../version';
 
 export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, practiceCommand, lspCommand];
 

@@ -1,27 +1,8 @@
-// The real file system and streams behind CliIO.
-import * as fs from 'node:fs';
-import { writeFileAtomic } from '../node/atomicWrite';
-import { isRegularFile, readBytesBounded, readStdinBounded, readTextBounded, readTextPrefix, realPath } from '../node/boundedRead';
-import type { CliFs, CliIO } from './io';
+// The real file system (node/nodeFs.ts, shared with the language server) and streams behind CliIO.
+import { nodeFs, readStdin } from '../node/nodeFs';
+import type { CliIO } from './io';
 
-export const nodeFs: CliFs = {
-  readFile: (p) => readTextBounded(p),
-  writeFile: (p, text) => fs.writeFileSync(p, text),
-  isDirectory: (p) => {
-    try {
-      return fs.statSync(p).isDirectory();
-    } catch {
-      return false;
-    }
-  },
-  exists: (p) => fs.existsSync(p),
-  readdir: (p) => fs.readdirSync(p),
-  isFile: isRegularFile,
-  realpath: realPath,
-  readBytes: (p) => readBytesBounded(p),
-  readPrefix: (p) => readTextPrefix(p),
-  writeBytes: writeFileAtomic,
-};
+export { nodeFs };
 
 /**
  * Writes to standard output, which a reader may close early (`rungs lint | head -c 200`). The
@@ -55,7 +36,7 @@ export function nodeIo(argv: string[]): CliIO {
     fs: nodeFs,
     stdout: stdoutWriter(),
     stderr: (t) => process.stderr.write(t),
-    readStdin: () => readStdinBounded(),
+    readStdin,
     isTTY: Boolean(process.stdout.isTTY),
     env: process.env,
   };

@@ -1,11 +1,9 @@
 // Reads and analyses the scripts named on a command line (files, folders, "-"), reporting what
 // cannot be read; shared by the commands that work on analysed scripts.
-import { basename, join, relative } from 'node:path';
-import { analyze } from '../core/analyze';
-import type { Analysis, SetScope } from '../core/types';
-import { resolveScriptContext } from '../config/resolve';
+import { basename, relative } from 'node:path';
+import { checkScript } from '../check/checkScript';
+import type { Analysis, Problem, SetScope } from '../core/types';
 import { loadWordTable } from '../data/wordTable';
-import { lint } from '../rules/index';
 import { expandPaths } from './files';
 import { EXIT_OK, EXIT_USAGE, type CliIO } from './io';
 import { readScript } from './readScript';
@@ -15,7 +13,7 @@ export interface LoadedScript {
   shown: string;
   text: string;
   analysis: Analysis;
-  problems: ReturnType<typeof lint>;
+  problems: Problem[];
 }
 
 /** Every script named on the command line, analysed and linted; `scope` overrides @set-scope. */
@@ -39,23 +37,24 @@ export function loadScripts(
   const scripts: LoadedScript[] = [];
   for (const file of files) {
     const shown = file === '-' ? '<stdin>' : relative(io.cwd, file) || basename(file);
-    let text: string;
-    try {
-      const read = readScript(io, file);
-      text = read.text;
-      if (read.cut) {
-        io.stderr(`rungs ${command}: ${shown}:1:1: ${read.cut}\n`);
-        code = EXIT_USAGE;
-      }
-    } catch (err) {
-      io.stderr(`rungs ${command}: ${shown}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
+    const read = readScript(io, file, shown, command);
+    if ('error' in read) {
+      io.stderr(`${read.error}\n`);
       code = EXIT_USAGE;
       continue;
     }
-    const ctx = resolveScriptContext(file === '-' ? join(io.cwd, 'stdin.rungs') : file, io.fs);
-    const options = scope ? { ...ctx.options, setScope: scope } : ctx.options;
-    const analysis = analyze({ text, data, options, lexicon: ctx.lexicon });
-    scripts.push({ file, shown, text, analysis, problems: lint(analysis, text, ctx.lint) });
+    if (read.cut) {
+      io.stderr(`rungs ${command}: ${shown}:1:1: ${read.cut}\n`);
+      code = EXIT_USAGE;
+    }
+    const checked = checkScript({
+      text: read.text,
+      path: read.path,
+      fs: io.fs,
+      data,
+      ...(scope ? { adjust: (o) => ({ ...o, setScope: scope }) } : {}),
+    });
+    scripts.push({ file, shown, text: read.text, analysis: checked.analysis, problems: checked.problems });
   }
   return { scripts, code };
 }

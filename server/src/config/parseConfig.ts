@@ -5,8 +5,10 @@
 // out: in YAML, the top-level entry a syntax error falls in; in JSON, the whole file.
 import { dirname, isAbsolute, join } from 'node:path';
 import { isCollection, isMap, isScalar, LineCounter, parseDocument, visit, type Document, type Node as YamlNode } from 'yaml';
-import { editDistance, KEYS, keySpec } from '../core/options';
-import type { Problem, Range, Setting } from '../core/types';
+import { finding, type Finding } from '../core/findings';
+import { nearestName } from '../core/nearest';
+import { SETTINGS, settingSpec, settingText } from '../core/settings';
+import type { Range, Setting } from '../core/types';
 import { RULE_IDS } from '../rules/index';
 import { jsonSyntaxError } from './jsonError';
 import { excerpt } from '../core/excerpt';
@@ -17,8 +19,6 @@ export const CONFIG_FILE_NAMES = ['.rungs.json', '.rungs.yaml', '.rungs.yml'];
 
 /** Top-level keys that are not analysis settings. */
 const RESERVED = ['root', 'rules', 'ladder', 'lexicon'];
-/** Settings that only make sense inside one script. */
-const SCRIPT_ONLY = new Set(['title', 'say', 'set']);
 const SEVERITIES = ['error', 'warning', 'info', 'hint', 'off'];
 /** Largest ladder maxStep: in any metric's units (syllables, points), more than any real step. */
 const LADDER_MAX_STEP = 10_000;
@@ -32,7 +32,8 @@ export interface ConfigLayer {
   rules: SeverityOverrides;
   ladder: LadderSettings;
   lexicon: { name: string; path: string; range: Range }[];
-  problems: Problem[];
+  /** What could not be read, in domain terms (the rules word them). */
+  findings: Finding[];
 }
 
 /** A key and value with where they were written (0-based); zero ranges for plain objects. */
@@ -48,16 +49,6 @@ interface Entry {
 const shown = (v: unknown): string => excerpt(JSON.stringify(v) ?? String(v));
 
 const NOWHERE: Range = { line: 0, character: 0, endLine: 0, endCharacter: 0 };
-
-function nearestOf(name: string, candidates: string[]): string | null {
-  let best: string | null = null;
-  let bestD = Infinity;
-  for (const c of candidates) {
-    const d = editDistance(name.toLowerCase(), c);
-    if (d < bestD) [best, bestD] = [c, d];
-  }
-  return best !== null && bestD <= Math.max(2, Math.floor(name.length / 3)) ? best : null;
-}
 
 function fromYaml(node: unknown, text: string, lc: LineCounter): Entry[] | null {
   if (!isMap(node)) return null;
@@ -98,21 +89,8 @@ function fromObject(value: unknown): Entry[] | null {
   }));
 }
 
-/** A config value as the text a script header would hold: `[1, 1.5]` -> "1, 1.5", yes/no for booleans. */
-function settingText(v: unknown): string | null {
-  if (typeof v === 'string') return v;
-  if (typeof v === 'number') return String(v);
-  if (typeof v === 'boolean') return v ? 'yes' : 'no';
-  if (Array.isArray(v) && v.every((x) => typeof x === 'string' || typeof x === 'number')) return v.join(', ');
-  if (v && typeof v === 'object') {
-    const parts = Object.entries(v as Record<string, unknown>);
-    if (parts.every(([, x]) => typeof x === 'number')) return parts.map(([k, x]) => `${k} ${x}`).join(', ');
-  }
-  return null;
-}
-
-function syntaxProblem(message: string, start: Range, end: Range): Problem {
-  return { rule: 'bad-config', severity: 'error', message: `cannot read the config file: ${message}`, line: start.line, character: start.character, endLine: end.line, endCharacter: end.character };
+function syntaxFinding(explanation: string, start: Range, end: Range): Finding {
+  return finding({ line: start.line, character: start.character, endLine: end.line, endCharacter: end.character }, { kind: 'config-syntax', explanation });
 }
 
 /** 0-based line and character of an offset, counting \n, \r\n and \r as line breaks. */
@@ -185,7 +163,7 @@ export function parseConfigText(text: string, file: string): ConfigLayer {
     if (bad) {
       const at = positionOf(text, bad.offset);
       const end = positionOf(text, Math.min(text.length, bad.offset + 1));
-      return parseConfigObject({}, file, dirname(file), [syntaxProblem(bad.message, at, end.line === at.line ? end : { ...at, character: at.character + 1 })]);
+      return parseConfigObject({}, file, dirname(file), [syntaxFinding(bad.message, at, end.line === at.line ? end : { ...at, character: at.character + 1 })]);
     }
   }
   const lc = new LineCounter();
@@ -198,11 +176,11 @@ export function parseConfigText(text: string, file: string): ConfigLayer {
   };
   const errorAt: number[] = [];
   const errors = [...doc.errors.map((e) => ({ message: e.message, pos: e.pos })), ...duplicateKeys(doc.contents)].sort((x, y) => x.pos[0] - y.pos[0]);
-  const problems: Problem[] = errors.map((e) => {
+  const problems: Finding[] = errors.map((e) => {
     const first = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
     const start = yamlErrorStart(doc, e.pos[0], first);
     errorAt.push(e.pos[0], start);
-    return syntaxProblem(first, at(start), at(start === e.pos[0] ? Math.max(e.pos[1], e.pos[0] + 1) : start + 1));
+    return syntaxFinding(first, at(start), at(start === e.pos[0] ? Math.max(e.pos[1], e.pos[0] + 1) : start + 1));
   });
   const contents = doc.contents;
   if (contents === null || (isScalar(contents) && contents.value === null)) return parseConfigObject({}, file, dirname(file), problems);
@@ -210,7 +188,7 @@ export function parseConfigText(text: string, file: string): ConfigLayer {
   if (!entries) {
     if (problems.length) return parseConfigObject({}, file, dirname(file), problems);
     return parseConfigObject({}, file, dirname(file), [
-      { rule: 'bad-config', severity: 'error', message: 'a config file holds an object of settings, e.g. {"max-step": 12}', line: 0, character: 0, endLine: 0, endCharacter: 1 },
+      finding({ line: 0, character: 0, endLine: 0, endCharacter: 1 }, { kind: 'config-not-object' }),
     ]);
   }
   // After a syntax error the parser still gives a document; each top-level entry spans from the
@@ -229,14 +207,13 @@ export function parseConfigText(text: string, file: string): ConfigLayer {
 }
 
 /** A layer from a plain object (editor settings); positions are line 1, column 1. */
-export function parseConfigObject(value: unknown, name: string, baseDir: string, problems: Problem[] = []): ConfigLayer {
+export function parseConfigObject(value: unknown, name: string, baseDir: string, problems: Finding[] = []): ConfigLayer {
   return interpret(fromObject(value) ?? [], name, baseDir, false, problems);
 }
 
-function interpret(entries: Entry[], file: string, baseDir: string, fromFile: boolean, problems: Problem[]): ConfigLayer {
-  const layer: ConfigLayer = { file, fromFile, root: false, settings: [], rules: {}, ladder: {}, lexicon: [], problems };
-  const bad = (r: Range, message: string, rule = 'bad-config', fix?: Problem['fix']) =>
-    problems.push({ ...r, rule, severity: 'error', message, ...(fix ? { fix } : {}) });
+function interpret(entries: Entry[], file: string, baseDir: string, fromFile: boolean, problems: Finding[]): ConfigLayer {
+  const layer: ConfigLayer = { file, fromFile, root: false, settings: [], rules: {}, ladder: {}, lexicon: [], findings: problems };
+  const bad = (r: Range, expected: string) => problems.push(finding(r, { kind: 'config-entry-shape', expected }));
   for (const e of entries) {
     const key = e.key.toLowerCase();
     if (key === 'root') {
@@ -247,10 +224,9 @@ function interpret(entries: Entry[], file: string, baseDir: string, fromFile: bo
       for (const r of e.children ?? []) {
         const id = r.key.toLowerCase();
         if (!RULE_IDS.includes(id)) {
-          const near = nearestOf(id, RULE_IDS);
-          bad(r.keyRange, `unknown rule "${excerpt(r.key)}"${near ? `; did you mean "${near}"?` : ''}`, 'bad-config', near && fromFile ? { title: `Change "${excerpt(r.key)}" to "${near}"`, edits: [{ ...r.keyRange, newText: near }] } : undefined);
+          problems.push(finding(r.keyRange, { kind: 'unknown-rule', name: r.key, nearest: nearestName(id, RULE_IDS), fixable: fromFile }));
         } else if (typeof r.value !== 'string' || !SEVERITIES.includes(r.value.toLowerCase())) {
-          bad(r.valueRange, `the severity of "${id}" is one of ${SEVERITIES.join(', ')}, not ${shown(r.value)}`);
+          problems.push(finding(r.valueRange, { kind: 'bad-severity', ruleId: id, value: r.value, choices: SEVERITIES }));
         } else layer.rules[id] = r.value.toLowerCase() as SeverityOverrides[string];
       }
     } else if (key === 'ladder') {
@@ -269,15 +245,15 @@ function interpret(entries: Entry[], file: string, baseDir: string, fromFile: bo
         continue;
       }
       for (const name of list as string[]) layer.lexicon.push({ name, path: isAbsolute(name) ? name : join(baseDir, name), range: e.valueRange });
-    } else if (keySpec(key)) {
-      const spec = keySpec(key)!;
-      if (SCRIPT_ONLY.has(spec.key)) {
-        bad(e.keyRange, `"${excerpt(e.key)}" belongs in a script, not in a config file${spec.key === 'say' ? ' (put pronunciations in a lexicon file)' : ''}`, 'bad-value');
+    } else if (settingSpec(key)) {
+      const spec = settingSpec(key)!;
+      if (spec.scriptOnly) {
+        problems.push(finding(e.keyRange, { kind: 'script-only-key', key: e.key }));
         continue;
       }
       const value = settingText(e.value);
       if (value === null) {
-        bad(e.valueRange, `cannot read the value of "${excerpt(e.key)}": write it as in a script, e.g. "${spec.example}"`, 'bad-value');
+        problems.push(finding(e.valueRange, { kind: 'unreadable-config-value', key: e.key, example: spec.example }));
         continue;
       }
       const vr = e.valueRange;
@@ -291,8 +267,8 @@ function interpret(entries: Entry[], file: string, baseDir: string, fromFile: bo
         valueEnd: vr.line === e.keyRange.line && vr.endLine === vr.line ? vr.endCharacter : e.keyRange.endCharacter,
       });
     } else {
-      const near = nearestOf(key, [...RESERVED, ...KEYS.filter((k) => !SCRIPT_ONLY.has(k.key)).map((k) => k.key)]);
-      bad(e.keyRange, `unknown key "${excerpt(e.key)}"${near ? `; did you mean "${near}"?` : ''}`, 'unknown-key', near && fromFile ? { title: `Change "${excerpt(e.key)}" to "${near}"`, edits: [{ ...e.keyRange, newText: near }] } : undefined);
+      const near = nearestName(key, [...RESERVED, ...SETTINGS.filter((k) => !k.scriptOnly).map((k) => k.key)]);
+      problems.push(finding(e.keyRange, { kind: 'unknown-setting', key: e.key, nearest: near, where: 'config', fixable: fromFile }));
     }
   }
   return layer;

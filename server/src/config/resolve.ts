@@ -7,10 +7,10 @@
 // JSON or YAML, never code. Settings keys and values are read by the same table as script headers
 // (core/options.ts), so a value means the same thing in both places.
 import { dirname, isAbsolute, join, relative, resolve } from 'node:path';
-import { excerpt } from '../core/excerpt';
 import { applySettings, defaultOptions } from '../core/options';
 import { parseLexicon } from '../core/parse';
-import type { AnalysisOptions, Override, Problem } from '../core/types';
+import { finding, type Finding } from '../core/findings';
+import type { AnalysisOptions, Override } from '../core/types';
 import type { LadderSettings, LintSettings, SeverityOverrides } from '../rules/types';
 import { parseConfigText, parseConfigObject, type ConfigLayer } from './parseConfig';
 
@@ -22,8 +22,8 @@ export interface ScriptContext {
   options: AnalysisOptions;
   lexicon: Override[];
   lint: LintSettings;
-  /** Problems in config or lexicon files, with the file they are in. */
-  problems: { file: string; problem: Problem }[];
+  /** What could not be read in config or lexicon files, with the file it is in (rules word them). */
+  findings: { file: string; finding: Finding }[];
   /** Config files that applied, farthest first (for watching and for `--print-config`). */
   configFiles: string[];
 }
@@ -48,7 +48,7 @@ export interface ResolveOptions {
 // Parsed files are cached by path and kept while their text is unchanged, so a language server
 // re-resolving on every keystroke re-reads but does not re-parse.
 const layerCache = new Map<string, { text: string; layer: ConfigLayer }>();
-const lexiconCache = new Map<string, { text: string; overrides: Override[]; problems: Problem[] }>();
+const lexiconCache = new Map<string, { text: string; overrides: Override[]; findings: Finding[] }>();
 
 /** Forgets cached config and lexicon files (the server calls this when watched files change). */
 export function clearConfigCache(): void {
@@ -61,7 +61,7 @@ function readLayer(file: string, fs: ConfigFs): ConfigLayer | { file: string; er
   try {
     text = fs.readFile(file);
   } catch (err) {
-    return { file, error: `cannot read the config file (${(err as NodeJS.ErrnoException).code ?? String(err)})` };
+    return { file, error: (err as NodeJS.ErrnoException).code ?? String(err) };
   }
   const hit = layerCache.get(file);
   if (hit && hit.text === text) return hit.layer;
@@ -85,7 +85,7 @@ export function findConfigFiles(scriptPath: string, fs: ConfigFs): ConfigLayer[]
     if (name) {
       const layer = readLayer(join(dir, name), fs);
       if ('error' in layer) {
-        found.push(parseConfigObject({}, layer.file, dirname(layer.file), [badConfigProblem(layer.error)]));
+        found.push(parseConfigObject({}, layer.file, dirname(layer.file), [finding(FILE_START, { kind: 'config-unreadable', code: layer.error })]));
       } else {
         found.push(layer);
         if (layer.root) break;
@@ -98,11 +98,9 @@ export function findConfigFiles(scriptPath: string, fs: ConfigFs): ConfigLayer[]
   return found.reverse();
 }
 
-function badConfigProblem(message: string): Problem {
-  return { rule: 'bad-config', severity: 'error', message, line: 0, character: 0, endLine: 0, endCharacter: 1 };
-}
+const FILE_START = { line: 0, character: 0, endLine: 0, endCharacter: 1 };
 
-function readLexicon(file: string, fs: ConfigFs, origin: string): { overrides: Override[]; problems: Problem[] } {
+function readLexicon(file: string, fs: ConfigFs, origin: string): { overrides: Override[]; findings: Finding[] } {
   const text = fs.readFile(file);
   const hit = lexiconCache.get(file);
   if (hit && hit.text === text) return hit;
@@ -127,37 +125,37 @@ export function resolveScriptContext(path: string, fs: ConfigFs, opts: ResolveOp
   const severities: SeverityOverrides = {};
   let ladder: LadderSettings = {};
   const lexicon: Override[] = [];
-  const problems: ScriptContext['problems'] = [];
+  const findings: ScriptContext['findings'] = [];
   for (const layer of layers) {
-    for (const p of layer.problems) problems.push({ file: layer.file, problem: p });
+    for (const f of layer.findings) findings.push({ file: layer.file, finding: f });
     const applied = applySettings(options, layer.settings, 'script');
     options = applied.options;
-    for (const p of applied.problems) problems.push({ file: layer.file, problem: configWording(p) });
+    for (const f of applied.findings) findings.push({ file: layer.file, finding: f });
     Object.assign(severities, layer.rules);
     ladder = { ...ladder, ...layer.ladder };
     const roots = [layer.fromFile ? dirname(layer.file) : opts.editor?.baseDir, opts.editor?.baseDir].filter((r): r is string => Boolean(r));
     for (const entry of layer.lexicon) {
       const refused = lexiconRefusal(entry.path, roots, fs);
       if (refused) {
-        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `lexicon file "${excerpt(entry.name)}" ${refused}` } });
+        findings.push({ file: layer.file, finding: finding(entry.range, { kind: 'lexicon-refused', name: entry.name, reason: refused }) });
         continue;
       }
       if (!fs.exists(entry.path)) {
-        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `lexicon file "${excerpt(entry.name)}" does not exist (looked for ${excerpt(entry.path, 200)})` } });
+        findings.push({ file: layer.file, finding: finding(entry.range, { kind: 'lexicon-missing', name: entry.name, path: entry.path }) });
         continue;
       }
       try {
         const lex = readLexicon(entry.path, fs, entry.name);
         pushAll(lexicon, lex.overrides);
-        for (const p of lex.problems) problems.push({ file: entry.path, problem: p });
+        for (const f of lex.findings) findings.push({ file: entry.path, finding: f });
       } catch (err) {
-        problems.push({ file: layer.file, problem: { ...entry.range, rule: 'bad-config', severity: 'error', message: `cannot read lexicon file "${excerpt(entry.name)}" (${(err as NodeJS.ErrnoException).code ?? String(err)})` } });
+        findings.push({ file: layer.file, finding: finding(entry.range, { kind: 'lexicon-unreadable', name: entry.name, code: (err as NodeJS.ErrnoException).code ?? String(err) }) });
       }
     }
   }
   const lint: LintSettings = { severities };
   if (Object.keys(ladder).length) lint.ladder = ladder;
-  return { options, lexicon, lint, problems, configFiles: layers.filter((l) => l.fromFile).map((l) => l.file) };
+  return { options, lexicon, lint, findings, configFiles: layers.filter((l) => l.fromFile).map((l) => l.file) };
 }
 
 /** True when `path` is `root` or lies below it. */
@@ -177,11 +175,4 @@ function lexiconRefusal(path: string, roots: string[], fs: ConfigFs): string | n
   if (!ok) return 'is outside the folder of the config file that names it (a lexicon must be in that folder or below it)';
   if (fs.exists(path) && fs.isFile && !fs.isFile(path)) return 'is not a regular file';
   return null;
-}
-
-/** Config files name keys without the script's `@`: say so in messages and fixes. */
-function configWording(p: Problem): Problem {
-  const message = p.message.replace(/"@([\w-]+)"/g, '"$1"').replace(/^unknown setting/, 'unknown key');
-  const fix = p.fix && { ...p.fix, title: p.fix.title.replace(/"@([\w-]+)"/g, '"$1"'), edits: p.fix.edits.map((e) => ({ ...e, newText: e.newText.replace(/^@/, '') })) };
-  return fix ? { ...p, message, fix } : { ...p, message };
 }

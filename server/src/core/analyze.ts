@@ -1,8 +1,11 @@
 // The analysis core: text and options in, plain data out. No files, no protocol, no process:
 // the CLI, the language server and the tests all call `analyze` the same way.
+import { isEstimated } from './pronounce';
+import { finding, type Finding } from './findings';
 import { composite, difficultyComponents, median } from './difficulty';
 import { LOW_FREQUENCY_ZIPF } from './frequency';
 import { applySettings, defaultOptions } from './options';
+import { scoringKey } from './settings';
 import { timeAt } from './pace';
 import { parseScript, splitLabels } from './parse';
 import { Pronouncer, type WordScore } from './pronounce';
@@ -14,7 +17,6 @@ import type {
   ItemNode,
   Override,
   Pace,
-  Problem,
   RungAnalysis,
   RungNode,
   WordAnalysis,
@@ -52,8 +54,8 @@ export interface AnalyzeOutput extends Analysis {
 
 export interface CachedItem {
   item: ItemAnalysis;
-  /** Problems found while scoring the item (their line is rewritten on reuse). */
-  problems: Problem[];
+  /** Findings while scoring the item (their line is rewritten on reuse). */
+  findings: Finding[];
 }
 
 export interface ItemCache {
@@ -102,7 +104,7 @@ export function analyzeItem(
   paces: Pace[],
   options: AnalysisOptions,
   pronouncer: Pronouncer,
-  problems: Problem[],
+  findings: Finding[],
 ): ItemAnalysis {
   const tokens = tokenize(node.text, node.textStart);
   const words: WordAnalysis[] = [];
@@ -124,22 +126,14 @@ export function analyzeItem(
       const variant = wi === last ? t.variant : null;
       const s = pronouncer.score(spoken, variant);
       if (s.variantError && variant !== null) {
-        problems.push({
-          rule: 'bad-variant',
-          severity: 'warning',
-          message: `${s.variantError}; the first is used`,
-          line: node.line,
-          character: t.start,
-          endLine: node.line,
-          endCharacter: t.end,
-        });
+        findings.push(finding({ line: node.line, character: t.start, endLine: node.line, endCharacter: t.end }, { kind: 'variant-mark-not-listed', explanation: s.variantError }));
       }
       words.push(new PlacedWord(t.surface, t.start, t.end, spoken, s));
       syllables += s.syllables;
       phonemes += s.phonemes;
       wcm += s.wcm.total;
       addWcmParts(parts, s.wcm.parts);
-      if (s.source === 'estimate' || s.source === 'morphology') estimated++;
+      if (isEstimated(s)) estimated++;
       // A word the script spells out itself (an override, typically a name) and that the
       // subtitle corpus never saw says nothing about how familiar it is to the client, so it is
       // left out of the frequency figures; an item of nothing else keeps it (see below).
@@ -208,14 +202,14 @@ export interface RungContext {
 }
 
 /**
- * One rung: its settings, its items (from the caches when unchanged), ranks and summary. Problems
- * found go to `problems` in the order a reader meets them. The incremental path (segments.ts)
+ * One rung: its settings, its items (from the caches when unchanged), ranks and summary. Findings
+ * go to `findings` in the order a reader meets them. The incremental path (segments.ts)
  * calls this for the rungs an edit touched, so both paths score a rung the same way.
  */
-export function analyzeRung(node: RungNode, index: number, shared: RungContext, problems: Problem[]): RungAnalysis {
+export function analyzeRung(node: RungNode, index: number, shared: RungContext, findings: Finding[]): RungAnalysis {
   const { options, scriptSets, pronouncer, previous, entries } = shared;
   const rungSettings = applySettings(options, node.settings, 'rung');
-  pushAll(problems, rungSettings.problems);
+  pushAll(findings, rungSettings.findings);
   const explicitPaces = node.settings.some((s) => s.key === 'pace' || s.key === 'paces');
   const paces = explicitPaces ? rungSettings.options.paces : options.paces;
   node.paces = explicitPaces ? paces : null;
@@ -225,13 +219,13 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
     const hit = entries.get(itemKey) ?? previous?.get(itemKey);
     if (hit) {
       entries.set(itemKey, hit);
-      for (const p of hit.problems) problems.push({ ...p, line: it.line, endLine: it.line });
+      for (const f of hit.findings) findings.push({ ...f, line: it.line, endLine: it.line });
       return { ...hit.item, node: it, rung: index, rank: 0 };
     }
-    const own: Problem[] = [];
+    const own: Finding[] = [];
     const item = analyzeItem(it, index, paces, options, pronouncer, own);
-    entries.set(itemKey, { item, problems: own });
-    pushAll(problems, own);
+    entries.set(itemKey, { item, findings: own });
+    pushAll(findings, own);
     return item;
   });
   const inherited = node.sets.length ? node.sets : scriptSets;
@@ -252,10 +246,10 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
 
 export function analyze(input: AnalyzeInput): AnalyzeOutput {
   const script = parseScript(input.text);
-  const problems: Problem[] = [...script.problems];
+  const findings: Finding[] = [...script.findings];
   const header = applySettings(input.options ?? defaultOptions(), script.header, 'script');
   const options = header.options;
-  pushAll(problems, header.problems);
+  pushAll(findings, header.findings);
 
   const overrides = [...(input.lexicon ?? []), ...script.overrides];
   const key = pronouncerKey(overrides, options);
@@ -265,21 +259,13 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
     if (o.variant === null) continue;
     const listed = input.data.pronunciations(o.word)?.length ?? 0;
     if (o.variant < 1 || o.variant > listed) {
-      problems.push({
-        rule: 'bad-variant',
-        severity: 'warning',
-        message: listed
-          ? `"${o.word}" has ${listed} listed pronunciation${listed === 1 ? '' : 's'}, not ${o.variant}; the first is used`
-          : `"${o.word}" is not in the dictionary, so there is no listed pronunciation ${o.variant} to choose`,
-        line: o.line,
-        character: o.character,
-        endLine: o.line,
-        endCharacter: o.character + o.word.length,
-      });
+      const at = { line: o.line, character: o.character, endLine: o.line, endCharacter: o.character + o.word.length };
+      findings.push(finding(at, { kind: 'variant-not-listed', word: o.word, listed, variant: o.variant }));
     }
   }
 
-  const context = `${key}|${options.baseline}|${options.readingNormWps}|${JSON.stringify(options.weights)}`;
+  // Every setting the table marks as scoring is in the key, so none can be forgotten here.
+  const context = `${key}|${scoringKey(options)}`;
   const previous =
     input.itemCache && input.itemCache.context === context && pronouncer === input.reuse?.pronouncer
       ? input.itemCache.entries
@@ -291,11 +277,11 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
   const items: ItemAnalysis[] = [];
   const shared: RungContext = { options, scriptSets, pronouncer, previous, entries };
   script.rungs.forEach((node, index) => {
-    const rung = analyzeRung(node, index, shared, problems);
+    const rung = analyzeRung(node, index, shared, findings);
     rungs.push(rung);
     for (const it of rung.items) items.push(it);
   });
 
-  problems.sort((a, b) => a.line - b.line || a.character - b.character);
-  return { script, options, rungs, items, problems, pronouncer: { key, pronouncer }, itemCache: { context, entries } };
+  findings.sort((a, b) => a.line - b.line || a.character - b.character);
+  return { script, options, rungs, items, findings, pronouncer: { key, pronouncer }, itemCache: { context, entries } };
 }

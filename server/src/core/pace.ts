@@ -11,6 +11,33 @@ export const READING_NORM_WPS = 183 / 60;
 /** Fastest pace accepted, per second (words or syllables): no speech model runs faster. */
 export const MAX_PACE = 20;
 
+/** English read text runs near 6.2 syllables/s (Pellegrino, Coupé & Marsico 2011, Language 87(3); from memory). */
+export const READING_NORM_SPS = 6.2;
+
+// The pace facts, defined once for the rules, the score table and the timings. Rates a hair
+// above a limit by floating-point rounding (183/60 vs a written 3.05) do not count as above it.
+const EPS = 1e-9;
+
+/** Whether a word rate is faster than adults read aloud (`normWps`, default Brysbaert's 3.05). */
+export function fasterThanReadingWords(wordsPerSecond: number, normWps: number = READING_NORM_WPS): boolean {
+  return wordsPerSecond > normWps + EPS;
+}
+
+/** Whether a syllable rate is faster than read English (READING_NORM_SPS). */
+export function fasterThanReadingSyllables(syllablesPerSecond: number): boolean {
+  return syllablesPerSecond > READING_NORM_SPS + EPS;
+}
+
+/** A word rate over the client's unassisted rate (1.2 = 20 % faster); null without a baseline. */
+export function baselineRatio(wordsPerSecond: number, baselineWps: number | null): number | null {
+  return baselineWps && baselineWps > 0 ? wordsPerSecond / baselineWps : null;
+}
+
+/** Whether a word rate is slower than the client's unassisted rate. */
+export function belowBaseline(wordsPerSecond: number, baselineWps: number | null): boolean {
+  return Boolean(baselineWps && baselineWps > 0) && wordsPerSecond < baselineWps! - EPS;
+}
+
 const UNIT_WORDS: Record<string, PaceUnit> = {
   wps: 'wps',
   'w/s': 'wps',
@@ -90,7 +117,7 @@ export function timeAt(
     seconds,
     syllableRate,
     wordRate,
-    baselineRatio: baselineWps && baselineWps > 0 ? wordRate / baselineWps : null,
-    aboveReadingNorm: wordRate > readingNormWps + 1e-9,
+    baselineRatio: baselineRatio(wordRate, baselineWps),
+    aboveReadingNorm: fasterThanReadingWords(wordRate, readingNormWps),
   };
 }

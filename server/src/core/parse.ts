@@ -1,25 +1,18 @@
 // The stimulus script format (documented in grammar/README.md). Line-oriented and forgiving:
 // every line is a comment, a setting, a rung header or an item, so a file of bare sentences is a
 // valid script. Parsing never throws; what it cannot read becomes a problem with a position.
-import type {
-  CommentLine,
-  ItemNode,
-  Override,
-  ParsedScript,
-  Problem,
-  RungNode,
-  Setting,
-} from './types';
+import { finding, type Finding } from './findings';
+import { RUNG_KEYS } from './settings';
+import type { CommentLine, ItemNode, Override, ParsedScript, RungNode, Setting } from './types';
 import { validatePhones } from './phones';
 import { pushAll } from './arrays';
-import { excerpt } from './excerpt';
 
 export const COMMENT = '//';
 export const RUNG_MARK = '==';
 export const NOTE_MARK = '|';
 
-/** Keys a rung may carry, inline on its header or on `@` lines before its items. */
-export const RUNG_KEYS = new Set(['pace', 'paces', 'set']);
+// Keys a rung may carry come from the table of settings (scope rung or both).
+export { RUNG_KEYS };
 
 // Applied to a line with its trailing spaces already cut, so no pattern here ends in `\s*$` (a lazy
 // group before `\s*$` re-scans a run of spaces from every position: quadratic in its length). The
@@ -46,16 +39,18 @@ export function lineBreaks(text: string): string[] {
   return out;
 }
 
-function problem(
-  rule: string,
-  message: string,
-  line: number,
-  character: number,
-  endCharacter: number,
-  severity: Problem['severity'] = 'error',
-): Problem {
-  return { rule, severity, message, line, character, endLine: line, endCharacter, };
+/** The text's own line ending (its first line break; "\n" when it has none), for edits that add lines. */
+export function lineEnding(text: string): string {
+  const m = /\r\n|\r|\n/.exec(text);
+  return m ? m[0] : '\n';
 }
+
+/** A setting as written: its key and value with their columns on the line. */
+function setting(key: string, value: string, line: number, keyStart: number, keyEnd: number, valueStart: number): Setting {
+  return { key, value, line, keyStart, keyEnd, valueStart, valueEnd: valueStart + value.length };
+}
+
+const on = (line: number, character: number, endCharacter: number) => ({ line, character, endLine: line, endCharacter });
 
 /** Splits a comma- or space-separated list of labels. */
 export function splitLabels(value: string): string[] {
@@ -71,19 +66,11 @@ export function parseOverride(
   line: number,
   bodyStart: number,
   origin: string,
-  problems: Problem[],
+  findings: Finding[],
 ): Override | null {
   const m = /^(\S+?)\s*(?:=|\s)\s*(.*)$/s.exec(body);
   if (!m || !m[2].trim()) {
-    problems.push(
-      problem(
-        'bad-value',
-        'a pronunciation needs a word and its phones, e.g. "Wojcik = W OY1 CH IH0 K", or a listed variant number, e.g. "record = 2"',
-        line,
-        bodyStart,
-        bodyStart + Math.max(1, body.length),
-      ),
-    );
+    findings.push(finding(on(line, bodyStart, bodyStart + Math.max(1, body.length)), { kind: 'override-without-phones' }));
     return null;
   }
   const word = m[1].toLowerCase().replace(/[’‘ʼ]/g, "'");
@@ -96,9 +83,7 @@ export function parseOverride(
   const bad = validatePhones(phones);
   for (const b of bad) {
     const at = restStart + offsetOfNth(rest, b.index);
-    problems.push(
-      problem('unknown-phone', `"${excerpt(b.phone)}" is not a CMU ARPAbet phone: ${b.reason}`, line, at, at + b.phone.length),
-    );
+    findings.push(finding(on(line, at, at + b.phone.length), { kind: 'phone-not-arpabet', phone: b.phone, reason: b.reason }));
   }
   if (bad.length) return null;
   return { word, phones: phones.map((p) => p.toUpperCase()), variant: null, origin, line, character: bodyStart };
@@ -115,17 +100,17 @@ function offsetOfNth(text: string, n: number): number {
 }
 
 /** Parses a workspace lexicon file: one `word = PHONES` (or `word PHONES`) per line, `//` comments. */
-export function parseLexicon(text: string, origin: string): { overrides: Override[]; problems: Problem[] } {
+export function parseLexicon(text: string, origin: string): { overrides: Override[]; findings: Finding[] } {
   const overrides: Override[] = [];
-  const problems: Problem[] = [];
+  const findings: Finding[] = [];
   splitLines(text).forEach((raw, line) => {
     const start = raw.length - raw.trimStart().length;
     const body = raw.trim();
     if (!body || body.startsWith(COMMENT)) return;
-    const o = parseOverride(body, line, start, origin, problems);
+    const o = parseOverride(body, line, start, origin, findings);
     if (o) overrides.push(o);
   });
-  return { overrides, problems };
+  return { overrides, findings };
 }
 
 /** Where a header's closing `==` (with the spaces around it) starts, or the length when there is none. */
@@ -158,16 +143,7 @@ function parseRungHeader(raw: string, line: number, start: number): RungNode {
     const valueRaw = raw.slice(keyEnd, next);
     const lead = valueRaw.length - valueRaw.replace(/^[\s:]+/, '').length;
     const value = valueRaw.trim().replace(/^:\s*/, '');
-    const valueStart = keyEnd + lead;
-    settings.push({
-      key: a[2].toLowerCase(),
-      value,
-      line,
-      keyStart,
-      keyEnd,
-      valueStart,
-      valueEnd: valueStart + value.length,
-    });
+    settings.push(setting(a[2].toLowerCase(), value, line, keyStart, keyEnd, keyEnd + lead));
   });
   const name = body.slice(0, nameEnd).trim();
   return {
@@ -215,7 +191,7 @@ export function parseScript(text: string): ParsedScript {
   const rungs: RungNode[] = [];
   const comments: CommentLine[] = [];
   const overrides: Override[] = [];
-  const problems: Problem[] = [];
+  const findings: Finding[] = [];
   let current: RungNode | null = null;
 
   const implicitRung = (line: number): RungNode => {
@@ -249,9 +225,7 @@ export function parseScript(text: string): ParsedScript {
     if (raw[start] === '@') {
       const m = SETTING_LINE.exec(raw.slice(start).trimEnd());
       if (!m) {
-        problems.push(
-          problem('bad-value', 'a setting line needs a key after "@", e.g. "@paces 1.5, 2 wps"', line, start, raw.length),
-        );
+        findings.push(finding(on(line, start, raw.length), { kind: 'setting-without-key' }));
         return;
       }
       const key = m[1].toLowerCase();
@@ -259,35 +233,25 @@ export function parseScript(text: string): ParsedScript {
       const keyEnd = start + 1 + m[1].length;
       const value = m[2];
       const valueStart = value ? raw.indexOf(value, keyEnd) : raw.trimEnd().length;
-      const setting: Setting = {
-        key,
-        value,
-        line,
-        keyStart,
-        keyEnd,
-        valueStart,
-        valueEnd: valueStart + value.length,
-      };
+      const written = setting(key, value, line, keyStart, keyEnd, valueStart);
       if (key === 'say') {
-        const o = parseOverride(value, line, valueStart, `line ${line + 1}`, problems);
+        const o = parseOverride(value, line, valueStart, `line ${line + 1}`, findings);
         if (o) overrides.push(o);
         return;
       }
       // Rung keys after a rung header (or after items in it) belong to that rung.
       if (current && !current.implicit && RUNG_KEYS.has(key)) {
-        current.settings.push(setting);
+        current.settings.push(written);
         current.endLine = line;
       } else {
-        header.push(setting);
+        header.push(written);
       }
       return;
     }
     if (!current) current = implicitRung(line);
     const item = parseItem(raw, line, start);
     if (item.text.length === 0) {
-      problems.push(
-        problem('bad-value', 'this line has a note but no sentence before the "|"', line, start, raw.length, 'warning'),
-      );
+      findings.push(finding(on(line, start, raw.length), { kind: 'note-without-sentence' }));
       return;
     }
     current.items.push(item);
@@ -297,5 +261,5 @@ export function parseScript(text: string): ParsedScript {
   for (const r of rungs) {
     for (const s of r.settings) if (s.key === 'set' || s.key === 'sets') pushAll(r.sets, splitLabels(s.value));
   }
-  return { header, rungs, comments, overrides, problems, lineCount: lines.length };
+  return { header, rungs, comments, overrides, findings, lineCount: lines.length };
 }

@@ -5,7 +5,7 @@
 import { estimatePronunciation } from './lts/estimate';
 import { lg10wf, zipf } from './frequency';
 import { isVowel, parsePhones } from './phones';
-import type { Override, PronunciationSource, WcmOptions, WcmResult, WordData } from './types';
+import type { Override, PronunciationSource, WcmOptions, WordData, WordFigures } from './types';
 import { wordComplexity } from './wcm';
 
 export interface Pronunciation {
@@ -21,14 +21,7 @@ export interface Pronunciation {
 }
 
 /** Everything about a word that does not depend on where it stands; computed once per spelling. */
-export interface WordScore extends Pronunciation {
-  syllables: number;
-  phonemes: number;
-  wcm: WcmResult;
-  count: number;
-  zipf: number;
-  lg10wf: number;
-}
+export interface WordScore extends Pronunciation, WordFigures {}
 
 export function countSyllables(phones: string[]): number {
   let n = 0;
@@ -130,4 +123,12 @@ export class Pronouncer {
       variantError: wanted !== null ? `"${spoken}" is not in the dictionary, so it has no listed pronunciation ${wanted}` : null,
     };
   }
+}
+
+/**
+ * Whether a pronunciation was estimated rather than listed or written: letter-to-sound rules, or
+ * built from a dictionary stem. Estimated words are marked "≈" and offered as `@say` overrides.
+ */
+export function isEstimated(w: { source: PronunciationSource }): boolean {
+  return w.source === 'estimate' || w.source === 'morphology';
 }

@@ -1,5 +1,6 @@
-// Plausible ranges of the numeric settings, beside the key specs (core/options.ts, setOptions.ts,
-// records/settings.ts) that check them; the settings table of grammar/README.md states each one.
+// Plausible ranges of the numeric settings, read by the table of settings (core/settings.ts,
+// setOptions.ts, records/settings.ts) as each spec's `range` and checked by its reader; the
+// settings table of grammar/README.md states each one.
 import { MAX_PACE } from './pace';
 
 /**
@@ -24,6 +25,7 @@ export const NUMBER_RANGES: Record<string, NumberRange> = {
   'min-items': { min: 0, max: 10_000 },
   'max-words': { min: 0, max: 10_000 },
   'max-syllables': { min: 0, max: 10_000 },
+  'max-phonemes': { min: 0, max: 10_000 },
   // Relative weights: only their ratios matter.
   weights: { min: 0, max: 100 },
   // Matched sets: an equivalence bound in standard deviations, and a count of items.

@@ -7,7 +7,9 @@
 // (tests/core/incremental.property.test.ts checks this over thousands of random edits).
 import { analyze, analyzeRung, type AnalyzeInput, type AnalyzeOutput, type RungContext } from './analyze';
 import { parseScript, RUNG_KEYS, splitLabels } from './parse';
-import type { CommentLine, ItemAnalysis, Problem, RungAnalysis, RungNode, Setting } from './types';
+import { pushAll } from './arrays';
+import type { Finding } from './findings';
+import type { CommentLine, ItemAnalysis, RungAnalysis, RungNode, Setting } from './types';
 
 /** A rung's part of the text: from its header line to the line before the next header. */
 interface Segment {
@@ -80,12 +82,8 @@ function scriptWideInHead(output: AnalyzeOutput, headEnd: number): boolean {
 
 const shiftRange = <T extends { line: number; endLine: number }>(r: T, d: number): T => ({ ...r, line: r.line + d, endLine: r.endLine + d });
 
-function shiftProblem(p: Problem, d: number): Problem {
-  const q: Problem = shiftRange(p, d);
-  if (p.related) q.related = p.related.map((r) => shiftRange(r, d));
-  if (p.fix) q.fix = { ...p.fix, edits: p.fix.edits.map((e) => shiftRange(e, d)) };
-  return q;
-}
+/** A finding moved by d lines (findings carry their range only: no related places, no fix). */
+const shiftFinding = (f: Finding, d: number): Finding => shiftRange(f, d);
 
 function shiftSetting(s: Setting, d: number): Setting {
   return { ...s, line: s.line + d };
@@ -156,9 +154,9 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
     parsed.set(k, p);
   }
 
-  const oldProblems = groupBySegment(before, old.problems, (p) => p.line);
+  const oldFindings = groupBySegment(before, old.findings, (f) => f.line);
   const oldComments = groupBySegment(before, old.script.comments, (c) => c.line);
-  const oldParse = groupBySegment(before, old.script.problems, (p) => p.line);
+  const oldParse = groupBySegment(before, old.script.findings, (f) => f.line);
   const entries = old.itemCache.entries;
   const shared: RungContext = {
     options: old.options,
@@ -169,9 +167,9 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
   };
 
   const rungs: RungAnalysis[] = offset ? [old.rungs[0]] : [];
-  const problems: Problem[] = [...oldProblems[0]];
+  const findings: Finding[] = [...oldFindings[0]];
   const comments: CommentLine[] = [...oldComments[0]];
-  const parseProblems: Problem[] = [...oldParse[0]];
+  const parseFindings: Finding[] = [...oldParse[0]];
   for (let k = 1; k < segments.length; k++) {
     const d = segments[k].line - before[k].line;
     const index = k - 1 + offset;
@@ -179,20 +177,20 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
     if (p) {
       const at = segments[k].line;
       const node = shiftNode(p.rungs[0], at);
-      const own = p.problems.map((q) => shiftProblem(q, at));
-      parseProblems.push(...own);
+      const own = p.findings.map((f) => shiftFinding(f, at));
+      pushAll(parseFindings, own);
       for (const c of p.comments) comments.push({ ...c, line: c.line + at });
-      const found: Problem[] = [...own];
+      const found: Finding[] = [...own];
       rungs.push(analyzeRung(node, index, shared, found));
       redone.push(index);
       found.sort((a, b) => a.line - b.line || a.character - b.character);
-      problems.push(...found);
+      pushAll(findings, found);
       continue;
     }
     const r = old.rungs[index];
     rungs.push(d === 0 ? r : shiftRung(r, d));
-    for (const q of oldProblems[k]) problems.push(d === 0 ? q : shiftProblem(q, d));
-    for (const q of oldParse[k]) parseProblems.push(d === 0 ? q : shiftProblem(q, d));
+    for (const f of oldFindings[k]) findings.push(d === 0 ? f : shiftFinding(f, d));
+    for (const f of oldParse[k]) parseFindings.push(d === 0 ? f : shiftFinding(f, d));
     for (const c of oldComments[k]) comments.push(d === 0 ? c : { ...c, line: c.line + d });
   }
   const items: ItemAnalysis[] = [];
@@ -203,9 +201,9 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
   const lineCount = segments[segments.length - 1].line + segments[segments.length - 1].text.split(/\r\n|\r|\n/).length;
   return {
     ...old,
-    script: { ...old.script, rungs: rungs.map((r) => r.node), comments, problems: parseProblems, lineCount },
+    script: { ...old.script, rungs: rungs.map((r) => r.node), comments, findings: parseFindings, lineCount },
     rungs,
     items,
-    problems,
+    findings,
   };
 }

@@ -1,9 +1,10 @@
-// Settings of the matched-set checks, kept together so the settings table can take them as a block:
+// Settings of the matched-set checks, kept together as a block of the settings table (settings.ts):
 // `@set-bound` (equivalence bound in SD units), `@set-min-items` (fewest items a set needs to be
 // tested) and `@set-scope` (compare sets over the whole script or rung by rung).
-import type { AnalysisOptions, SetScope } from './types';
+import type { SettingSpec } from './settings';
+import type { SetScope } from './types';
 import { excerpt } from './excerpt';
-import { outOfRange } from './ranges';
+import { NUMBER_RANGES, outOfRange } from './ranges';
 
 export interface SetOptions {
   setBound: number;
@@ -19,23 +20,16 @@ export interface SetOptions {
  */
 export const DEFAULT_SET_OPTIONS: SetOptions = { setBound: 0.5, setMinItems: 5, setScope: 'script' };
 
-interface SetKeySpec {
-  key: string;
-  aliases: string[];
-  scope: 'script';
-  summary: string;
-  example: string;
-  values?: string[];
-  apply(value: string, o: AnalysisOptions): string | null;
-}
-
-export const SET_KEYS: SetKeySpec[] = [
+export const SET_SETTINGS: SettingSpec[] = [
   {
     key: 'set-bound',
     aliases: [],
     scope: 'script',
+    type: 'number',
+    default: DEFAULT_SET_OPTIONS.setBound,
     summary: 'Equivalence bound for matched sets, in standard deviations (default 0.5; a project convention).',
     example: '0.5',
+    range: NUMBER_RANGES['set-bound'],
     apply(value, o) {
       // `(?:sd\s*)?$` rather than `(?:sd)?\s*$` after `\s*`: two runs of spaces side by side would
       // split a long run every possible way (quadratic).
@@ -52,8 +46,11 @@ export const SET_KEYS: SetKeySpec[] = [
     key: 'set-min-items',
     aliases: [],
     scope: 'script',
+    type: 'integer',
+    default: DEFAULT_SET_OPTIONS.setMinItems,
     summary: 'Fewest items a matched set needs before it is compared (default 5; at least 2).',
     example: '5',
+    range: NUMBER_RANGES['set-min-items'],
     apply(value, o) {
       const v = value.trim();
       if (!/^\d+$/.test(v) || Number(v) < 2) return `@set-min-items must be a whole number, 2 or more, not "${excerpt(v)}"`;
@@ -67,6 +64,8 @@ export const SET_KEYS: SetKeySpec[] = [
     key: 'set-scope',
     aliases: [],
     scope: 'script',
+    type: 'choice',
+    default: DEFAULT_SET_OPTIONS.setScope,
     summary: 'Compare matched sets over the whole script (default) or rung by rung.',
     example: 'rung',
     values: ['script', 'rung'],

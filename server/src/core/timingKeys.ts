@@ -1,21 +1,27 @@
 // Settings of the timing plan (core/timing.ts), kept as one small block of the settings table so
 // they read like every other key: word slots, phrase-break pause, gap between items, echo window.
-import type { KeySpec } from './options';
+import type { SettingSpec } from './settings';
+import { DEFAULT_TIMING } from './timing';
+
+/** Ten minutes: the longest pause or gap readSeconds takes. */
+const SECONDS_RANGE = { min: 0, max: 600 };
 
 /** Reads "2", "2 s", "0.5s" or "500 ms" as seconds; an error message when it cannot. */
 export function readSeconds(value: string, key: string): number | string {
   const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*(s|sec|secs|seconds?|ms)?\s*$/i.exec(value);
   if (!m) return `@${key} takes a time in seconds, e.g. "@${key} 1.5 s" or "@${key} 300 ms", not "${value.trim()}"`;
   const n = Number(m[1]) / (m[2]?.toLowerCase() === 'ms' ? 1000 : 1);
-  if (n > 600) return `@${key} ${value.trim()} is longer than 10 minutes: write seconds, e.g. "2 s"`;
+  if (n > SECONDS_RANGE.max) return `@${key} ${value.trim()} is longer than 10 minutes: write seconds, e.g. "2 s"`;
   return n;
 }
 
-export const TIMING_KEYS: KeySpec[] = [
+export const TIMING_KEYS: SettingSpec[] = [
   {
     key: 'word-slots',
     aliases: [],
     scope: 'script',
+    type: 'choice',
+    default: DEFAULT_TIMING.slots,
     summary: 'How an item\'s time is shared among its words in cue tracks, model audio and the practice page: by syllables (default) or equal slots.',
     example: 'syllables',
     values: ['syllables', 'equal'],
@@ -30,6 +36,9 @@ export const TIMING_KEYS: KeySpec[] = [
     key: 'phrase-pause',
     aliases: [],
     scope: 'script',
+    type: 'number',
+    default: DEFAULT_TIMING.phrasePause,
+    range: SECONDS_RANGE,
     summary: 'Pause after phrase-break punctuation (, ; : . ! ? dashes) inside an item, in seconds (default 0).',
     example: '0.3 s',
     apply(value, o) {
@@ -43,6 +52,9 @@ export const TIMING_KEYS: KeySpec[] = [
     key: 'item-gap',
     aliases: ['gap'],
     scope: 'script',
+    type: 'number',
+    default: DEFAULT_TIMING.gap,
+    range: SECONDS_RANGE,
     summary: 'Silence between items in a session plan, in seconds (default 2).',
     example: '2 s',
     apply(value, o) {
@@ -56,6 +68,9 @@ export const TIMING_KEYS: KeySpec[] = [
     key: 'echo-window',
     aliases: [],
     scope: 'script',
+    type: 'number',
+    default: DEFAULT_TIMING.echoWindow,
+    range: { min: 0, max: 10, above: true },
     summary: "Echo mode: the client's response window after each model, as a multiple of the model's length (default 1).",
     example: '1',
     apply(value, o) {

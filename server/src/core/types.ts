@@ -1,6 +1,7 @@
 // Plain data shared by every part of Rungs. Positions are 0-based (line, character in UTF-16 code
 // units, as JavaScript strings index them); the CLI and the LSP layer convert them once at the edge.
 import type { RecordsOptions } from './records/settings';
+import type { Finding } from './findings';
 
 export type Severity = 'error' | 'warning' | 'info' | 'hint';
 
@@ -100,6 +101,8 @@ export interface AnalysisOptions {
   maxWords: number;
   /** Longest item, in syllables (0 = no limit). */
   maxSyllables: number;
+  /** Longest item, in phonemes (0 = no limit). */
+  maxPhonemes: number;
   weights: DifficultyWeights;
   wcm: WcmOptions;
   /** Adult reading-aloud norm in words per second (Brysbaert 2019: 183 wpm). */
@@ -177,7 +180,8 @@ export interface ParsedScript {
   rungs: RungNode[];
   comments: CommentLine[];
   overrides: Override[];
-  problems: Problem[];
+  /** What could not be read, in domain terms (rules render them; see core/findings.ts). */
+  findings: Finding[];
   lineCount: number;
 }
 
@@ -199,7 +203,18 @@ export interface WcmResult {
   parts: WcmParts;
 }
 
-export interface WordAnalysis {
+/** A word's counts and frequency, the same wherever it stands. */
+export interface WordFigures {
+  syllables: number;
+  phonemes: number;
+  wcm: WcmResult;
+  /** SUBTLEX-US raw count (0 when unseen). */
+  count: number;
+  zipf: number;
+  lg10wf: number;
+}
+
+export interface WordAnalysis extends WordFigures {
   /** The word as written in the item. */
   surface: string;
   /** Offsets in the line of the written token this word comes from. */
@@ -213,13 +228,6 @@ export interface WordAnalysis {
   variant: number;
   /** All listed dictionary pronunciations (empty if none). */
   variants: string[][];
-  syllables: number;
-  phonemes: number;
-  wcm: WcmResult;
-  /** SUBTLEX-US raw count (0 when unseen). */
-  count: number;
-  zipf: number;
-  lg10wf: number;
 }
 
 export interface PaceTiming {
@@ -278,8 +286,8 @@ export interface Analysis {
   options: AnalysisOptions;
   rungs: RungAnalysis[];
   items: ItemAnalysis[];
-  /** Parse problems plus problems found during analysis (not rule results). */
-  problems: Problem[];
+  /** What the parser and the analysis could not read or resolve, for the rules to render. */
+  findings: Finding[];
 }
 
 /** Read-only access to the shipped word data; implemented over compact tables outside the core. */

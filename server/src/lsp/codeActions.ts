@@ -1,6 +1,7 @@
 // Code actions: every mechanical fix the core and the rules attach to problems (as quick fixes,
 // plus one "fix all" source action), "add pronunciation override" and "use listed pronunciation
 // N" on a word, and "sort rung by difficulty" anywhere in a rung.
+import { isEstimated } from '../core/pronounce';
 import {
   CodeActionKind,
   type CodeAction,
@@ -10,11 +11,12 @@ import {
 } from 'vscode-languageserver/node';
 import { tokenize, type Token } from '../core/tokenize';
 import type { ItemAnalysis, Problem, TextEdit, WordAnalysis } from '../core/types';
+import { batchEdits } from '../rules/fixes';
 import { fromLspRange, rangesTouch, toLspDiagnostic, toLspTextEdit } from './convert';
 import type { Snapshot } from './documents';
-import { eolOf, sortRung } from './sortRung';
+import { sortRung } from './sortRung';
+import { lineEnding } from '../core/parse';
 import { balanceRungActions } from './balanceRung';
-import { pushAll } from '../core/arrays';
 
 export const FIX_ALL_KIND = `${CodeActionKind.SourceFixAll}.rungs`;
 
@@ -30,20 +32,6 @@ function sameDiagnostic(d: Diagnostic, p: Problem): boolean {
     d.range.end.line === p.endLine &&
     d.range.end.character === p.endCharacter
   );
-}
-
-/**
- * Non-overlapping fixes in document order (a later fix overlapping an earlier one waits). Fixes
- * marked `batch: false` need a person's choice each time, so they are quick fixes only.
- */
-export function compatibleFixes(problems: Problem[]): TextEdit[] {
-  const chosen: TextEdit[] = [];
-  for (const p of problems) {
-    if (!p.fix || p.fix.batch === false) continue;
-    if (p.fix.edits.some((e) => chosen.some((c) => rangesTouch(c, e)))) continue;
-    pushAll(chosen, p.fix.edits);
-  }
-  return chosen;
 }
 
 /** Where a new `@say` line goes: after the last header setting or override, else after leading comments. */
@@ -70,8 +58,8 @@ function wordActions(s: Snapshot, item: ItemAnalysis, w: WordAnalysis, line: num
   const scriptOverride = s.analysis.script.overrides.find((o) => o.word === w.spoken);
   if (!scriptOverride && w.phones.length) {
     const at = overrideInsertLine(s);
-    const eol = eolOf(s.text);
-    const estimated = w.source === 'estimate' || w.source === 'morphology';
+    const eol = lineEnding(s.text);
+    const estimated = isEstimated(w);
     actions.push({
       title: `Add pronunciation override for "${w.spoken}" (@say ${w.spoken} = ${w.phones.join(' ')})`,
       kind: estimated ? CodeActionKind.QuickFix : CodeActionKind.RefactorRewrite,
@@ -134,7 +122,7 @@ export function codeActions(s: Snapshot, params: CodeActionParams): CodeAction[]
   }
 
   if (only?.some((k) => FIX_ALL_KIND.startsWith(k) && k.startsWith(CodeActionKind.Source))) {
-    const edits = compatibleFixes(s.problems);
+    const edits = batchEdits(s.text, s.problems);
     if (edits.length) actions.push({ title: 'Fix all auto-fixable Rungs problems', kind: FIX_ALL_KIND, edit: edit(s, edits) });
   }
   return actions;

@@ -3,8 +3,9 @@
 // server command `rungs.sortRung`).
 import type { CodeLens } from 'vscode-languageserver/node';
 import type { Snapshot } from './documents';
-import { diffMarked, ESTIMATED_MARK, secs } from './format';
+import { diffMarked, ESTIMATED_MARK, secs } from './display';
 import { rungNeedsSort } from './sortRung';
+import { ladderMetric, METRIC_NAMES, rungStatsByIndex } from '../rules/shared';
 import { SORT_RUNG_COMMAND } from './contract';
 import { describeLengths, rungLength } from '../core/timing';
 
@@ -12,6 +13,9 @@ export { SORT_RUNG_COMMAND };
 
 export function codeLenses(s: Snapshot): CodeLens[] {
   const lenses: CodeLens[] = [];
+  // The summary shows the metric the ladder rules judge (config `ladder.metric`).
+  const metric = ladderMetric({ settings: s.lint });
+  const stats = rungStatsByIndex(s.analysis, s.lint);
   for (const rung of s.analysis.rungs) {
     const line = rung.node.line;
     const range = { start: { line, character: 0 }, end: { line, character: 0 } };
@@ -19,9 +23,10 @@ export function codeLenses(s: Snapshot): CodeLens[] {
     const times = rung.paces.map((p, i) => `${secs(rung.totalSeconds[i])} at ${p.label}`).join(', ');
     const est = rung.items.reduce((sum, it) => sum + it.estimatedWords, 0);
     const d = (x: number) => diffMarked(x, est);
+    const on = metric === 'difficulty' ? rung : stats.get(rung.index) ?? rung;
     const estimated = est ? ` · ${ESTIMATED_MARK} ${est} estimated pronunciation${est === 1 ? '' : 's'}` : '';
     const title = n
-      ? `${n} item${n === 1 ? '' : 's'} · difficulty ${d(rung.min)}–${d(rung.max)}, median ${d(rung.median)} · ${times}${estimated}`
+      ? `${n} item${n === 1 ? '' : 's'} · ${METRIC_NAMES[metric]} ${d(on.min)}–${d(on.max)}, median ${d(on.median)} · ${times}${estimated}`
       : 'no items';
     lenses.push({ range, command: { title, command: '' } });
     // The session length comes from the timing plan, so it matches cue tracks and model audio.

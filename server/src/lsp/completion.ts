@@ -1,7 +1,8 @@
-// Completion of setting keys (header or rung, from the core's KEYS table), their values, set
+// Completion of setting keys (header or rung, from the core's table of settings), their values, set
 // labels (the usual ones plus every label already used in the script), pace units, and the
 // words of `@say` (words the script had to estimate) and lint directives ("// rungs: allow ID").
 // Signature help shows what a key takes while its value is typed.
+import { isEstimated } from '../core/pronounce';
 import {
   CompletionItemKind,
   InsertTextFormat,
@@ -9,8 +10,7 @@ import {
   type CompletionItem,
   type SignatureHelp,
 } from 'vscode-languageserver/node';
-import { KEYS, keySpec, type KeySpec } from '../core/options';
-import { RUNG_KEYS } from '../core/parse';
+import { RUNG_KEYS, SETTINGS as KEYS, settingSpec as keySpec, type SettingSpec as KeySpec } from '../core/settings';
 import { DIRECTIVE_PREFIX, DIRECTIVE_VERBS } from '../rules/directives';
 import { RULES } from '../rules/index';
 import type { Snapshot } from './documents';
@@ -126,7 +126,7 @@ function sayItems(s: Snapshot): CompletionItem[] {
   const seen = new Map<string, string>();
   for (const it of s.analysis.items) {
     for (const w of it.words) {
-      if ((w.source === 'estimate' || w.source === 'morphology') && !seen.has(w.spoken)) seen.set(w.spoken, w.phones.join(' '));
+      if (isEstimated(w) && !seen.has(w.spoken)) seen.set(w.spoken, w.phones.join(' '));
     }
   }
   return [...seen].map(([word, phones]) => ({

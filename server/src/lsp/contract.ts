@@ -7,6 +7,8 @@ export interface LadderItem {
   text: string;
   /** Composite difficulty, 0-100. */
   difficulty: number;
+  /** The item's value on the ladder metric (`Ladder.metric`; equals `difficulty` by default). */
+  value?: number;
   /** 1-based rank of the item's difficulty within its rung. */
   rank: number;
   /** Words of the item whose pronunciation is estimated (no dictionary entry or override). */
@@ -19,6 +21,7 @@ export interface LadderRung {
   name: string;
   /** 0-based line of the header (of the first item for the implicit rung). */
   line: number;
+  /** Median, lowest and highest item value on the ladder metric (`Ladder.metric`). */
   median: number;
   min: number;
   max: number;
@@ -30,7 +33,7 @@ export interface LadderStep {
   /** Rung indices into `rungs`: the lower rung of the step, and the next one. */
   from: number;
   to: number;
-  /** Median of `to` minus median of `from`, in difficulty points. */
+  /** Median of `to` minus median of `from`, on the ladder metric. */
   delta: number;
   /** Id of the ladder rule that reports this step, or null when the step is fine. */
   problem: string | null;
@@ -46,7 +49,12 @@ export interface LadderProblem {
 export interface Ladder {
   title: string | null;
   direction: 'rising' | 'falling';
-  maxStep: number;
+  /** The metric the ladder rules judge (config `ladder.metric`), as messages name it: "difficulty", "syllables". */
+  metric?: string;
+  /** Top of the value scale: 100 for difficulty, else the largest item value rounded up. */
+  scaleMax?: number;
+  /** Largest allowed step on that metric (the one step-too-big uses), or null when none applies. */
+  maxStep: number | null;
   rungs: LadderRung[];
   steps: LadderStep[];
   problems: LadderProblem[];

@@ -1,18 +1,16 @@
 // Open scripts and their analyses. Each document keeps its last analysis, its Pronouncer and its
 // item cache, so a request always gets the analysis of the text it was sent against (analysed
 // synchronously when the text or the settings moved on) and an edit re-scores only what changed.
-import { statSync } from 'node:fs';
-import { dirname, isAbsolute, join, normalize, sep } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { dirname, isAbsolute, join, sep } from 'node:path';
 import { TextDocument } from 'vscode-languageserver-textdocument';
-import type { AnalyzeOutput } from '../core/analyze';
+import { checkScript, mergeFileProblems, type CheckCache, type FileProblem } from '../check/checkScript';
+import { analyze, type AnalyzeOutput } from '../core/analyze';
 import { splitLines } from '../core/parse';
 import type { ItemAnalysis, Problem, RungAnalysis, WordData } from '../core/types';
-import { clearConfigCache, resolveScriptContext, type ConfigFs } from '../config/resolve';
-import { lint } from '../rules/index';
-import { isRegularFile, readTextBounded, realPath } from '../node/boundedRead';
+import { clearConfigCache } from '../config/resolve';
+import { nodeFs, pathKey, uriToPath } from '../node/nodeFs';
+import { analysisFailed } from '../rules/internalError';
 import type { LintSettings } from '../rules/types';
-import { analyzeIncremental, type IncrementalState } from './incremental';
 import { DEFAULT_SETTINGS, toConfigObject, type RungsSettings } from './settings';
 
 export interface Snapshot {
@@ -24,6 +22,8 @@ export interface Snapshot {
   /** Every problem: the core's and every rule's, severities applied. */
   problems: Problem[];
   settings: RungsSettings;
+  /** The resolved lint settings the rules run with: the ladder view, hover and lenses use the same metric and step. */
+  lint: LintSettings;
   /** Milliseconds the analysis took (for the log and the report); the rules run when problems are first read. */
   ms: number;
   itemAt(line: number): ItemAnalysis | undefined;
@@ -36,52 +36,14 @@ export interface Snapshot {
 interface DocState {
   snapshot?: Snapshot;
   settingsGeneration: number;
-  cache?: IncrementalState;
-  reuse?: AnalyzeOutput['pronouncer'];
+  cache?: CheckCache;
   /** Every file the resolver read or looked for (config files and lexicons, found or missing), by pathKey. */
   dependencies: Map<string, string>;
   /** Problems in config and lexicon files (absolute paths) from the last analysis. */
-  fileProblems: { file: string; problem: Problem }[];
+  fileProblems: FileProblem[];
 }
 
-/** A path as a comparison key: normalised, and case-folded where the file system ignores case. */
-export function pathKey(path: string): string {
-  const n = normalize(path);
-  return process.platform === 'win32' || process.platform === 'darwin' ? n.toLowerCase() : n;
-}
-
-/** A ConfigFs that remembers every path it was asked about, so the server knows what to watch. */
-function recordingFs(fs: ConfigFs, seen: Map<string, string>): ConfigFs {
-  return {
-    readFile: (p) => (seen.set(pathKey(p), p), fs.readFile(p)),
-    exists: (p) => (seen.set(pathKey(p), p), fs.exists(p)),
-    isFile: fs.isFile,
-    realpath: fs.realpath,
-  };
-}
-
-export const nodeConfigFs: ConfigFs = {
-  readFile: (p) => readTextBounded(p),
-  isFile: isRegularFile,
-  realpath: realPath,
-  exists: (p) => {
-    try {
-      statSync(p);
-      return true;
-    } catch {
-      return false;
-    }
-  },
-};
-
-export function uriToPath(uri: string): string | null {
-  if (!uri.startsWith('file:')) return null;
-  try {
-    return fileURLToPath(uri);
-  } catch {
-    return null;
-  }
-}
+export { uriToPath };
 
 function makeSnapshot(
   uri: string,
@@ -90,6 +52,7 @@ function makeSnapshot(
   analysis: AnalyzeOutput,
   problems: (lines: string[]) => Problem[],
   settings: RungsSettings,
+  lint: LintSettings,
   ms: number,
 ): Snapshot {
   // The lines and the problems (every rule) are worked out when first asked for: a read request
@@ -110,6 +73,7 @@ function makeSnapshot(
       return (linted ??= problems((lines ??= splitLines(text))));
     },
     settings,
+    lint,
     ms,
     itemAt(line) {
       // Items are in line order: a binary search, not a table of 10,000 items per version.
@@ -206,15 +170,7 @@ export class AnalysisStore {
    * shared by several scripts reports each problem once.
    */
   fileProblems(): Map<string, Problem[]> {
-    const byFile = new Map<string, Map<string, Problem>>();
-    for (const st of this.states.values()) {
-      for (const { file, problem } of st.fileProblems) {
-        let m = byFile.get(file);
-        if (!m) byFile.set(file, (m = new Map()));
-        m.set(JSON.stringify([problem.line, problem.character, problem.endLine, problem.endCharacter, problem.rule, problem.message]), problem);
-      }
-    }
-    return new Map([...byFile].map(([file, m]) => [file, [...m.values()]]));
+    return mergeFileProblems([...this.states.values()].map((st) => st.fileProblems));
   }
 
   /** The analysis of exactly this document version, computed now if needed. Never throws. */
@@ -228,14 +184,14 @@ export class AnalysisStore {
     // Keyed on the text as well as the version: a client that reuses an older version number
     // must not be answered from the snapshot of another text.
     if (s && s.version === doc.version && s.text === doc.getText() && state.settingsGeneration === this.generation) return s;
-    const fresh = this.analyse(doc, state);
+    const fresh = this.analyzeDocument(doc, state);
     state.snapshot = fresh;
     state.settingsGeneration = this.generation;
     this.hooks.analyzed(fresh);
     return fresh;
   }
 
-  private analyse(doc: TextDocument, state: DocState): Snapshot {
+  private analyzeDocument(doc: TextDocument, state: DocState): Snapshot {
     const t0 = performance.now();
     const text = doc.getText();
     const settings = this.settingsFor(doc.uri);
@@ -244,53 +200,40 @@ export class AnalysisStore {
       // Editor settings are the resolver's lowest layer above the defaults; workspace config
       // files and the script header win over them, as in `rungs lint`.
       const baseDir = this.folderOf(path);
-      const dependencies = new Map<string, string>();
-      const ctx = resolveScriptContext(path ?? join(baseDir, 'untitled.rungs'), recordingFs(nodeConfigFs, dependencies), {
+      const checked = checkScript({
+        text,
+        path: path ?? join(baseDir, 'untitled.rungs'),
+        fs: nodeFs,
+        data: this.data,
         editor: { settings: toConfigObject(settings), baseDir, name: EDITOR_LAYER },
+        cache: state.cache,
       });
-      state.dependencies = dependencies;
-      const { output, cache } = analyzeIncremental(
-        { text, data: this.data, options: ctx.options, lexicon: ctx.lexicon, reuse: state.reuse },
-        state.cache,
-      );
-      state.cache = cache;
-      state.reuse = output.pronouncer;
-      const problems = (lines: string[]) => this.lintSafely(doc.uri, output, text, ctx.lint, lines);
+      state.dependencies = new Map(checked.dependencies.map((p) => [pathKey(p), p]));
+      state.cache = checked.cache;
       // Problems in files become diagnostics on those files; editor settings have no file to
       // show them in, so those are logged.
-      state.fileProblems = ctx.problems.filter((c) => c.file !== EDITOR_LAYER && isAbsolute(c.file));
+      state.fileProblems = checked.fileProblems.filter((c) => c.file !== EDITOR_LAYER && isAbsolute(c.file));
       this.logConfigProblems(
-        ctx.problems.filter((c) => !state.fileProblems.includes(c)).map((c) => `${c.file}: ${c.problem.message}`),
+        checked.fileProblems.filter((c) => !state.fileProblems.includes(c)).map((c) => `${c.file}: ${c.problem.message}`),
       );
-      return makeSnapshot(doc.uri, doc.version, text, output, problems, settings, performance.now() - t0);
+      return makeSnapshot(doc.uri, doc.version, text, checked.analysis, (lines) => this.lintSafely(doc.uri, () => checked.problemsWith(lines)), settings, checked.lint, performance.now() - t0);
     } catch (err) {
       // A bad document (or a bug) becomes a diagnostic, never a crash of the server.
       this.hooks.error(`analysis of ${doc.uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
       state.cache = undefined;
-      state.reuse = undefined;
       state.fileProblems = [];
-      const empty = analyzeIncremental({ text: '', data: this.data }, undefined).output;
-      const problem: Problem = {
-        rule: 'internal-error',
-        severity: 'error',
-        message: `Rungs could not analyse this script (${err instanceof Error ? err.message : String(err)}); see the Rungs output for details`,
-        line: 0,
-        character: 0,
-        endLine: 0,
-        endCharacter: 0,
-      };
-      return makeSnapshot(doc.uri, doc.version, text, empty, () => [problem], settings, performance.now() - t0);
+      const empty = analyze({ text: '', data: this.data });
+      return makeSnapshot(doc.uri, doc.version, text, empty, () => [analysisFailed(err)], settings, { severities: {} }, performance.now() - t0);
     }
   }
 
-  /** Every rule's problems; a rule that throws becomes one problem, never a broken server. */
-  private lintSafely(uri: string, output: AnalyzeOutput, text: string, settings: LintSettings, lines: string[]): Problem[] {
+  /** Every rule's problems; a failure outside the rules' own guard becomes one problem, never a broken server. */
+  private lintSafely(uri: string, problems: () => Problem[]): Problem[] {
     try {
-      return lint(output, text, settings, lines);
+      return problems();
     } catch (err) {
       this.hooks.error(`checking ${uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
-      const message = `Rungs could not check this script (${err instanceof Error ? err.message : String(err)}); see the Rungs output for details`;
-      return [{ rule: 'internal-error', severity: 'error', message, line: 0, character: 0, endLine: 0, endCharacter: 0 }];
+      return [analysisFailed(err)];
     }
   }
 

@@ -1,8 +1,9 @@
 // Hovers: a word (pronunciation, WCM breakdown, frequency, source, other listed pronunciations),
 // an item (counts, difficulty and rank, durations at every pace), a rung header (summary and the
 // step from the rung before) and a setting key (what it does). Compact Markdown throughout.
+import { isEstimated } from '../core/pronounce';
 import { MarkupKind, type Hover } from 'vscode-languageserver/node';
-import { keySpec } from '../core/options';
+import { settingSpec } from '../core/settings';
 import { toIpa } from '../core/phones';
 import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
 import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
@@ -10,7 +11,8 @@ import { WCM_PARAMETER_NAMES } from '../core/wcm';
 import { describeLengths, describeRungLength, formatLength, rungLength, sessionLengths } from '../core/timing';
 import type { Snapshot } from './documents';
 import { setLabelHover, setSettingHover } from './setHover';
-import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, rate, secs, signed, total, two } from './format';
+import { ladderMetric, METRIC_NAMES, rungStatsByIndex, stepLimit } from '../rules/shared';
+import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, rate, secs, signed, total, two } from './display';
 
 const markdown = (value: string, line: number, start: number, end: number): Hover => ({
   contents: { kind: MarkupKind.Markdown, value },
@@ -31,16 +33,15 @@ function wcmBreakdown(parts: WcmParts): string {
   return ['| WCM parameter | points |', '|---|---:|', ...rows].join('\n');
 }
 
-function sourceText(s: Snapshot, w: WordAnalysis, how: string): string {
-  if (w.source === 'dictionary') return how;
-  if (w.source === 'override') return how;
-  return `${ESTIMATED_MARK} estimated pronunciation (${how}): check it, or add a pronunciation override`;
+/** Where the pronunciation came from; an estimate says so and how to settle it. */
+function sourceText(w: WordAnalysis, how: string): string {
+  return isEstimated(w) ? `${ESTIMATED_MARK} estimated pronunciation (${how}): check it, or add a pronunciation override` : how;
 }
 
 export function wordHoverText(s: Snapshot, w: WordAnalysis, variantMark: number | null): string {
   const score = s.analysis.pronouncer.pronouncer.score(w.spoken, variantMark);
   const lines: string[] = [];
-  lines.push(`**${md(w.spoken)}** · ${sourceText(s, w, score.how)}`);
+  lines.push(`**${md(w.spoken)}** · ${sourceText(w, score.how)}`);
   lines.push('');
   lines.push(`\`${w.phones.join(' ')}\` · /${toIpa(w.phones)}/`);
   lines.push('');
@@ -98,7 +99,7 @@ export function itemHoverText(s: Snapshot, item: ItemAnalysis): string {
     `length ${two(c.length)} · complexity ${two(c.complexity)} · rarity ${two(c.rarity)} (weights ${o.weights.length}/${o.weights.complexity}/${o.weights.rarity})`,
   ];
   if (item.lowFrequencyWords) notes.push(`${item.lowFrequencyWords} low-frequency word${item.lowFrequencyWords === 1 ? '' : 's'}`);
-  const est = item.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => w.spoken);
+  const est = item.words.filter((w) => isEstimated(w)).map((w) => w.spoken);
   if (est.length) notes.push(`${ESTIMATED_MARK} ${estimatedWords(est.length)}: ${[...new Set(est)].map(md).join(', ')}`);
   if (item.timings.some((t) => t.aboveReadingNorm)) notes.push(`⚠ faster than adult reading aloud (${rate(o.readingNormWps)} words/s)`);
   lines.push(notes.join('; '));
@@ -114,16 +115,23 @@ export function previousRung(s: Snapshot, rung: RungAnalysis): RungAnalysis | un
 export function rungHoverText(s: Snapshot, rung: RungAnalysis): string {
   const o = s.analysis.options;
   const n = rung.items.length;
+  // The numbers the ladder rules judge: the configured metric and step (config `ladder`).
+  const metric = ladderMetric({ settings: s.lint });
+  const stats = rungStatsByIndex(s.analysis, s.lint);
+  const on = (r: RungAnalysis) => (metric === 'difficulty' ? r : stats.get(r.index)!);
+  const name = METRIC_NAMES[metric];
+  const limit = stepLimit(s.analysis, s.lint).value;
   const lines: string[] = [];
   lines.push(`**Rung ${rung.index + 1} "${md(rung.node.name)}"** · ${n} item${n === 1 ? '' : 's'}`);
   lines.push('');
-  if (n) lines.push(`Difficulty ${diff(rung.min)}–${diff(rung.max)}, median **${diff(rung.median)}**`);
+  if (n) lines.push(`${name[0].toUpperCase()}${name.slice(1)} ${diff(on(rung).min)}–${diff(on(rung).max)}, median **${diff(on(rung).median)}**`);
   const prev = previousRung(s, rung);
   if (prev && n) {
-    const delta = rung.median - prev.median;
+    const delta = on(rung).median - on(prev).median;
+    const allowed = limit === undefined ? 'no largest step set' : `largest allowed ${diff(limit)}`;
     lines.push('');
     lines.push(
-      `Step from rung ${prev.index + 1} "${md(prev.node.name)}" (median ${diff(prev.median)}): **${signed(delta)}** (largest allowed ${diff(o.maxStep)}, ${o.direction})`,
+      `Step from rung ${prev.index + 1} "${md(prev.node.name)}" (median ${diff(on(prev).median)}): **${signed(delta)}** (${allowed}, ${o.direction})`,
     );
   }
   const lengths = rungLength(s.analysis, rung.index);
@@ -144,7 +152,7 @@ export function rungHoverText(s: Snapshot, rung: RungAnalysis): string {
 }
 
 function settingHoverText(setting: Setting): string | null {
-  const spec = keySpec(setting.key);
+  const spec = settingSpec(setting.key);
   if (!spec) return null;
   const aliases = spec.aliases.length ? ` (also ${spec.aliases.map((a) => `@${a}`).join(', ')})` : '';
   const where = spec.scope === 'script' ? 'script header' : spec.scope === 'rung' ? 'rung' : 'script header or a rung';

@@ -1,9 +1,10 @@
 // Inlay hints at the end of item lines: projected duration at the rung's first pace and the
 // composite difficulty, marked "≈" when it rests on estimated pronunciations. Off with
 // `rungs.inlayHints.enabled: false`.
+import { isEstimated } from '../core/pronounce';
 import { InlayHintKind, MarkupKind, type InlayHint, type Range } from 'vscode-languageserver/node';
 import type { Snapshot } from './documents';
-import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, secs } from './format';
+import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, secs } from './display';
 
 export function inlayHints(s: Snapshot, range: Range): InlayHint[] {
   if (!s.settings.inlayHints.enabled) return [];
@@ -16,7 +17,7 @@ export function inlayHints(s: Snapshot, range: Range): InlayHint[] {
       const t = item.timings[0];
       const raw = s.lines[line] ?? '';
       const n = item.estimatedWords;
-      const estimated = item.words.filter((w) => w.source === 'estimate' || w.source === 'morphology').map((w) => md(w.spoken));
+      const estimated = item.words.filter((w) => isEstimated(w)).map((w) => md(w.spoken));
       const note = n ? ` ${ESTIMATED_MARK} ${estimatedWords(n)} (${[...new Set(estimated)].join(', ')}), so the difficulty is approximate.` : '';
       hints.push({
         position: { line, character: raw.trimEnd().length },

@@ -4,6 +4,7 @@
 import { NotificationType, RequestType } from 'vscode-languageserver/node';
 import { DID_ANALYZE_METHOD, ITEM_AT_METHOD, LADDER_METHOD, type ItemAt, type Ladder, type LadderStep } from './contract';
 import { RULES } from '../rules/index';
+import { ladderMetric, METRIC_NAMES, metricOf, rungStatsByIndex, stepLimit } from '../rules/shared';
 import type { Snapshot } from './documents';
 
 export type { Ladder, LadderItem, LadderRung, LadderStep, ItemAt as ItemAtResult } from './contract';
@@ -18,17 +19,22 @@ export function ladder(s: Snapshot): Ladder {
   const a = s.analysis;
   const ladderRules = new Set(RULES.filter((r) => r.category === 'ladder').map((r) => r.id));
   const title = a.script.header.find((h) => h.key === 'title')?.value.trim() || null;
+  // The medians and the step limit are those the ladder rules judge (the configured metric).
+  const metric = ladderMetric({ settings: s.lint });
+  const stats = rungStatsByIndex(a, s.lint);
+  const on = (r: (typeof a.rungs)[number]) => (metric === 'difficulty' ? r : stats.get(r.index) ?? { median: 0, min: 0, max: 0 });
   const rungs = a.rungs.map((r) => ({
     name: r.node.name,
     line: r.node.line,
-    median: r.median,
-    min: r.min,
-    max: r.max,
+    median: on(r).median,
+    min: on(r).min,
+    max: on(r).max,
     paces: r.paces.map((p) => p.label),
     items: r.items.map((it) => ({
       line: it.node.line,
       text: it.node.text,
       difficulty: it.difficulty,
+      value: round1(metricOf(it, metric)),
       rank: it.rank,
       estimatedWords: it.estimatedWords,
       sets: it.sets,
@@ -49,12 +55,15 @@ export function ladder(s: Snapshot): Ladder {
         x.line < end &&
         (x.line === to.node.line || x.related?.some((r) => r.line === from.node.line)),
     );
-    steps.push({ from: from.index, to: to.index, delta: round1(to.median - from.median), problem: p?.rule ?? null });
+    steps.push({ from: from.index, to: to.index, delta: round1(rungs[to.index].median - rungs[from.index].median), problem: p?.rule ?? null });
   }
+  const values = rungs.flatMap((r) => r.items.map((i) => i.value));
   return {
     title,
     direction: a.options.direction,
-    maxStep: a.options.maxStep,
+    metric: METRIC_NAMES[metric],
+    scaleMax: metric === 'difficulty' ? 100 : Math.max(1, Math.ceil(Math.max(0, ...values))),
+    maxStep: stepLimit(a, s.lint).value ?? null,
     rungs,
     steps,
     problems: s.problems.map((p) => ({ rule: p.rule, severity: p.severity, line: p.line, message: p.message })),

@@ -4,4 +4,4 @@ import { startServer } from './server';
 
 export { startServer };
 
-if (require.main === module) startServer();
+if (require.main === module) startServer(process.argv);

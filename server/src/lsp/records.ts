@@ -2,7 +2,6 @@
 // it was compared with and the mark), a code lens per client and rung with the trend, the
 // progress view's payload, and the latest ratios shown in a script's rung hover. Scripts named in
 // records are read from open documents first, then from disk.
-import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { MarkupKind, type CodeLens, type Hover } from 'vscode-languageserver/node';
 import { resolveScriptContext } from '../config/resolve';
@@ -11,8 +10,8 @@ import { formatNumber } from '../core/pace';
 import { isRecordsFile, readProgress, scriptFacts, type ProgressResult, type RateRecord, type ScriptFacts, type ScriptLookup } from '../core/records';
 import type { WordData } from '../core/types';
 import type { ProgressView } from './contract';
-import { nodeConfigFs, pathKey } from './documents';
-import { md } from './format';
+import { nodeFs, pathKey } from '../node/nodeFs';
+import { md } from './display';
 
 /** Text of an open document by file path, if it is open. */
 export type OpenText = (path: string) => string | undefined;
@@ -27,7 +26,7 @@ function readText(path: string, open: OpenText): string | null {
   const t = open(path);
   if (t !== undefined) return t;
   try {
-    return statSync(path).isFile() ? readFileSync(path, 'utf8') : null;
+    return nodeFs.exists(path) && !nodeFs.isDirectory(path) ? nodeFs.readFile(path) : null;
   } catch {
     return null;
   }
@@ -40,7 +39,7 @@ export function lookupFor(recordsPath: string, open: OpenText): ScriptLookup {
     const full = resolve(dirname(recordsPath), written);
     if (!cache.has(full)) {
       const text = readText(full, open);
-      cache.set(full, text === null ? null : scriptFacts(text, resolveScriptContext(full, nodeConfigFs).options));
+      cache.set(full, text === null ? null : scriptFacts(text, resolveScriptContext(full, nodeFs).options));
     }
     return cache.get(full)!;
   };
@@ -53,7 +52,7 @@ export function today(now = new Date()): string {
 
 /** Progress of one records file, with its settings from config files beside it. */
 export function recordsProgress(path: string, text: string, open: OpenText, data?: WordData): { result: ProgressResult; mark: number } {
-  const options = resolveScriptContext(path, nodeConfigFs).options.records;
+  const options = resolveScriptContext(path, nodeFs).options.records;
   return { result: readProgress({ text, scripts: lookupFor(path, open), options, today: today(), data }), mark: options.benefitMark };
 }
 
@@ -128,7 +127,7 @@ export function findRecordsFiles(folders: string[], cap = 200): string[] {
     if (out.length >= cap || depth > 8) return;
     let names: string[];
     try {
-      names = readdirSync(dir).sort();
+      names = nodeFs.readdir(dir).sort();
     } catch {
       return;
     }
@@ -137,15 +136,12 @@ export function findRecordsFiles(folders: string[], cap = 200): string[] {
       const p = join(dir, name);
       if (isRecordsFile(name)) out.push(p);
       else if (!name.includes('.')) {
-        try {
-          if (statSync(p).isDirectory()) walk(p, depth + 1);
-        } catch {
-          // A folder that vanished or cannot be read has no records to show.
-        }
+        // A folder that vanished or cannot be read has no records to show (isDirectory: false).
+        if (nodeFs.isDirectory(p)) walk(p, depth + 1);
       }
     }
   };
-  for (const f of folders) if (existsSync(f)) walk(f, 0);
+  for (const f of folders) if (nodeFs.exists(f)) walk(f, 0);
   return out;
 }
 

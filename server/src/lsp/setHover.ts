@@ -7,7 +7,7 @@ import { splitLabels } from '../core/parse';
 import type { ItemAnalysis, Setting } from '../core/types';
 import { setComparison } from '../rules/setRules';
 import type { Snapshot } from './documents';
-import { md } from './format';
+import { md } from './display';
 
 /** `rung` limits a rung-by-rung comparison to one rung; null shows every rung. */
 export function setHoverText(s: Snapshot, label: string, rung: number | null): string {

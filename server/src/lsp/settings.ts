@@ -1,22 +1,21 @@
 // Editor settings of the `rungs` section (workspace/configuration, scope: resource). One typed
 // object with defaults, mirrored by the VS Code extension's package.json, so both halves agree.
 // Layering (config/resolve.ts): defaults < editor settings < workspace config files < header.
-import { DEFAULT_WEIGHTS } from '../core/difficulty';
-import { parsePaces } from '../core/pace';
-import type { DifficultyWeights, WcmOptions } from '../core/types';
-import { DEFAULT_WCM_OPTIONS } from '../core/wcm';
+import { defaultOptions, SETTINGS, settingText, type SettingSpec } from '../core/settings';
+import { stepTooBig } from '../rules/stepTooBig';
+import { thinRung } from '../rules/thinRung';
 
 export type RuleSetting = 'error' | 'warning' | 'info' | 'hint' | 'off';
 
+/** The table's settings the editor offers (`rungs.<editor.name>`), in table order. */
+const EDITOR_SETTINGS = SETTINGS.filter((s): s is SettingSpec & { editor: NonNullable<SettingSpec['editor']> } => Boolean(s.editor));
+
 export interface RungsSettings {
-  /** Target paces, written as in a script header: "1, 1.5, 2 wps". */
-  paces: string;
-  /** The client's unassisted rate in words per second, or null when unknown. */
-  baseline: number | null;
-  /** Largest change of median difficulty between neighbouring rungs, 0-100 points. */
-  maxStep: number;
-  weights: DifficultyWeights;
-  wcm: WcmOptions;
+  /**
+   * Analysis settings from the table, by config-file key (`max-step`), in config-file form; a
+   * setting the user left unset (or set unreadably) holds its default.
+   */
+  analysis: Record<string, unknown>;
   /** Severity per rule id; "off" silences a rule. */
   rules: Record<string, RuleSetting>;
   inlayHints: { enabled: boolean };
@@ -26,11 +25,7 @@ export interface RungsSettings {
 }
 
 export const DEFAULT_SETTINGS: RungsSettings = {
-  paces: '1, 1.5, 2 wps',
-  baseline: null,
-  maxStep: 15,
-  weights: { ...DEFAULT_WEIGHTS },
-  wcm: { ...DEFAULT_WCM_OPTIONS },
+  analysis: Object.fromEntries(EDITOR_SETTINGS.map((s) => [s.key, s.default])),
   rules: {},
   inlayHints: { enabled: true },
   lexiconFiles: [],
@@ -38,24 +33,37 @@ export const DEFAULT_SETTINGS: RungsSettings = {
 };
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
-const num = (v: unknown, fallback: number, min = 0): number =>
-  typeof v === 'number' && Number.isFinite(v) && v >= min ? v : fallback;
 const bool = (v: unknown, fallback: boolean): boolean => (typeof v === 'boolean' ? v : fallback);
 const SEVERITY_LIST: readonly RuleSetting[] = ['error', 'warning', 'info', 'hint', 'off'];
 const SEVERITIES = new Set<string>(SEVERITY_LIST);
 /** "error, warning, info, hint or off", from the one list. */
 const SEVERITY_WORDS = `${SEVERITY_LIST.slice(0, -1).join(', ')} or ${SEVERITY_LIST[SEVERITY_LIST.length - 1]}`;
 
+/** The value at a dotted path of the client's object (`wcm.hAsFricative`). */
+function at(raw: Record<string, unknown>, path: string): unknown {
+  let v: unknown = raw;
+  for (const part of path.split('.')) v = isObject(v) ? v[part] : undefined;
+  return v;
+}
+
 /**
  * Reads whatever the client sent (possibly null, partial or mistyped) into complete settings.
- * Unreadable values fall back to the default and are named in `warnings`, never thrown.
+ * Each table setting is read by its own reader (as a header value would be); unreadable values
+ * fall back to the default and are named in `warnings`, never thrown.
  */
 export function normalizeSettings(raw: unknown): { settings: RungsSettings; warnings: string[] } {
   const warnings: string[] = [];
-  const d = DEFAULT_SETTINGS;
   const r = isObject(raw) ? raw : {};
-  const w = isObject(r.weights) ? r.weights : {};
-  const wcm = isObject(r.wcm) ? r.wcm : {};
+  const analysis: Record<string, unknown> = {};
+  for (const spec of EDITOR_SETTINGS) {
+    const v = at(r, spec.editor.name);
+    analysis[spec.key] = spec.default;
+    if (v === undefined || v === null) continue;
+    const text = settingText(v);
+    const error = text === null || !text.trim() ? `cannot read ${JSON.stringify(v)}` : spec.apply(text, defaultOptions());
+    if (error) warnings.push(`rungs.${spec.editor.name}: ${error}; the default is used`);
+    else analysis[spec.key] = v;
+  }
   const rules: Record<string, RuleSetting> = {};
   if (isObject(r.rules)) {
     for (const [id, sev] of Object.entries(r.rules)) {
@@ -63,27 +71,10 @@ export function normalizeSettings(raw: unknown): { settings: RungsSettings; warn
       else warnings.push(`rungs.rules.${id}: "${String(sev)}" is not ${SEVERITY_WORDS}`);
     }
   }
-  let paces = typeof r.paces === 'string' && r.paces.trim() ? r.paces : d.paces;
-  if (paces !== d.paces && parsePaces(paces).error) {
-    warnings.push(`rungs.paces: ${parsePaces(paces).error}; the default is used`);
-    paces = d.paces;
-  }
   const trace = isObject(r.trace) && typeof r.trace.server === 'string' ? r.trace.server : 'off';
   return {
     settings: {
-      paces,
-      baseline: typeof r.baseline === 'number' && r.baseline > 0 ? r.baseline : null,
-      maxStep: num(r.maxStep, d.maxStep, 0),
-      weights: {
-        length: num(w.length, d.weights.length),
-        complexity: num(w.complexity, d.weights.complexity),
-        rarity: num(w.rarity, d.weights.rarity),
-      },
-      wcm: {
-        hAsFricative: bool(wcm.hAsFricative, d.wcm.hAsFricative),
-        clustersWithinSyllable: bool(wcm.clustersWithinSyllable, d.wcm.clustersWithinSyllable),
-        secondaryStressIsInitial: bool(wcm.secondaryStressIsInitial, d.wcm.secondaryStressIsInitial),
-      },
+      analysis,
       rules,
       inlayHints: { enabled: bool(isObject(r.inlayHints) ? r.inlayHints.enabled : undefined, true) },
       lexiconFiles: Array.isArray(r.lexiconFiles) ? r.lexiconFiles.filter((f): f is string => typeof f === 'string') : [],
@@ -98,16 +89,57 @@ export function normalizeSettings(raw: unknown): { settings: RungsSettings; warn
  * workspace config files and the script header): keys as in a script header without the "@".
  */
 export function toConfigObject(s: RungsSettings): Record<string, unknown> {
-  const out: Record<string, unknown> = {
-    paces: s.paces,
-    'max-step': s.maxStep,
-    weights: { ...s.weights },
-    'wcm-h-fricative': s.wcm.hAsFricative,
-    'wcm-syllable-clusters': s.wcm.clustersWithinSyllable,
-    'wcm-secondary-stress': s.wcm.secondaryStressIsInitial,
-    rules: { ...s.rules },
-  };
-  if (s.baseline !== null) out.baseline = s.baseline;
+  const out: Record<string, unknown> = { rules: { ...s.rules } };
+  for (const [key, v] of Object.entries(s.analysis)) if (v !== null && v !== undefined) out[key] = v;
   if (s.lexiconFiles.length) out.lexicon = [...s.lexiconFiles];
   return out;
+}
+
+/** Editor settings that are not analysis settings: how the editor shows them in package.json. */
+const EDITOR_ONLY: Record<string, Record<string, unknown>> = {
+  'rungs.rules': {
+    type: 'object',
+    default: {},
+    additionalProperties: { type: 'string', enum: ['error', 'warning', 'info', 'hint', 'off'] },
+    markdownDescription:
+      'Severity per rule id (`error`, `warning`, `info`, `hint`, or `off` to silence it), e.g. ' +
+      `\`{ "${stepTooBig.id}": "error", "${thinRung.id}": "off" }\`. The rule id is shown with each problem.`,
+  },
+  'rungs.inlayHints.enabled': { type: 'boolean', default: true, markdownDescription: 'Show difficulty and duration at the end of each item.' },
+  'rungs.lexiconFiles': {
+    type: 'array',
+    items: { type: 'string' },
+    default: [],
+    markdownDescription:
+      'Workspace lexicon files of pronunciations (`Okafor = OW0 K AA1 F AO0 R` per line), relative to the workspace folder or absolute, and inside it (files elsewhere are refused). `@say` lines in a script win over them.',
+  },
+  'rungs.trace.server': {
+    type: 'string',
+    enum: ['off', 'messages', 'verbose'],
+    default: 'off',
+    enumDescriptions: ['No trace.', 'Requests and notifications.', 'Requests and notifications with their parameters.'],
+    markdownDescription: 'Traces the communication between VS Code and the Rungs language server in the "Rungs" output channel.',
+  },
+};
+
+/** The JSON schema of one table setting as an editor setting. */
+function schemaOf(spec: SettingSpec & { editor: NonNullable<SettingSpec['editor']> }): Record<string, unknown> {
+  const type =
+    spec.type === 'yes-no' ? 'boolean' : spec.type === 'weights' ? 'object' : spec.type === 'paces' || spec.type === 'choice' || spec.type === 'text' ? 'string' : 'number';
+  const out: Record<string, unknown> = { type: spec.default === null ? [type, 'null'] : type, default: spec.default };
+  if (spec.range && type === 'number') Object.assign(out, { minimum: spec.range.min, maximum: spec.range.max });
+  if (spec.values && type === 'string' && spec.type === 'choice') out.enum = spec.values;
+  return { ...out, ...spec.editor.schema, markdownDescription: spec.editor.markdownDescription };
+}
+
+/** package.json's `contributes.configuration`, generated from the table (a test keeps them equal). */
+export function editorConfiguration(): { title: string; properties: Record<string, Record<string, unknown>> } {
+  const entries: [string, Record<string, unknown>][] = [
+    ...EDITOR_SETTINGS.map((s): [string, Record<string, unknown>] => [`rungs.${s.editor.name}`, schemaOf(s)]),
+    ...Object.entries(EDITOR_ONLY),
+  ];
+  return {
+    title: 'Rungs',
+    properties: Object.fromEntries(entries.map(([name, schema], i) => [name, { ...schema, scope: 'resource', order: i + 1 }])),
+  };
 }

@@ -6,12 +6,6 @@ import { lineBreaks } from '../core/parse';
 import { sortRungEdit } from '../rules/unsortedRung';
 import type { Snapshot } from './documents';
 
-/** The line ending a text uses ("\n" when it has none). */
-export function eolOf(text: string): string {
-  const m = /\r\n|\r|\n/.exec(text);
-  return m ? m[0] : '\n';
-}
-
 const needsSort = new WeakMap<RungAnalysis, boolean>();
 
 /**
@@ -27,7 +21,7 @@ export function rungNeedsSort(s: Snapshot, rung: RungAnalysis): boolean {
 /** The edit that sorts a rung, or null when it is already in order (or has fewer than two items). */
 export function sortRung(s: Snapshot, rung: RungAnalysis): TextEdit | null {
   const dir = s.analysis.options.direction === 'falling' ? -1 : 1;
-  const e = sortRungEdit({ analysis: s.analysis, lines: s.lines, text: s.text, settings: { severities: {} } }, rung, dir);
+  const e = sortRungEdit({ analysis: s.analysis, lines: s.lines, text: s.text }, rung, dir);
   if (!e) return null;
   const breaks = lineBreaks(s.text);
   const current = s.lines.slice(e.line, e.endLine + 1).map((l, i, a) => (i < a.length - 1 ? l + breaks[e.line + i] : l)).join('');

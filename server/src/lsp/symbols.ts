@@ -1,7 +1,7 @@
 // Outline and folding: rungs with their items as children; one folding range per rung.
 import { FoldingRangeKind, SymbolKind, type DocumentSymbol, type FoldingRange } from 'vscode-languageserver/node';
 import type { Snapshot } from './documents';
-import { diff } from './format';
+import { diff } from './display';
 
 function lastLine(s: Snapshot, index: number): number {
   const rungs = s.analysis.rungs;

@@ -4,7 +4,7 @@ import { basename, dirname } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { FileSystemWatcher } from 'vscode-languageserver/node';
 import { CONFIG_FILE_NAMES } from '../config/resolve';
-import { uriToPath } from './documents';
+import { uriToPath } from '../node/nodeFs';
 
 /**
  * Config files are watched by name everywhere (a new one in any folder may apply to a script);

@@ -1,6 +1,6 @@
 // bad-directive: a `// rungs:` comment that names an unknown rule or is not understood.
-// Directives are read by lint() itself, so this file only holds the rule's metadata and docs;
-// the reading lives in directives.ts beside it.
+// The reading lives in directives.ts beside it (lint() uses it to silence rules too).
+import { readDirectives } from './directives';
 import type { Rule } from './types';
 
 export const badDirective: Rule = {
@@ -16,6 +16,7 @@ export const badDirective: Rule = {
     'an unknown verb, or no id is reported here and silences nothing for the bad part. A',
     'directive naming this rule cannot silence itself.',
   ].join(' '),
-  // Reported by lint() itself while reading directives (server/src/rules/directives.ts).
-  check() {},
+  check(ctx, report) {
+    for (const p of readDirectives(ctx.analysis.script.comments, ctx.lines, ctx.ruleIds, badDirective.id).problems) report(p);
+  },
 };

@@ -2,9 +2,10 @@
 //   // rungs: allow item-outlier, duplicate-item     -> the next line that is not blank or a comment
 //   // rungs: allow-file pace-above-norm               -> the whole script
 // Unknown ids and verbs are problems of their own (bad-directive), never silently ignored.
-import { editDistance } from '../core/options';
+import { nearestName } from '../core/nearest';
 import type { CommentLine, Problem } from '../core/types';
 import { excerpt } from '../core/excerpt';
+import type { Report } from './types';
 
 export const DIRECTIVE_PREFIX = 'rungs:';
 export const DIRECTIVE_VERBS = ['allow', 'allow-file'] as const;
@@ -14,20 +15,12 @@ export interface Directives {
   file: Set<string>;
   /** Rule ids silenced per 0-based line. */
   lines: Map<number, Set<string>>;
-  problems: Problem[];
+  /** Malformed directives, for the bad-directive rule to report (it adds its id). */
+  problems: Parameters<Report>[0][];
 }
 
-function nearest(id: string, known: string[]): string | null {
-  let best: string | null = null;
-  let bestD = Infinity;
-  for (const k of known) {
-    const d = editDistance(id.toLowerCase(), k);
-    if (d < bestD) [best, bestD] = [k, d];
-  }
-  return best !== null && bestD <= Math.max(2, Math.floor(id.length / 3)) ? best : null;
-}
-
-export function readDirectives(comments: CommentLine[], lines: string[], knownIds: string[]): Directives {
+/** Reads the directives; `ownId` (bad-directive's id) cannot be silenced by one. */
+export function readDirectives(comments: CommentLine[], lines: string[], knownIds: readonly string[], ownId: string): Directives {
   const out: Directives = { file: new Set(), lines: new Map(), problems: [] };
   const commentLines = new Set(comments.map((c) => c.line));
   for (const c of comments) {
@@ -38,7 +31,7 @@ export function readDirectives(comments: CommentLine[], lines: string[], knownId
     if (!m) continue;
     const verbStart = bodyStart + m[1].length;
     const bad = (message: string, from: number, to: number, fix?: Problem['fix']) =>
-      out.problems.push({ rule: 'bad-directive', severity: 'warning', message, line: c.line, character: from, endLine: c.line, endCharacter: to, fix });
+      out.problems.push({ message, line: c.line, character: from, endLine: c.line, endCharacter: to, fix });
     const verb = m[2].toLowerCase();
     if (!(DIRECTIVE_VERBS as readonly string[]).includes(verb)) {
       bad(`unknown directive "${excerpt(m[2])}": write "// rungs: allow RULE" (next line) or "// rungs: allow-file RULE"`, verbStart, verbStart + Math.max(1, m[2].length));
@@ -52,10 +45,10 @@ export function readDirectives(comments: CommentLine[], lines: string[], knownId
       const id = t[0];
       const from = restStart + t.index;
       if (knownIds.includes(id.toLowerCase())) {
-        if (id.toLowerCase() !== 'bad-directive') ids.push(id.toLowerCase());
+        if (id.toLowerCase() !== ownId) ids.push(id.toLowerCase());
         continue;
       }
-      const near = nearest(id, knownIds);
+      const near = nearestName(id, knownIds);
       bad(
         `unknown rule "${excerpt(id)}" in a directive${near ? `; did you mean "${near}"?` : ''}`,
         from,

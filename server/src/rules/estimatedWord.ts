@@ -1,4 +1,5 @@
 // estimated-word: a word with no dictionary entry and no override, pronounced by estimate.
+import { isEstimated } from '../core/pronounce';
 import type { TextEdit } from '../core/types';
 import { eachRung, type Rule, type RuleContext } from './types';
 import { excerpt } from '../core/excerpt';
@@ -43,7 +44,7 @@ export const estimatedWord: Rule = {
       // The item already counts its estimated words: most items have none to look through.
       if (it.estimatedWords === 0) continue;
       for (const w of it.words) {
-        if (w.source !== 'estimate' && w.source !== 'morphology') continue;
+        if (!isEstimated(w)) continue;
         const phones = w.phones.join(' ');
         const word = w.surface.toLowerCase() === w.spoken ? w.surface : w.spoken;
         const at = { line: it.node.line, character: w.start, endLine: it.node.line, endCharacter: w.end };

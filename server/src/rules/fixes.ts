@@ -37,41 +37,60 @@ function offset(starts: number[], text: string, line: number, character: number)
   return Math.min(starts[line] + character, text.length);
 }
 
-export function applyFixes(text: string, fixes: Fix[]): { text: string; applied: number; skipped: number } {
+/** The edits of fixes chosen whole (see the header), in document order, with what was left out. */
+function chooseEdits(text: string, fixes: Fix[]): { edits: TextEdit[]; spans: Span[]; applied: number; skipped: number } {
   const starts = lineStarts(text);
-  const taken: Span[] = [];
+  const taken: { span: Span; edit: TextEdit }[] = [];
   const keys = new Set<string>();
   let applied = 0;
   let skipped = 0;
   for (const fix of fixes) {
     const spans = fix.edits.map((e: TextEdit) => ({
-      start: offset(starts, text, e.line, e.character),
-      end: offset(starts, text, e.endLine, e.endCharacter),
-      newText: e.newText,
+      edit: e,
+      span: { start: offset(starts, text, e.line, e.character), end: offset(starts, text, e.endLine, e.endCharacter), newText: e.newText },
     }));
-    const fresh = spans.filter((s) => !keys.has(`${s.start}:${s.end}:${s.newText}`));
+    const fresh = spans.filter(({ span: s }) => !keys.has(`${s.start}:${s.end}:${s.newText}`));
     if (!fresh.length) {
       applied++;
       continue;
     }
-    const clash = fresh.some((s) =>
-      taken.some((t) => s.start < t.end && t.start < s.end || (s.start === s.end && t.start === t.end && s.start === t.start)),
+    // Touching edits (one ends where the next starts) are both taken; two insertions at one point
+    // clash, since their order would be a guess.
+    const clash = fresh.some(({ span: s }) =>
+      taken.some(({ span: t }) => (s.start < t.end && t.start < s.end) || (s.start === s.end && t.start === t.end && s.start === t.start)),
     );
     if (clash) {
       skipped++;
       continue;
     }
-    for (const s of fresh) {
-      taken.push(s);
-      keys.add(`${s.start}:${s.end}:${s.newText}`);
+    for (const f of fresh) {
+      taken.push(f);
+      keys.add(`${f.span.start}:${f.span.end}:${f.span.newText}`);
     }
     applied++;
   }
-  // Built in one pass from the start (splicing from the end copies the whole text per edit).
-  taken.sort((a, b) => a.start - b.start || a.end - b.end);
+  // Document order; at one offset an insertion comes before the replacement starting there, which
+  // is the order both an LSP client and applyEdits below give it.
+  taken.sort((a, b) => a.span.start - b.span.start || a.span.end - b.span.end);
+  return { edits: taken.map((t) => t.edit), spans: taken.map((t) => t.span), applied, skipped };
+}
+
+/**
+ * The one batch of edits `rungs lint --fix` and the editor's fix-all apply to a text: every batch
+ * fix of the problems, whole or not at all, in document order. Both edges call this, so they make
+ * exactly the same change.
+ */
+export function batchEdits(text: string, problems: Problem[]): TextEdit[] {
+  return chooseEdits(text, batchFixes(problems)).edits;
+}
+
+export function applyFixes(text: string, fixes: Fix[]): { text: string; applied: number; skipped: number } {
+  const { spans, applied, skipped } = chooseEdits(text, fixes);
+  // Built in one pass from the start (splicing from the end copies the whole text per edit); an
+  // insertion at a replacement's start was sorted before it and so lands in front of its new text.
   const parts: string[] = [];
   let at = 0;
-  for (const s of taken) {
+  for (const s of spans) {
     parts.push(text.slice(at, s.start), s.newText);
     at = s.end;
   }

@@ -1,6 +1,8 @@
 // The rule registry and the one entry point both the CLI and the language server call.
+import type { Finding, FindingKind } from '../core/findings';
 import type { Analysis, Problem, RungAnalysis } from '../core/types';
 import { splitLines } from '../core/parse';
+import { pushAll } from '../core/arrays';
 import { badConfig } from './badConfig';
 import { badDirective } from './badDirective';
 import { badValue } from './badValue';
@@ -8,6 +10,7 @@ import { badVariant } from './badVariant';
 import { isAllowed, readDirectives } from './directives';
 import { duplicateItem } from './duplicateItem';
 import { estimatedWord } from './estimatedWord';
+import { internalError, internalFailure } from './internalError';
 import { itemOutlier } from './itemOutlier';
 import { itemTooLong } from './itemTooLong';
 import { paceAboveNorm } from './paceAboveNorm';
@@ -53,9 +56,24 @@ export const RULES: Rule[] = [
   unusedOverride,
   badConfig,
   badDirective,
+  internalError,
 ];
 
 export const RULE_IDS: string[] = RULES.map((r) => r.id);
+
+/** The rules built from findings; the compiler checks below that every kind has one of them. */
+const FINDING_RULES = [unknownKey, badValue, unknownPhone, badVariant, badConfig, internalError] as const;
+type Unowned = Exclude<FindingKind, (typeof FINDING_RULES)[number]['kinds'][number]>;
+export const EVERY_KIND_OWNED: [Unowned] extends [never] ? true : never = true;
+
+/** The rule that renders each finding kind; a kind claimed by two rules is a mistake caught here. */
+export const OWNER = new Map<FindingKind, Rule>();
+for (const r of RULES) {
+  for (const k of r.kinds ?? []) {
+    if (OWNER.has(k)) throw new Error(`finding kind "${k}" is claimed by ${OWNER.get(k)!.id} and ${r.id}`);
+    OWNER.set(k, r);
+  }
+}
 
 export function ruleById(id: string): Rule | undefined {
   return RULES.find((r) => r.id === id);
@@ -69,6 +87,23 @@ export function compareProblems(a: Problem, b: Problem): number {
     (a.rule < b.rule ? -1 : a.rule > b.rule ? 1 : 0) ||
     (a.message < b.message ? -1 : a.message > b.message ? 1 : 0)
   );
+}
+
+/** True when a problem's range lies within the script's lines. */
+function inside(lines: string[], p: Problem): boolean {
+  const ok = (line: number, ch: number) => line >= 0 && line < lines.length && ch >= 0 && ch <= lines[line].length;
+  return ok(p.line, p.character) && ok(p.endLine, p.endCharacter) && (p.line < p.endLine || (p.line === p.endLine && p.character <= p.endCharacter));
+}
+
+/** Words findings outside a script (config and lexicon files) with the rules that own their kinds. */
+export function renderFindings(findings: Finding[]): Problem[] {
+  return findings.map((f) => {
+    const rule = OWNER.get(f.kind);
+    if (!rule?.describe) throw new Error(`no rule renders "${f.kind}" findings`);
+    const { line, character, endLine, endCharacter } = f;
+    const d = rule.describe(f);
+    return { line, character, endLine, endCharacter, rule: rule.id, ...d, severity: d.severity ?? rule.defaultSeverity };
+  });
 }
 
 /**
@@ -103,18 +138,25 @@ export function lint(
   lines: string[] = splitLines(text),
 ): Problem[] {
   const problems: Problem[] = [];
-  for (const p of analysis.problems) problems.push(p);
-  const ctx = { analysis, lines, text, settings };
+  // A copy: failures caught below are added for internal-error, which runs last.
+  const ctx: RuleContext = { analysis, lines, text, settings, findings: [...analysis.findings], ruleIds: RULE_IDS };
   for (const rule of RULES) {
-    if (rule.checkRung) {
-      for (const r of analysis.rungs) for (const p of rungReports(ctx, rule, r)) problems.push(p);
-      continue;
+    // The registry boundary: a rule that throws, or reports outside the script, becomes one
+    // internal-error problem and the other rules still run.
+    const mine: Problem[] = [];
+    try {
+      if (rule.checkRung) for (const r of analysis.rungs) pushAll(mine, rungReports(ctx, rule, r));
+      else rule.check(ctx, (p) => mine.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
+      const outside = mine.find((p) => !inside(lines, p));
+      if (outside) throw new Error(`reported a position outside the script (line ${outside.line + 1}, column ${outside.character + 1})`);
+      pushAll(problems, mine);
+    } catch (err) {
+      ctx.findings.push(internalFailure(rule.id, err));
     }
-    rule.check(ctx, (p) => problems.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
   }
-  const directives = readDirectives(analysis.script.comments, lines, RULE_IDS);
+  const directives = readDirectives(analysis.script.comments, lines, RULE_IDS, badDirective.id);
   const out: Problem[] = [];
-  for (const p of [...problems.filter((q) => !isAllowed(directives, q)), ...directives.problems]) {
+  for (const p of problems.filter((q) => !isAllowed(directives, q))) {
     if (p.fix === undefined) delete p.fix;
     const o = settings.severities[p.rule];
     if (o === 'off') continue;

@@ -1,10 +1,7 @@
 // pace-above-norm: a pace faster than adults read aloud.
+import { fasterThanReadingSyllables, fasterThanReadingWords, READING_NORM_SPS } from '../core/pace';
 import type { Rule } from './types';
-import { paceRange, rungLabel, rungSyllableRate, rungWordRate, fmtLimit as f2 } from './shared';
-
-/** English read text runs near 6.2 syllables/s (Pellegrino, Coupé & Marsico 2011, Language 87(3); from memory). */
-export const READING_NORM_SPS = 6.2;
-
+import { reportPaces, rungLabel, rungSyllableRate, rungWordRate, fmtLimit as f2 } from './shared';
 
 export const paceAboveNorm: Rule = {
   id: 'pace-above-norm',
@@ -23,22 +20,17 @@ export const paceAboveNorm: Rule = {
   ].join(' '),
   check(ctx, report) {
     const norm = ctx.analysis.options.readingNormWps;
-    const done = new Set<string>();
-    for (const r of ctx.analysis.rungs) {
-      if (!r.items.length) continue;
-      const range = paceRange(ctx, r);
-      for (const pace of r.paces) {
-        const key = `${range.line}:${pace.label}`;
-        if (done.has(key)) continue;
+    reportPaces(
+      ctx,
+      (r, pace) => {
         const wps = rungWordRate(r, pace);
         const sps = rungSyllableRate(r, pace);
         const reasons: string[] = [];
-        if (wps > norm + 1e-9) reasons.push(`${f2(wps)} words/s, above the adult reading-aloud rate of ${f2(norm)} words/s (Brysbaert 2019)`);
-        if (sps > READING_NORM_SPS + 1e-9) reasons.push(`${f2(sps)} syllables/s, above the ${READING_NORM_SPS} syllables/s of read English`);
-        if (!reasons.length) continue;
-        done.add(key);
-        report({ ...range, message: `pace ${pace.label} on ${rungLabel(r)} implies ${reasons.join(' and ')}` });
-      }
-    }
+        if (fasterThanReadingWords(wps, norm)) reasons.push(`${f2(wps)} words/s, above the adult reading-aloud rate of ${f2(norm)} words/s (Brysbaert 2019)`);
+        if (fasterThanReadingSyllables(sps)) reasons.push(`${f2(sps)} syllables/s, above the ${READING_NORM_SPS} syllables/s of read English`);
+        return reasons.length ? `pace ${pace.label} on ${rungLabel(r)} implies ${reasons.join(' and ')}` : null;
+      },
+      report,
+    );
   },
 };

@@ -1,6 +1,7 @@
 // pace-below-baseline: a pace slower than the client already speaks unassisted (a fact, not advice).
+import { baselineRatio, belowBaseline } from '../core/pace';
 import type { Rule } from './types';
-import { paceRange, rungLabel, rungWordRate, fmtLimit as f2 } from './shared';
+import { reportPaces, rungLabel, rungWordRate, fmtLimit as f2 } from './shared';
 
 export const paceBelowBaseline: Rule = {
   id: 'pace-below-baseline',
@@ -23,21 +24,15 @@ export const paceBelowBaseline: Rule = {
   check(ctx, report) {
     const base = ctx.analysis.options.baseline;
     if (!base || !(base > 0)) return;
-    const done = new Set<string>();
-    for (const r of ctx.analysis.rungs) {
-      if (!r.items.length) continue;
-      const range = paceRange(ctx, r);
-      for (const pace of r.paces) {
-        const key = `${range.line}:${pace.label}`;
+    reportPaces(
+      ctx,
+      (r, pace) => {
         const wps = rungWordRate(r, pace);
-        if (done.has(key) || !(wps < base - 1e-9)) continue;
-        done.add(key);
+        if (!belowBaseline(wps, base)) return null;
         const implied = pace.unit === 'wps' ? '' : ` (${f2(wps)} words/s on ${rungLabel(r)})`;
-        report({
-          ...range,
-          message: `pace ${pace.label}${implied} is below the client's baseline of ${f2(base)} wps (ratio ${f2(wps / base)})`,
-        });
-      }
-    }
+        return `pace ${pace.label}${implied} is below the client's baseline of ${f2(base)} wps (ratio ${f2(baselineRatio(wps, base)!)})`;
+      },
+      report,
+    );
   },
 };

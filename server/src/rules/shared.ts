@@ -2,8 +2,9 @@
 // reads (the composite difficulty or one metric), robust statistics, and where paces were set.
 import { median } from '../core/difficulty';
 import { formatNumber } from '../core/pace';
-import type { ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
-import type { LadderMetric, RuleContext } from './types';
+import { lineEnding } from '../core/parse';
+import type { Analysis, ItemAnalysis, Pace, Range, RelatedInfo, RungAnalysis, Setting } from '../core/types';
+import type { LadderMetric, LintSettings, Report, RuleContext } from './types';
 import { maxOf, minOf } from '../core/arrays';
 import { excerpt } from '../core/excerpt';
 
@@ -53,7 +54,7 @@ export interface RungStat {
   max: number;
 }
 
-export function ladderMetric(ctx: RuleContext): LadderMetric {
+export function ladderMetric(ctx: Pick<RuleContext, 'settings'>): LadderMetric {
   return ctx.settings.ladder?.metric ?? 'difficulty';
 }
 
@@ -64,7 +65,7 @@ export function ladderMetric(ctx: RuleContext): LadderMetric {
  */
 const memos = new WeakMap<object, Map<string, unknown>>();
 
-export function memo<T>(ctx: RuleContext, key: string, make: () => T): T {
+export function memo<T>(ctx: Pick<RuleContext, 'analysis'>, key: string, make: () => T): T {
   let m = memos.get(ctx.analysis);
   if (!m) memos.set(ctx.analysis, (m = new Map()));
   if (!m.has(key)) m.set(key, make());
@@ -72,8 +73,8 @@ export function memo<T>(ctx: RuleContext, key: string, make: () => T): T {
 }
 
 /** The script's line ending, for fixes that insert lines. */
-export function eolOf(ctx: RuleContext): string {
-  return memo(ctx, 'eol', () => (ctx.text.includes('\r\n') ? '\r\n' : '\n'));
+export function eolOf(ctx: Pick<RuleContext, 'analysis' | 'text'>): string {
+  return memo(ctx, 'eol', () => lineEnding(ctx.text));
 }
 
 const valuesByRung = new WeakMap<RungAnalysis, Map<LadderMetric, number[]>>();
@@ -90,8 +91,31 @@ export function rungValues(rung: RungAnalysis, metric: LadderMetric): number[] {
   return v;
 }
 
-/** Summaries of every rung with items on the ladder metric, computed once per lint run. */
-export function rungStats(ctx: RuleContext): RungStat[] {
+/** The largest step the ladder is judged by, and where it was set; undefined: no limit. */
+export interface StepLimit {
+  value: number | undefined;
+  /** `@max-step` (difficulty ladders without a configured step) or `ladder.maxStep`. */
+  source: '@max-step' | 'ladder.maxStep';
+}
+
+/**
+ * The step limit of a ladder: for `difficulty`, `ladder.maxStep` when configured, else the
+ * script's `@max-step`; for another metric only `ladder.maxStep` (difficulty points do not carry
+ * over). step-too-big, the ladder view, the rung hover and the code lens all read this.
+ */
+export function stepLimit(analysis: Analysis, settings: LintSettings): StepLimit {
+  const metric = settings.ladder?.metric ?? 'difficulty';
+  const configured = settings.ladder?.maxStep;
+  if (metric === 'difficulty' && configured === undefined) return { value: analysis.options.maxStep, source: '@max-step' };
+  return { value: configured, source: 'ladder.maxStep' };
+}
+
+/** One rung's summary on the ladder metric in force (undefined for a rung without items). */
+export function rungStatsByIndex(analysis: Analysis, settings: LintSettings): Map<number, RungStat> {
+  return new Map(rungStats({ analysis, settings }).map((st) => [st.rung.index, st]));
+}
+
+export function rungStats(ctx: Pick<RuleContext, 'analysis' | 'settings'>): RungStat[] {
   const metric = ladderMetric(ctx);
   return memo(ctx, `stats:${metric}`, () =>
     ctx.analysis.rungs
@@ -161,6 +185,27 @@ export function rungTotals(r: RungAnalysis): { words: number; syllables: number 
     totals.set(r, t);
   }
   return t;
+}
+
+/**
+ * Visits each pace of each rung with items, and reports what `judge` says about it (a message, or
+ * null when the pace is fine) on the line that set the pace. A pace set once in the header and
+ * inherited by several rungs is reported once, on the first rung it is judged on.
+ */
+export function reportPaces(ctx: RuleContext, judge: (r: RungAnalysis, pace: Pace) => string | null, report: Report): void {
+  const done = new Set<string>();
+  for (const r of ctx.analysis.rungs) {
+    if (!r.items.length) continue;
+    const range = paceRange(ctx, r);
+    for (const pace of r.paces) {
+      const key = `${range.line}:${pace.label}`;
+      if (done.has(key)) continue;
+      const message = judge(r, pace);
+      if (message === null) continue;
+      done.add(key);
+      report({ ...range, message });
+    }
+  }
 }
 
 /** Words per second a pace implies on a rung (sps paces depend on the rung's syllables per word). */

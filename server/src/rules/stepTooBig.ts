@@ -1,6 +1,6 @@
 // step-too-big: neighbouring rungs whose medians are further apart than the largest allowed step.
 import type { Rule } from './types';
-import { fmt, fmtLimit, METRIC_NAMES, ladderMetric, rungLabel, rungRange, rungRelated, rungStats, sign } from './shared';
+import { fmt, fmtLimit, METRIC_NAMES, ladderMetric, rungLabel, rungRange, rungRelated, rungStats, sign, stepLimit } from './shared';
 
 export const stepTooBig: Rule = {
   id: 'step-too-big',
@@ -17,9 +17,8 @@ export const stepTooBig: Rule = {
   ].join(' '),
   check(ctx, report) {
     const metric = ladderMetric(ctx);
-    const limit = metric === 'difficulty' ? ctx.settings.ladder?.maxStep ?? ctx.analysis.options.maxStep : ctx.settings.ladder?.maxStep;
+    const { value: limit, source } = stepLimit(ctx.analysis, ctx.settings);
     if (limit === undefined || !(limit > 0)) return;
-    const source = metric === 'difficulty' && ctx.settings.ladder?.maxStep === undefined ? ' (@max-step)' : ' (ladder.maxStep)';
     const what = metric === 'difficulty' ? '' : ` ${METRIC_NAMES[metric]}`;
     const stats = rungStats(ctx);
     const dir = sign(ctx);
@@ -32,7 +31,7 @@ export const stepTooBig: Rule = {
         ...rungRange(ctx, cur.rung),
         message:
           `${rungLabel(cur.rung)} median${what} ${fmt(cur.median)} is ${fmt(step)} ${dir === 1 ? 'above' : 'below'} ` +
-          `${rungLabel(prev.rung)} (${fmt(prev.median)}); largest step is ${fmtLimit(limit)}${source}`,
+          `${rungLabel(prev.rung)} (${fmt(prev.median)}); largest step is ${fmtLimit(limit)} (${source})`,
         related: [rungRelated(ctx, prev.rung, `${rungLabel(prev.rung)}: median ${fmt(prev.median)}`)],
       });
     }

@@ -1,5 +1,6 @@
 // The shape every ladder/quality rule shares. One rule per file, metadata first; the id is the
 // join key everywhere (LSP diagnostic code and docs link, SARIF ruleId, JSON output, settings).
+import type { Finding, FindingKind } from '../core/findings';
 import type { Analysis, Fix, Problem, RelatedInfo, RungAnalysis, Severity } from '../core/types';
 
 export interface RuleContext {
@@ -10,6 +11,20 @@ export interface RuleContext {
   text: string;
   /** Lint settings in force (ladder metric and thresholds); severities are applied by lint(). */
   settings: LintSettings;
+  /**
+   * What the core could not read (the analysis's findings), plus failures of earlier rules caught
+   * at the registry boundary. A rule renders the kinds it owns (`Rule.kinds`).
+   */
+  findings: Finding[];
+  /** Every registered rule id (directives name them). */
+  ruleIds: readonly string[];
+}
+
+/** A finding turned into words: the rule adds its id and the finding's range. */
+export interface Described {
+  message: string;
+  severity?: Severity;
+  fix?: Fix;
 }
 
 export interface Report {
@@ -34,6 +49,10 @@ export interface Rule {
   /** A paragraph for the docs: what it checks, the numbers it uses, how to fix it. */
   docs: string;
   check(ctx: RuleContext, report: Report): void;
+  /** The finding kinds this rule owns (core/findings.ts); each kind has exactly one owner. */
+  kinds?: readonly FindingKind[];
+  /** Words one finding of an owned kind (also used for findings in config and lexicon files). */
+  describe?(f: Finding): Described;
   /**
    * A rung-local rule also checks one rung at a time: what it reports about a rung depends only on
    * that rung, the script's settings and head, and the lint settings. lint() keeps each rung's

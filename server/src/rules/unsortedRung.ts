@@ -9,7 +9,7 @@ import { fmt, memo, rungLabel, rungRange, sign } from './shared';
  * comment lines directly above it (no blank between); blank, setting and detached comment lines
  * keep their places. Lines are moved byte for byte, so nothing is lost or altered.
  */
-export function sortRungEdit(ctx: RuleContext, r: RungAnalysis, dir: 1 | -1): TextEdit | null {
+export function sortRungEdit(ctx: Pick<RuleContext, 'analysis' | 'lines' | 'text'>, r: RungAnalysis, dir: 1 | -1): TextEdit | null {
   const { lines } = ctx;
   const comments = memo(ctx, 'commentLines', () => new Set(ctx.analysis.script.comments.map((c) => c.line)));
   const blocks = r.items.map((it) => {

@@ -7,7 +7,7 @@ import { counts, type LintRun } from './types';
 
 const COLOURS: Record<Severity, string> = { error: '31', warning: '33', info: '36', hint: '90' };
 
-export function formatText(run: LintRun, colour = false): string {
+export function formatLintText(run: LintRun, colour = false): string {
   const paint = (code: string, s: string) => (colour ? `\u001b[${code}m${s}\u001b[0m` : s);
   const lines: string[] = [];
   const all = run.results.flatMap((r) => r.problems);

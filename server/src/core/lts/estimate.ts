@@ -151,7 +151,7 @@ function resolveStem(word: string, data: WordData, depth: number): Analysis | un
   const phones = stem(word, data);
   if (phones !== undefined) return { phones, how: `'${word}'` };
   // A stem that is itself analysed ("walker" in "walkers") keeps its own explanation.
-  return depth > 0 ? analyse(word, data, depth - 1) : undefined;
+  return depth > 0 ? analyzeWord(word, data, depth - 1) : undefined;
 }
 
 function trySuffixes(word: string, data: WordData, depth: number): Analysis | undefined {
@@ -202,7 +202,7 @@ function tryCompound(word: string, data: WordData): Analysis | undefined {
   return fallback;
 }
 
-function analyse(word: string, data: WordData, depth: number): Analysis | undefined {
+function analyzeWord(word: string, data: WordData, depth: number): Analysis | undefined {
   return trySuffixes(word, data, depth) ?? tryCompound(word, data);
 }
 
@@ -214,7 +214,7 @@ function analyse(word: string, data: WordData, depth: number): Analysis | undefi
  */
 export function estimatePronunciation(word: string, data: WordData): Estimate {
   const spelling = word.toLowerCase().replace(/[^a-z']/g, '');
-  const found = spelling.length >= 4 ? analyse(spelling, data, 1) : undefined;
+  const found = spelling.length >= 4 ? analyzeWord(spelling, data, 1) : undefined;
   if (found !== undefined) {
     const how = found.how.startsWith("'") ? `stem ${found.how}` : found.how;
     return { phones: found.phones, source: 'morphology', how };

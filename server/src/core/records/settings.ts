@@ -1,9 +1,9 @@
 // Settings of the records side: the benefit mark, the filler list and the readiness rule. They
-// live in AnalysisOptions (`options.records`) and are read by the same key table as every other
-// setting (config files, editor settings), in a block of their own.
-import type { KeySpec } from '../options';
+// live in AnalysisOptions (`options.records`) and are a block of the one settings table
+// (core/settings.ts), read like every other setting (headers, config files).
+import type { SettingSpec } from '../settings';
 import { excerpt } from '../excerpt';
-import { outOfRange } from '../ranges';
+import { NUMBER_RANGES, outOfRange } from '../ranges';
 
 export interface RecordsOptions {
   /** Paced/unassisted ratio that counts as a meaningful benefit (common practice: 1.2). */
@@ -25,11 +25,16 @@ export function defaultRecordsOptions(): RecordsOptions {
 
 const NUMBER = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*$/;
 
-export const RECORDS_KEYS: KeySpec[] = [
+const DEFAULTS = defaultRecordsOptions();
+
+export const RECORDS_KEYS: SettingSpec[] = [
   {
     key: 'benefit-mark',
     aliases: [],
     scope: 'script',
+    type: 'number',
+    default: DEFAULTS.benefitMark,
+    range: NUMBER_RANGES['benefit-mark'],
     summary: 'Rate records: paced/unassisted words-per-second ratio that marks a meaningful benefit (default 1.2).',
     example: '1.2',
     apply(value, o) {
@@ -45,6 +50,8 @@ export const RECORDS_KEYS: KeySpec[] = [
     key: 'fillers',
     aliases: [],
     scope: 'script',
+    type: 'labels',
+    default: DEFAULTS.fillers.join(', '),
     summary: 'Rate records: words left out when counting a transcript (default um, uh, er, erm, hmm).',
     example: 'um, uh, er',
     apply(value, o) {
@@ -57,6 +64,9 @@ export const RECORDS_KEYS: KeySpec[] = [
     key: 'ready-sessions',
     aliases: [],
     scope: 'script',
+    type: 'integer',
+    default: DEFAULTS.readySessions,
+    range: NUMBER_RANGES['ready-sessions'],
     summary: 'Rate records: latest sessions that must meet the mark before a rung is called ready (default 2).',
     example: '2',
     apply(value, o) {
@@ -72,6 +82,10 @@ export const RECORDS_KEYS: KeySpec[] = [
     key: 'accuracy-floor',
     aliases: [],
     scope: 'script',
+    type: 'number',
+    // "none": no floor (null in the options).
+    default: 'none',
+    range: { min: 0, max: 1 },
     summary: 'Rate records: accuracy (correct/words) the ready sessions must reach too, 0-1 or a percentage (default none).',
     example: '80%',
     apply(value, o) {

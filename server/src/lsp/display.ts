@@ -1,4 +1,5 @@
-// Number formatting shared by hovers, hints and lenses, so every view shows the same digits.
+// How numbers and text are shown in hovers, inlay hints, code lenses and symbols, so every view
+// shows the same digits.
 import { formatNumber } from '../core/pace';
 import { ESTIMATED_MARK } from './contract';
 

@@ -5,8 +5,7 @@
 // Runs of blank lines shrink to one, a rung header after an item gets a blank line before it,
 // leading blank lines go, and the file ends with exactly one line ending.
 import type { TextEdit } from 'vscode-languageserver/node';
-import { closingMarkStart, parseScript, splitLines } from '../core/parse';
-import { eolOf } from './sortRung';
+import { closingMarkStart, lineEnding, parseScript, splitLines } from '../core/parse';
 
 // No pattern here scans a run of spaces from each of its positions (`\s*,` or `(.*?)\s*$` do, and cost
 // time quadratic in the run): values are trimmed and split with string methods instead. The `s`
@@ -50,7 +49,7 @@ function formatItem(t: string): string {
   return trailer ? `${spoken} | ${trailer}` : `${spoken} |`;
 }
 
-export function formatText(text: string): string {
+export function formatScript(text: string): string {
   const lines = splitLines(text);
   const out: string[] = [];
   let lastKind: 'blank' | 'item' | 'other' = 'blank';
@@ -77,7 +76,7 @@ export function formatText(text: string): string {
     }
   }
   while (out.length && out[out.length - 1] === '') out.pop();
-  const eol = eolOf(text);
+  const eol = lineEnding(text);
   return out.length ? out.join(eol) + eol : '';
 }
 
@@ -87,7 +86,7 @@ export function itemTexts(text: string): string[] {
 }
 
 export function formatDocument(text: string): TextEdit[] {
-  const formatted = formatText(text);
+  const formatted = formatScript(text);
   if (formatted === text) return [];
   // Safety net: if the spoken text of any item would change, do not format at all.
   const a = itemTexts(text);

@@ -1,0 +1,56 @@
+// What the core and the config reader found, in domain terms: an unknown key with the nearest
+// known one, a value that cannot be read with the form it should take, a phone that is not
+// ARPAbet. They carry no rule id and no wording: the rule that owns a kind (server/src/rules/,
+// its `kinds`) turns each finding into a message, a severity and a fix.
+import type { Range } from './types';
+
+export type Finding = Range &
+  (
+    | /** A setting key Rungs does not know (script `@key` or config-file key). */ {
+        kind: 'unknown-setting';
+        key: string;
+        nearest: string | null;
+        /** Where it was written: a script (`@key`) or a config file (bare key). */
+        where: 'script' | 'config';
+        /** False where no edit can be offered (editor settings have no text to edit). */
+        fixable: boolean;
+      }
+    | { kind: 'script-key-on-rung'; key: string }
+    | { kind: 'missing-value'; key: string; example: string }
+    /** A value its reader could not read; `expected` is the reader's account of what it takes. */
+    | { kind: 'unreadable-value'; key: string; expected: string }
+    | { kind: 'setting-without-key' }
+    | { kind: 'note-without-sentence' }
+    | { kind: 'override-without-phones' }
+    | { kind: 'phone-not-arpabet'; phone: string; reason: string }
+    /** `@say word = N` with no Nth listed pronunciation (`listed` 0: the word is not listed). */
+    | { kind: 'variant-not-listed'; word: string; listed: number; variant: number }
+    /** A `word(N)` mark in an item that picks no listed pronunciation. */
+    | { kind: 'variant-mark-not-listed'; explanation: string }
+    | { kind: 'config-syntax'; explanation: string }
+    | { kind: 'config-not-object' }
+    | { kind: 'config-unreadable'; code: string }
+    /** A config entry of the wrong shape (`root`, `rules`, `ladder`, `lexicon`); `expected` says what it takes. */
+    | { kind: 'config-entry-shape'; expected: string }
+    | { kind: 'unknown-rule'; name: string; nearest: string | null; fixable: boolean }
+    | { kind: 'bad-severity'; ruleId: string; value: unknown; choices: readonly string[] }
+    | { kind: 'lexicon-missing'; name: string; path: string }
+    | { kind: 'lexicon-unreadable'; name: string; code: string }
+    /** A lexicon a config file may not read (outside its folder, or not a regular file); `reason` says which. */
+    | { kind: 'lexicon-refused'; name: string; reason: string }
+    | { kind: 'script-only-key'; key: string }
+    | { kind: 'unreadable-config-value'; key: string; example: string }
+    /** Rungs itself failed: a rule threw (its id), or the whole analysis did (null). */
+    | { kind: 'internal-failure'; rule: string | null; error: string }
+  );
+
+export type FindingKind = Finding['kind'];
+export type FindingOf<K extends FindingKind> = Extract<Finding, { kind: K }>;
+
+/** A finding's data without its range, kind by kind. */
+export type FindingData = Finding extends infer F ? (F extends Finding ? Omit<F, keyof Range> : never) : never;
+
+/** A finding at a range. */
+export function finding(range: Range, data: FindingData): Finding {
+  return { line: range.line, character: range.character, endLine: range.endLine, endCharacter: range.endCharacter, ...data } as Finding;
+}
