@@ -10,6 +10,7 @@ import { progressCommand } from './progress';
 import { cuesCommand } from './cues';
 import { audioCommand } from './audio';
 import { practiceCommand } from './practice';
+import { pronounceCommand } from './pronounce';
 
 export interface Command {
   name: string;
@@ -20,11 +21,11 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, practiceCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, practiceCommand, pronounceCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];
-  for (const c of COMMANDS) lines.push(`  ${c.name.padEnd(8)} ${c.summary}`);
+  for (const c of COMMANDS) lines.push(`  ${c.name.padEnd(10)} ${c.summary}`);
   lines.push('', 'Run `rungs <command> --help` for a command\'s options.');
   return `${lines.join('\n')}\n`;
 }
