@@ -63,9 +63,9 @@ describe('accuracy on held-out words', () => {
   const s = score(heldOut, best);
 
   it('stays at the level measured when the model was committed, far above the NRL rules', () => {
-    // Measured on all held-out words (README): 74.9 % phones exact with stress ignored, 96.6 %
-    // syllables exact; the goals of 75 % and 98 % are not yet met. The NRL rules reach 37.6 % and
-    // 93.0 % on the same words. These floors catch a regression of the model or the decoder.
+    // Measured on all held-out words (README): 75.1 % phones exact with stress ignored, 96.7 %
+    // syllables exact (the 98 % goal is not yet met). The NRL rules reach 37.6 % and 93.0 % on
+    // the same words. These floors, on a third of them, catch a regression of the model or decoder.
     expect(s.words).toBeGreaterThan(4000);
     expect(s.phonesExact!).toBeGreaterThanOrEqual(0.73);
     expect(s.syllablesExact).toBeGreaterThanOrEqual(0.955);
@@ -86,7 +86,14 @@ describe('decoding', () => {
     const c = estimateCandidates(estimator, 'okafor', 5);
     expect(c.length).toBe(5);
     expect(c.reduce((t, x) => t + x.share, 0)).toBeCloseTo(1, 6);
-    for (let k = 1; k < c.length; k++) expect(c[k].log10).toBeLessThanOrEqual(c[k - 1].log10);
+    // Exactly one primary stress ranks first (common practice: one main stress per word), then by score.
+    const primaries = (x: { phones: string[] }) => x.phones.filter((p) => p.endsWith('1')).length;
+    expect(primaries(c[0])).toBe(1);
+    for (let k = 1; k < c.length; k++) {
+      const [a, b] = [primaries(c[k - 1]) === 1, primaries(c[k]) === 1];
+      expect(a || !b).toBe(true);
+      if (a === b) expect(c[k].log10).toBeLessThanOrEqual(c[k - 1].log10);
+    }
     expect(new Set(c.map((x) => x.phones.join(' '))).size).toBe(5);
   });
 

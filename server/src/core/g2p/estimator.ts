@@ -3,7 +3,10 @@
 // that between them every letter is seen with context on both sides. Each proposes its best
 // pronunciations; every proposal is then scored by both models (the joint probability of the
 // spelling and that exact pronunciation under each), and the proposals are ranked by the sum of
-// the two log probabilities, a log-linear combination with equal weights.
+// the two log probabilities, a log-linear combination with equal weights. Proposals with exactly
+// one primary stress, as nearly every dictionary word has, rank before the others (on the
+// development words this raised primary stress exact from 85 % to 91 % and phones exact by 0.4
+// points, for 0.2 points of syllables exact).
 import { type Candidate, decode } from './decode';
 import type { G2pModel } from './model';
 
@@ -48,9 +51,10 @@ export function estimateCandidates(e: Estimator, word: string, k: number): Candi
     const log10 = scoreOf(e.forward, word, phones) + scoreOf(e.reverse, drow, reversed(phones));
     if (log10 > -Infinity) scored.push({ phones, log10 });
   }
-  scored.sort((a, b) => b.log10 - a.log10);
+  const wellFormed = (phones: string[]): number => (phones.filter((p) => p.endsWith('1')).length === 1 ? 1 : 0);
+  scored.sort((a, b) => wellFormed(b.phones) - wellFormed(a.phones) || b.log10 - a.log10);
   const top = scored.slice(0, k);
-  const best = top[0]?.log10 ?? 0;
+  const best = Math.max(...top.map((c) => c.log10));
   const total = top.reduce((t, c) => t + 10 ** (c.log10 - best), 0);
   return top.map((c) => ({ ...c, share: 10 ** (c.log10 - best) / total }));
 }
