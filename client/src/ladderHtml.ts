@@ -2,16 +2,12 @@
 // Pure functions from the server's `rungs/ladder` payload to markup, so they are unit-tested
 // without an editor. Every string that came from the script is escaped here; colours come from
 // the editor theme's CSS variables, so the view follows light, dark and high-contrast themes.
+import { escapeHtml } from '../../server/src/report/html';
 import { estimatedMark, estimatedNote } from './present';
 import { SET_MARK_CSS, setLegend, setMarks, setMarkSvg } from './ladderSets';
 import type { Ladder, LadderProblem, LadderRung, LadderStep } from './protocol';
 
-const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
-
-/** Escapes text for use in HTML/SVG content and in double- or single-quoted attributes. */
-export function escapeHtml(text: string): string {
-  return String(text).replace(/[&<>"']/g, (c) => ESCAPES[c]);
-}
+export { escapeHtml };
 
 const fmt = (n: number): string => (Number.isFinite(n) ? n.toFixed(1) : '–');
 

@@ -51,7 +51,7 @@ const serverAsSibling = {
   },
 };
 const entries = [
-  { in: 'server/src/cli/bin.ts', out: 'rungs.js', plugins: [serverAsSibling] },
+  { in: 'server/src/cli/bin.ts', out: 'rungs.js', plugins: [serverAsSibling], external: ['playwright-core'] },
   { in: 'server/src/lsp/main.ts', out: 'server.js' },
   { in: 'client/src/extension.ts', out: 'extension.js', external: ['vscode'] },
   // The benchmark calls the core in-process through this small bundle (not shipped).

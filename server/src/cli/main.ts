@@ -11,6 +11,7 @@ import { cuesCommand } from './cues';
 import { audioCommand } from './audio';
 import { practiceCommand } from './practice';
 import { pronounceCommand } from './pronounce';
+import { reportCommand } from './report';
 
 export interface Command {
   name: string;
@@ -21,7 +22,7 @@ export interface Command {
 
 export const VERSION = '0.1.0';
 
-export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, practiceCommand, pronounceCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, practiceCommand, pronounceCommand, reportCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];

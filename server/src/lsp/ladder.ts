@@ -2,8 +2,8 @@
 // a contract with client/ (keep them): `rungs/ladder`, `rungs/itemAt`, and the notification
 // `rungs/didAnalyze` sent after every analysis.
 import { NotificationType, RequestType } from 'vscode-languageserver/node';
-import { DID_ANALYZE_METHOD, ITEM_AT_METHOD, LADDER_METHOD, type ItemAt, type Ladder, type LadderStep } from './contract';
-import { RULES } from '../rules/index';
+import { DID_ANALYZE_METHOD, ITEM_AT_METHOD, LADDER_METHOD, type ItemAt, type Ladder } from './contract';
+import { ladderSteps } from '../report/ladderSteps';
 import type { Snapshot } from './documents';
 
 export type { Ladder, LadderItem, LadderRung, LadderStep, ItemAt as ItemAtResult } from './contract';
@@ -12,11 +12,8 @@ export const LadderRequest = new RequestType<{ uri: string }, Ladder | null, voi
 export const ItemAtRequest = new RequestType<{ uri: string; line: number }, ItemAt | null, void>(ITEM_AT_METHOD);
 export const DidAnalyzeNotification = new NotificationType<{ uri: string; version: number }>(DID_ANALYZE_METHOD);
 
-const round1 = (n: number) => Math.round(n * 10) / 10;
-
 export function ladder(s: Snapshot): Ladder {
   const a = s.analysis;
-  const ladderRules = new Set(RULES.filter((r) => r.category === 'ladder').map((r) => r.id));
   const title = a.script.header.find((h) => h.key === 'title')?.value.trim() || null;
   const rungs = a.rungs.map((r) => ({
     name: r.node.name,
@@ -34,23 +31,7 @@ export function ladder(s: Snapshot): Ladder {
       sets: it.sets,
     })),
   }));
-  const steps: LadderStep[] = [];
-  const withItems = a.rungs.filter((r) => r.items.length > 0);
-  for (let i = 1; i < withItems.length; i++) {
-    const from = withItems[i - 1];
-    const to = withItems[i];
-    // A ladder problem about this step sits on the later rung (its header or within it), or
-    // points at the earlier rung through its related information.
-    const end = a.rungs[to.index + 1]?.node.line ?? Infinity;
-    const p = s.problems.find(
-      (x) =>
-        ladderRules.has(x.rule) &&
-        x.line >= to.node.line &&
-        x.line < end &&
-        (x.line === to.node.line || x.related?.some((r) => r.line === from.node.line)),
-    );
-    steps.push({ from: from.index, to: to.index, delta: round1(to.median - from.median), problem: p?.rule ?? null });
-  }
+  const steps = ladderSteps(a, s.problems);
   return {
     title,
     direction: a.options.direction,

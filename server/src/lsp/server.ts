@@ -35,6 +35,7 @@ import { formatDocument } from './formatting';
 import { hover } from './hover';
 import { inlayHints } from './inlay';
 import { DidAnalyzeNotification, itemAt, ItemAtRequest, ladder, LadderRequest } from './ladder';
+import { ReportRequest, scriptReport } from './report';
 import { LEGEND, semanticTokens } from './semanticTokens';
 import { normalizeSettings } from './settings';
 import { sortRung } from './sortRung';
@@ -394,6 +395,10 @@ export function startServer(): Connection {
   connection.onRequest(new RequestType<{ uri: string }, ProgressView | null, void>(PROGRESS_METHOD), guard('rungs/progress', null, (p) => {
     const r = isRecords(p.uri) ? records(p.uri) : null;
     return r ? progressView(r.result, r.mark) : null;
+  }));
+  connection.onRequest(ReportRequest, guard('rungs/report', null, (p) => {
+    const s = snap(p.uri);
+    return s ? scriptReport(s) : null;
   }));
   connection.onRequest(ItemAtRequest, guard('rungs/itemAt', null, (p) => {
     const s = snap(p.uri);

@@ -1,0 +1,72 @@
+// The whole report document. Standalone it is one self-contained HTML file: inline CSS and SVG,
+// nothing fetched, and a Content-Security-Policy that allows the one style sheet (by hash) and no
+// script at all. In the editor's webview it takes the webview's nonce rules instead and adds a
+// Save button, the page's only script.
+import { createHash } from 'node:crypto';
+import { escapeHtml } from './html';
+import type { ScriptReport } from './model';
+import { renderItemTables, renderLadderSection, renderProblems, renderScriptHeading, renderSources } from './scriptSections';
+import { REPORT_STYLE } from './style';
+
+export interface ReportInput {
+  scripts: ScriptReport[];
+  /** Rungs version, shown in the footer. */
+  version: string;
+  caution: string;
+}
+
+export interface WebviewOptions {
+  /** The webview's `cspSource`. */
+  cspSource: string;
+  /** A fresh random nonce for the page's style and script. */
+  nonce: string;
+}
+
+/** The body of one script's section (heading, ladder, items, problems, sources, caution). */
+export function renderScriptSection(s: ScriptReport, index: number, caution: string): string {
+  return [
+    `<section class="script" id="script-${index + 1}">`,
+    renderScriptHeading(s),
+    renderLadderSection(s, `s${index + 1}`),
+    renderItemTables(s),
+    renderProblems(s),
+    renderSources(),
+    `<p class="caution">${escapeHtml(caution)}</p>`,
+    '</section>',
+  ].join('\n');
+}
+
+const SAVE_SCRIPT = `
+const vscode = acquireVsCodeApi();
+document.getElementById('save').addEventListener('click', () => vscode.postMessage({ type: 'save' }));
+`;
+
+export function renderReport(input: ReportInput, webview?: WebviewOptions): string {
+  const styleHash = createHash('sha256').update(REPORT_STYLE).digest('base64');
+  const csp = webview
+    ? ["default-src 'none'", `style-src 'nonce-${webview.nonce}'`, `script-src 'nonce-${webview.nonce}'`, `img-src ${webview.cspSource} data:`, `font-src ${webview.cspSource}`]
+    : ["default-src 'none'", `style-src 'sha256-${styleHash}'`, "script-src 'none'", 'img-src data:', "base-uri 'none'", "form-action 'none'"];
+  const styleAttr = webview ? ` nonce="${webview.nonce}"` : '';
+  const names = input.scripts.map((s) => s.title ?? s.file);
+  const title = names.length === 1 ? `Rungs report: ${names[0]}` : `Rungs report: ${names.length} scripts`;
+  const contents = input.scripts.length > 1
+    ? `<nav><ol>${input.scripts.map((s, i) => `<li><a href="#script-${i + 1}">${escapeHtml(s.title ?? s.file)}</a></li>`).join('')}</ol></nav>`
+    : '';
+  return `<!DOCTYPE html>
+<html lang="en">
+<head>
+<meta charset="UTF-8">
+<meta http-equiv="Content-Security-Policy" content="${csp.join('; ')}">
+<meta name="viewport" content="width=device-width, initial-scale=1.0">
+<title>${escapeHtml(title)}</title>
+<style${styleAttr}>${REPORT_STYLE}</style>
+</head>
+<body>
+${webview ? '<div class="toolbar"><button id="save" type="button">Save report as HTML…</button></div>\n' : ''}<header class="report"><h1>${escapeHtml(title)}</h1>
+<p>Difficulty ladders, item scores, paced durations and problems of stimulus scripts.</p>${contents}</header>
+${input.scripts.map((s, i) => renderScriptSection(s, i, input.caution)).join('\n')}
+<footer class="report"><p>Made by Rungs ${escapeHtml(input.version)}. Nothing in this file runs or fetches anything.</p></footer>
+${webview ? `<script nonce="${webview.nonce}">${SAVE_SCRIPT}</script>\n` : ''}</body>
+</html>
+`;
+}
