@@ -114,6 +114,13 @@ describe.skipIf(skip)('VS Code workbench (code-server + Chromium)', () => {
     expect(report.itemsAfterEdit).toBe(report.items + 1);
   });
 
+  it('opens the report of the edited script with every item and a Save button', () => {
+    // The report is made after the edit above, so it holds the new item too.
+    expect(report.reportItems).toBe(report.itemsAfterEdit);
+    expect(report.reportRows).toBe(report.itemsAfterEdit);
+    expect(report.reportSaveButtons).toBe(1);
+  });
+
   it('jumps to an item from the ladder and shows it in the status bar', () => {
     expect(report.jumpedToLine).toMatch(/^Ln \d+, Col 1/);
     expect(report.statusBarText).toMatch(/^\S*\s*\d+(\.\d)? · [\d.]+ s @ 0\.6 wps$/);
