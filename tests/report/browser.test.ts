@@ -116,6 +116,20 @@ describe.skipIf(skip)('the report in Chromium', () => {
     }
   });
 
+  it('fits the printable width of A4 and Letter: no table or chart is cut at the side', async () => {
+    // ISO 216: A4 is 210 mm wide; ANSI: Letter is 8.5 in (215.9 mm). The report's print margins are
+    // 12 mm left and right (style.ts); CSS pixels are 96 per inch (CSS Values 4).
+    const px = (mm: number) => Math.floor((mm / 25.4) * 96);
+    for (const [paper, mm] of [['A4', 210], ['Letter', 215.9]] as const) {
+      const p = await browser.newPage({ viewport: { width: px(mm - 24), height: 1000 } });
+      await p.goto(`file://${join(dir, 'report.html')}`);
+      await p.emulateMedia({ media: 'print' });
+      const [scrollWidth, clientWidth] = (await p.evaluate('[document.documentElement.scrollWidth, document.documentElement.clientWidth]')) as number[];
+      expect(scrollWidth, paper).toBeLessThanOrEqual(clientWidth);
+      await p.close();
+    }
+  });
+
   it('prints each script on its own pages, on A4 and on Letter', async () => {
     // Every script starts on a new page, so the whole report has exactly as many pages as each
     // script printed alone from the same page (the others removed), added up.

@@ -61,5 +61,8 @@ ul.problems li.info .sev::before, ul.problems li.hint .sev::before { content: "â
   tr { break-inside: avoid; }
   h2, h3, h4 { break-after: avoid; }
   svg.ladder, svg.progress { max-height: 95mm; }
+  table { font-size: 0.85em; }
+  table.items td.text { min-width: 10em; }
+  th, td { padding: 1px 3px; }
 }
 `;
