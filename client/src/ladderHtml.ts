@@ -2,7 +2,7 @@
 // Pure functions from the server's `rungs/ladder` payload to markup, so they are unit-tested
 // without an editor. Every string that came from the script is escaped here; colours come from
 // the editor theme's CSS variables, so the view follows light, dark and high-contrast themes.
-import { escapeHtml } from '../../server/src/report/html';
+import { escapeHtml, webviewPolicy } from '../../server/src/report/html';
 import { estimatedMark, estimatedNote } from './present';
 import { SET_MARK_CSS, setLegend, setMarks, setMarkSvg } from './ladderSets';
 import type { Ladder, LadderProblem, LadderRung, LadderStep } from './protocol';
@@ -206,13 +206,7 @@ export function renderLadderPage(o: PageOptions): string {
  * body on `update` messages.
  */
 export function renderWebviewPage(o: PageOptions & { title: string; style: string }): string {
-  const csp = [
-    "default-src 'none'",
-    `style-src 'nonce-${o.nonce}'`,
-    `script-src 'nonce-${o.nonce}'`,
-    `img-src ${o.cspSource} data:`,
-    `font-src ${o.cspSource}`,
-  ].join('; ');
+  const csp = webviewPolicy(o);
   return `<!DOCTYPE html>
 <html lang="en">
 <head>

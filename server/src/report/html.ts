@@ -6,3 +6,17 @@ const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;'
 export function escapeHtml(text: string): string {
   return String(text).replace(/[&<>"']/g, (c) => ESCAPES[c]);
 }
+
+/**
+ * The Content-Security-Policy of the extension's webviews (the ladder view and the report): only
+ * the page's own nonce may style or script it; images and fonts only from the webview itself.
+ */
+export function webviewPolicy(o: { nonce: string; cspSource: string }): string {
+  return [
+    "default-src 'none'",
+    `style-src 'nonce-${o.nonce}'`,
+    `script-src 'nonce-${o.nonce}'`,
+    `img-src ${o.cspSource} data:`,
+    `font-src ${o.cspSource}`,
+  ].join('; ');
+}

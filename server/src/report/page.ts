@@ -3,7 +3,7 @@
 // script at all. In the editor's webview it takes the webview's nonce rules instead and adds a
 // Save button, the page's only script.
 import { createHash } from 'node:crypto';
-import { escapeHtml } from './html';
+import { escapeHtml, webviewPolicy } from './html';
 import type { ScriptReport } from './model';
 import { renderItemTables, renderLadderSection, renderProblems, renderScriptHeading, renderSources } from './scriptSections';
 import { REPORT_STYLE } from './style';
@@ -44,8 +44,8 @@ document.getElementById('save').addEventListener('click', () => vscode.postMessa
 export function renderReport(input: ReportInput, webview?: WebviewOptions): string {
   const styleHash = createHash('sha256').update(REPORT_STYLE).digest('base64');
   const csp = webview
-    ? ["default-src 'none'", `style-src 'nonce-${webview.nonce}'`, `script-src 'nonce-${webview.nonce}'`, `img-src ${webview.cspSource} data:`, `font-src ${webview.cspSource}`]
-    : ["default-src 'none'", `style-src 'sha256-${styleHash}'`, "script-src 'none'", 'img-src data:', "base-uri 'none'", "form-action 'none'"];
+    ? webviewPolicy(webview)
+    : ["default-src 'none'", `style-src 'sha256-${styleHash}'`, "script-src 'none'", 'img-src data:', "base-uri 'none'", "form-action 'none'"].join('; ');
   const styleAttr = webview ? ` nonce="${webview.nonce}"` : '';
   const names = input.scripts.map((s) => s.title ?? s.file);
   const title = names.length === 1 ? `Rungs report: ${names[0]}` : `Rungs report: ${names.length} scripts`;
@@ -56,7 +56,7 @@ export function renderReport(input: ReportInput, webview?: WebviewOptions): stri
 <html lang="en">
 <head>
 <meta charset="UTF-8">
-<meta http-equiv="Content-Security-Policy" content="${csp.join('; ')}">
+<meta http-equiv="Content-Security-Policy" content="${csp}">
 <meta name="viewport" content="width=device-width, initial-scale=1.0">
 <title>${escapeHtml(title)}</title>
 <style${styleAttr}>${REPORT_STYLE}</style>
