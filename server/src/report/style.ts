@@ -49,18 +49,45 @@ ul.problems li.warning .sev::before { content: "▲ "; }
 ul.problems li.info .sev::before, ul.problems li.hint .sev::before { content: "● "; }
 .caution { border: 1.5px solid #111; padding: 6px 10px; margin-top: 14px; }
 .empty { color: #444; }
+.sub { font-weight: normal; color: #444; font-size: 0.9em; }
+table.balance td:first-child { text-align: left; }
+table.balance .bad { font-weight: 600; }
+.panels { display: flex; flex-wrap: wrap; gap: 8px 16px; }
+figure.panel { margin: 0; width: 240px; }
+figure.panel figcaption { font-size: 0.8em; color: #333; }
+svg.progress .mark-line { stroke: #111; stroke-width: 1.2; stroke-dasharray: 5 3; }
+svg.progress .trend-line { fill: none; stroke: #555; stroke-width: 1.2; }
+svg.progress .ratio { fill: #fff; stroke: #1f5fa8; stroke-width: 1.5; }
+svg.progress .ratio.at-mark { fill: #1f5fa8; }
+svg.progress .session { fill: #111; }
+svg.progress .accuracy { fill: #fff; stroke: #111; stroke-width: 1.3; }
+.readiness.ready { font-weight: 600; }
 .toolbar { position: sticky; top: 0; background: #fff; padding: 6px 0; border-bottom: 1px solid #ccc; }
 @media print {
   @page { margin: 14mm 12mm; }
   body { max-width: none; padding: 0; font-size: 10pt; }
-  .toolbar { display: none; }
+  .sub { font-weight: normal; color: #444; font-size: 0.9em; }
+table.balance td:first-child { text-align: left; }
+table.balance .bad { font-weight: 600; }
+.panels { display: flex; flex-wrap: wrap; gap: 8px 16px; }
+figure.panel { margin: 0; width: 240px; }
+figure.panel figcaption { font-size: 0.8em; color: #333; }
+svg.progress .mark-line { stroke: #111; stroke-width: 1.2; stroke-dasharray: 5 3; }
+svg.progress .trend-line { fill: none; stroke: #555; stroke-width: 1.2; }
+svg.progress .ratio { fill: #fff; stroke: #1f5fa8; stroke-width: 1.5; }
+svg.progress .ratio.at-mark { fill: #1f5fa8; }
+svg.progress .session { fill: #111; }
+svg.progress .accuracy { fill: #fff; stroke: #111; stroke-width: 1.3; }
+.readiness.ready { font-weight: 600; }
+.toolbar { display: none; }
   section.script { margin: 0; }
   section.script + section.script, section.records { break-before: page; }
   table, figure, .rung, dl.facts, .caution, svg { break-inside: avoid; }
   thead { display: table-header-group; }
   tr { break-inside: avoid; }
   h2, h3, h4 { break-after: avoid; }
-  svg.ladder, svg.progress { max-height: 95mm; }
+  svg.ladder { max-height: 95mm; }
+  .trend, .set-pair { break-inside: avoid; }
   table { font-size: 0.85em; }
   table.items td.text { min-width: 10em; }
   th, td { padding: 1px 3px; }
