@@ -11,7 +11,7 @@ import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { STEP_RULES } from '../../server/src/report/ladderSteps';
-import { HOSTILE, HOSTILE_FILE, HOSTILE_SCRIPT } from './hostile';
+import { HOSTILE, HOSTILE_CLIENT, HOSTILE_FILE, HOSTILE_RECORDS, HOSTILE_SCRIPT } from './hostile';
 
 const root = join(__dirname, '..', '..');
 const cli = join(root, 'server', 'bin', 'rungs.js');
@@ -22,9 +22,12 @@ const skip = !existsSync(chromiumBin) && !required;
 if (skip) console.warn(`SKIPPED report browser test: missing chromium (${chromiumBin}; apt-get install chromium)`);
 
 const SAMPLES = readdirSync(join(root, 'sample-scripts')).filter((f) => f.endsWith('.rungs')).sort();
+const RECORDS = join('sample-scripts', readdirSync(join(root, 'sample-scripts')).find((f) => f.endsWith('.rates.csv'))!);
 
 interface ScoreJson { file: string; rungs: { name: string; line: number; items: unknown[] }[] }
 interface LintJson { file: string; problems: { line: number; rule: string }[] }
+interface SetsJson { file: string; pairs: { a: string; b: string; metrics: Record<string, { equivalent: boolean }> }[] }
+interface ProgressJson { benefitMark: number; files: { trends: { client: string; rung: string; sessions: number; ratios: number[]; atMark: number; note: string }[] }[] }
 
 function rungs(args: string[], cwd: string): string {
   return execFileSync(process.execPath, [cli, ...args], { cwd, encoding: 'utf8' });
@@ -39,12 +42,17 @@ describe.skipIf(skip)('the report in Chromium', () => {
   let dir: string;
   let scored: ScoreJson[];
   let linted: LintJson[];
+  let sets: SetsJson[];
+  let progress: ProgressJson;
   const errors: string[] = [];
 
   beforeAll(async () => {
     if (!existsSync(chromiumBin)) throw new Error(`RUNGS_REQUIRE_EDITORS=1 but chromium is missing (${chromiumBin})`);
     dir = mkdtempSync(join(tmpdir(), 'rungs-report-'));
-    rungs(['report', 'sample-scripts', '-o', join(dir, 'report.html'), '--pdf', join(dir, 'report.pdf')], root);
+    rungs(['report', 'sample-scripts', '--records', RECORDS, '-o', join(dir, 'report.html'), '--pdf', join(dir, 'report.pdf')], root);
+    sets = JSON.parse(rungs(['sets', '--format', 'json', 'sample-scripts'], root));
+    // The sample records plant one bad row, so `rungs progress` exits 1 (README).
+    progress = JSON.parse(spawnSync(process.execPath, [cli, 'progress', '--format', 'json', RECORDS], { cwd: root, encoding: 'utf8' }).stdout);
     scored = JSON.parse(rungs(['score', '--format', 'json', 'sample-scripts'], root));
     linted = JSON.parse(
       spawnSync(process.execPath, [cli, 'lint', '--format', 'json', 'sample-scripts'], { cwd: root, encoding: 'utf8' }).stdout,
@@ -96,6 +104,34 @@ describe.skipIf(skip)('the report in Chromium', () => {
     }
   });
 
+  it('shows the balance table of each labelled script with the verdicts of `rungs sets`', async () => {
+    let tables = 0;
+    for (const [i, s] of scored.entries()) {
+      const expected = sets.find((x) => x.file === s.file)?.pairs ?? [];
+      const section = page.locator(`section#script-${i + 1}`);
+      const metrics = expected.flatMap((p) => Object.values(p.metrics));
+      expect(await section.locator('table.balance tbody tr').count()).toBe(metrics.length);
+      expect(await section.locator('table.balance tbody tr.equivalent').count()).toBe(metrics.filter((m) => m.equivalent).length);
+      tables += await section.locator('table.balance').count();
+    }
+    // kitchen-sets.rungs labels its items trained and untrained.
+    expect(tables).toBeGreaterThan(0);
+  });
+
+  it('draws one point per session of each client and rung, ratios against the mark, with the readiness note', async () => {
+    const trends = progress.files.flatMap((f) => f.trends);
+    expect(trends.length).toBeGreaterThan(0);
+    expect(await page.locator('section.records div.trend').count()).toBe(trends.length);
+    for (const t of trends) {
+      const box = page.locator(`section.records div.trend[data-client="${t.client}"][data-rung="${t.rung}"]`);
+      expect(await box.locator('svg.rate circle.session').count()).toBe(t.sessions);
+      expect(await box.locator('svg.ratio path.ratio').count()).toBe(t.ratios.length);
+      expect(await box.locator('svg.ratio path.ratio.at-mark').count()).toBe(t.atMark);
+      expect(await box.locator('svg.ratio line.mark-line').count()).toBe(1);
+      expect(await box.locator('p.readiness').textContent()).toContain(t.note);
+    }
+  });
+
   it('runs no script and logs no error', async () => {
     expect(errors).toEqual([]);
     expect(await page.evaluate('document.scripts.length')).toBe(0);
@@ -131,16 +167,18 @@ describe.skipIf(skip)('the report in Chromium', () => {
   });
 
   it('prints each script on its own pages, on A4 and on Letter', async () => {
-    // Every script starts on a new page, so the whole report has exactly as many pages as each
-    // script printed alone from the same page (the others removed), added up.
+    // Every script and the progress section start on a new page, so the whole report has exactly as
+    // many pages as each part printed alone from the same page (the others removed), added up.
     for (const format of ['A4', 'Letter'] as const) {
       let sum = 0;
-      for (let k = 1; k <= SAMPLES.length; k++) {
+      // Each script, then the client progress (it too starts on a new page), printed alone.
+      const parts = [...SAMPLES.map((_, k) => `script-${k + 1}`), 'records'];
+      for (const keep of parts) {
         const p = await browser.newPage();
         await p.goto(`file://${join(dir, 'report.html')}`);
         // Page code as a string: the tests are type-checked without the DOM library.
-        await p.evaluate(`for (const s of document.querySelectorAll('section.script')) if (s.id !== 'script-${k}') s.remove();
-          if (${k} !== 1) document.querySelector('header.report').remove();`);
+        await p.evaluate(`for (const s of document.querySelectorAll('section.script, section.records')) if (s.id !== '${keep}') s.remove();
+          if ('${keep}' !== 'script-1') document.querySelector('header.report').remove();`);
         const n = pdfPages(await p.pdf({ format, printBackground: true }));
         await p.close();
         expect(n).toBeGreaterThanOrEqual(1);
@@ -153,7 +191,7 @@ describe.skipIf(skip)('the report in Chromium', () => {
       expect(whole).toBe(sum);
       // The file `rungs report --pdf` wrote (A4 by default) is the same document.
       if (format === 'A4') expect(pdfPages(readFileSync(join(dir, 'report.pdf')))).toBe(sum);
-      console.log(`report of the ${SAMPLES.length} sample scripts: ${whole} ${format} pages`);
+      console.log(`report of the ${SAMPLES.length} sample scripts and the sample records: ${whole} ${format} pages`);
     }
   });
 
@@ -161,7 +199,8 @@ describe.skipIf(skip)('the report in Chromium', () => {
     const hdir = join(dir, 'hostile');
     mkdirSync(hdir);
     writeFileSync(join(hdir, HOSTILE_FILE), HOSTILE_SCRIPT);
-    rungs(['report', HOSTILE_FILE, '-o', 'r.html'], hdir);
+    writeFileSync(join(hdir, 'c.rates.csv'), HOSTILE_RECORDS);
+    rungs(['report', HOSTILE_FILE, '--records', 'c.rates.csv', '-o', 'r.html'], hdir);
     const html = readFileSync(join(hdir, 'r.html'), 'utf8');
     const p = await browser.newPage();
     const blocked: string[] = [];
@@ -170,7 +209,8 @@ describe.skipIf(skip)('the report in Chromium', () => {
     expect(await p.evaluate('window.pwned')).toBeUndefined();
     expect(await p.evaluate("document.querySelectorAll('img, script, b').length")).toBe(0);
     const text = (await p.locator('body').textContent()) ?? '';
-    for (const s of [HOSTILE.script, HOSTILE.img, HOSTILE.quotes, HOSTILE.amp, HOSTILE_FILE]) expect(text).toContain(s);
+    for (const s of [HOSTILE.script, HOSTILE.img, HOSTILE.quotes, HOSTILE.amp, HOSTILE_FILE, `Client ${HOSTILE_CLIENT}`]) expect(text).toContain(s);
+    expect(await p.locator('section.records circle.session').count()).toBe(2);
     expect(blocked.filter((m) => /Content Security Policy/i.test(m))).toEqual([]);
     // The policy itself: the same page with a real script added runs nothing and reports the block.
     const withScript = html.replace('</body>', '<script>window.pwned = 2</script></body>');

@@ -14,10 +14,24 @@ export const HOSTILE_SCRIPT = [
   '@paces 1 wps',
   `== Rung ${HOSTILE.img}`,
   `Pass the bread ${HOSTILE.img} please. | note ${HOSTILE.script} @set <b>&"x"`,
-  `Tom & Jerry say ${HOSTILE.quotes} hello. | ${HOSTILE.amp}`,
+  `Tom & Jerry say ${HOSTILE.quotes} hello. | ${HOSTILE.amp} @set ${HOSTILE.script}`,
   'Good morning to you.',
   '',
 ].join('\n');
 
 /** A file name holding markup (no slash, so it is a valid name on every system). */
 export const HOSTILE_FILE = `&'<img src=x onerror=window.pwned=1>".rungs`;
+
+/** A client code holding markup, quotes and an ampersand. */
+export const HOSTILE_CLIENT = `C-<img src=x onerror=window.pwned=1>&"'`;
+
+const cell = (s: string) => `"${s.replace(/"/g, '""')}"`;
+
+/** Rate records of that client on the hostile script's first rung (invented demo data). */
+export const HOSTILE_RECORDS = [
+  'date,client,script,rung,condition,words,seconds,correct,note',
+  `2026-01-05,${cell(HOSTILE_CLIENT)},,,unassisted,20,30,,`,
+  `2026-01-05,${cell(HOSTILE_CLIENT)},${cell(HOSTILE_FILE)},1,paced,26,30,24,${cell(HOSTILE.script)}`,
+  `2026-01-08,${cell(HOSTILE_CLIENT)},${cell(HOSTILE_FILE)},1,paced,27,30,25,`,
+  '',
+].join('\n');

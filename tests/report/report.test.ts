@@ -13,7 +13,7 @@ import { renderReport } from '../../server/src/report/page';
 import { lint } from '../../server/src/rules/index';
 import { MemFs } from '../cli/memfs';
 import { words } from '../helpers/data';
-import { HOSTILE, HOSTILE_FILE, HOSTILE_SCRIPT } from './hostile';
+import { HOSTILE, HOSTILE_CLIENT, HOSTILE_FILE, HOSTILE_RECORDS, HOSTILE_SCRIPT } from './hostile';
 
 const ROOT = join(__dirname, '..', '..');
 const SAMPLES = join(ROOT, 'sample-scripts');
@@ -53,7 +53,8 @@ describe('rungs report: the HTML', () => {
   it('has the documented structure for the sample scripts (snapshot, versions and paths stripped)', async () => {
     const files: Record<string, string> = {};
     for (const f of readdirSync(SAMPLES)) files[`scripts/${f}`] = readFileSync(join(SAMPLES, f), 'utf8');
-    const r = await run(['report', 'scripts', '-o', 'out/report.html'], files);
+    const records = readdirSync(SAMPLES).find((f) => f.endsWith('.rates.csv'))!;
+    const r = await run(['report', 'scripts', '--records', `scripts/${records}`, '-o', 'out/report.html'], files);
     expect(r.code).toBe(0);
     expect(r.out).toBe('/clinic/out/report.html\n');
     const html = r.fs.files.get('/clinic/out/report.html')!;
@@ -85,8 +86,8 @@ describe('rungs report: the HTML', () => {
     expect(section(html)).toBe(section(renderReport(input)));
   });
 
-  it('escapes hostile text in titles, rung names, items, notes, set labels and file names', async () => {
-    const r = await run(['report', HOSTILE_FILE, '-o', 'r.html'], { [HOSTILE_FILE]: HOSTILE_SCRIPT });
+  it('escapes hostile text in titles, rung names, items, notes, set labels, client codes and file names', async () => {
+    const r = await run(['report', HOSTILE_FILE, '--records', 'c.rates.csv', '-o', 'r.html'], { [HOSTILE_FILE]: HOSTILE_SCRIPT, 'c.rates.csv': HOSTILE_RECORDS });
     expect(r.code).toBe(0);
     const html = r.fs.files.get('/clinic/r.html')!;
     // The only tags and attributes are the report's own: none comes from the text.
@@ -94,7 +95,7 @@ describe('rungs report: the HTML', () => {
     const attrs = new Set<string>();
     for (const m of html.matchAll(/<([a-zA-Z][\w-]*)((?:\s+[\w:-]+(?:="[^"]*")?)*)\s*\/?>/g)) {
       tags.add(m[1].toLowerCase());
-      for (const a of m[2].matchAll(/([\w:-]+)(?:=|\s|$)/g)) attrs.add(a[1].toLowerCase());
+      for (const a of m[2].matchAll(/\s+([\w:-]+)(?:="[^"]*")?/g)) attrs.add(a[1].toLowerCase());
     }
     expect([...tags].filter((t) => ['img', 'script', 'b', 'iframe', 'object'].includes(t))).toEqual([]);
     expect([...attrs].filter((a) => a.startsWith('on') || a === 'src')).toEqual([]);
@@ -104,6 +105,9 @@ describe('rungs report: the HTML', () => {
     expect(html).toContain('Tom &amp; Jerry &amp;amp; &amp;lt;b&amp;gt;');
     expect(html).toContain('&amp;&#39;&lt;img src=x onerror=window.pwned=1&gt;&quot;.rungs');
     expect(html).toContain(HOSTILE.quotes.replace(/"/g, '&quot;').replace(/'/g, '&#39;'));
+    // The set labels reach the balance table and the client code the progress section.
+    expect(html).toContain('Labels &lt;b&gt;&amp;&quot;x&quot;, &lt;/script&gt;&lt;script&gt;');
+    expect(html).toContain(`Client ${HOSTILE_CLIENT.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;')}`);
   });
 });
 
@@ -119,6 +123,18 @@ describe('rungs report: the command', () => {
     expect(r.code).toBe(2);
     expect(r.err).toContain('gone.rungs: no such file or folder');
     expect(r.fs.files.has('/clinic/report.html')).toBe(true);
+  });
+
+  it('draws client progress from --records (repeatable) and reports a missing records file', async () => {
+    const files = { 'a.rungs': '== One\nHello there.\n', 'c.rates.csv': HOSTILE_RECORDS.replace(/"[^"]*\.rungs"/g, 'a.rungs') };
+    const ok = await run(['report', 'a.rungs', '--records', 'c.rates.csv', '--records', 'c.rates.csv'], files);
+    expect(ok.code).toBe(0);
+    const html = ok.fs.files.get('/clinic/report.html')!;
+    expect(html.match(/<section class="records"/g)).toHaveLength(1);
+    expect(html.match(/Records: c\.rates\.csv/g)).toHaveLength(1);
+    const missing = await run(['report', 'a.rungs', '--records', 'gone.rates.csv'], files);
+    expect(missing.code).toBe(2);
+    expect(missing.err).toContain('gone.rates.csv: no such file or folder');
   });
 
   it('names what to install when --pdf finds no Chromium, exit 2, before writing anything', async () => {

@@ -10,12 +10,16 @@ export interface FlagSpec {
 }
 
 export interface ParsedArgs {
+  /** The last value of each flag (or true for a flag without a value). */
   flags: Map<string, string | true>;
+  /** Every value of each flag that takes one, in order, for options that may be repeated. */
+  lists: Map<string, string[]>;
   positionals: string[];
 }
 
 export function parseArgs(argv: string[], specs: Record<string, FlagSpec>): ParsedArgs {
   const flags = new Map<string, string | true>();
+  const lists = new Map<string, string[]>();
   const positionals: string[] = [];
   const byAlias = new Map<string, string>();
   for (const [name, s] of Object.entries(specs)) if (s.alias) byAlias.set(s.alias, name);
@@ -38,6 +42,7 @@ export function parseArgs(argv: string[], specs: Record<string, FlagSpec>): Pars
           throw new UsageError(`--${name} must be one of ${spec.choices.join(', ')}, not "${v}"`);
         }
         flags.set(name, v);
+        lists.set(name, [...(lists.get(name) ?? []), v]);
       } else {
         if (eq >= 0) throw new UsageError(`option --${name} takes no value`);
         flags.set(name, true);
@@ -46,5 +51,5 @@ export function parseArgs(argv: string[], specs: Record<string, FlagSpec>): Pars
     }
     positionals.push(arg);
   }
-  return { flags, positionals };
+  return { flags, lists, positionals };
 }

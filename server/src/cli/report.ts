@@ -1,33 +1,33 @@
-// `rungs report PATH... [-o report.html] [--pdf report.pdf]`: one self-contained HTML report of
-// scripts (and a PDF of it through a local Chromium). Reading, writing and printing happen here;
-// the report itself is drawn by the pure renderers of server/src/report.
-import { basename, join, relative, resolve } from 'node:path';
-import { analyze } from '../core/analyze';
+// `rungs report PATH... [--records FILE]... [-o report.html] [--pdf report.pdf]`: one
+// self-contained HTML report of scripts and of client progress from rate records (and a PDF of it
+// through a local Chromium). Reading, writing and printing happen here; the report itself is drawn
+// by the pure renderers of server/src/report.
+import { relative, resolve } from 'node:path';
 import { CAUTION } from '../core/caution';
-import { resolveScriptContext } from '../config/resolve';
-import { loadWordTable } from '../data/wordTable';
-import { buildScriptReport, type ScriptReport } from '../report/model';
+import { buildScriptReport } from '../report/model';
 import { renderReport } from '../report/page';
-import { lint } from '../rules/index';
 import { parseArgs } from './args';
-import { expandPaths } from './files';
 import { EXIT_OK, EXIT_USAGE, UsageError, type CliIO } from './io';
 import { VERSION, type Command } from './main';
 import { CHROMIUM_HINT, findChromium, printPdf, type Paper } from './pdf';
+import { loadRecords } from './records';
+import { loadScripts } from './scripts';
 
 export const reportCommand: Command = {
   name: 'report',
-  summary: 'write a printable HTML (or PDF) report of scripts',
+  summary: 'write a printable HTML (or PDF) report of scripts and client progress',
   usage: [
-    'Usage: rungs report PATH... [-o report.html] [--pdf report.pdf] [--paper a4|letter]',
+    'Usage: rungs report PATH... [--records FILE]... [-o report.html] [--pdf report.pdf] [--paper a4|letter]',
     '',
     '  Folders are searched for *.rungs files; "-" reads standard input.',
+    '  --records     rate records (*.rates.csv, or a folder of them) to show client progress; repeat for more',
     '  -o, --output  the HTML file to write (default report.html)',
     '  --pdf         also print the report to this PDF file (needs a local Chromium)',
     '  --paper       PDF paper size: a4 (default) or letter',
   ].join('\n'),
   async run(io: CliIO, argv: string[]): Promise<number> {
     const args = parseArgs(argv, {
+      records: { value: true },
       output: { value: true, alias: 'o' },
       pdf: { value: true },
       paper: { value: true, choices: ['a4', 'letter'] },
@@ -42,33 +42,19 @@ export const reportCommand: Command = {
       io.stderr(`rungs report: --pdf needs Chromium, and none was found on PATH; ${CHROMIUM_HINT}.\n`);
       return EXIT_USAGE;
     }
-    const { files, missing } = expandPaths(args.positionals, io.cwd, io.fs);
-    let code = EXIT_OK;
-    for (const m of missing) {
-      io.stderr(`rungs report: ${m}: no such file or folder\n`);
-      code = EXIT_USAGE;
+    const loaded = loadScripts(io, args.positionals, 'report');
+    const scripts = loaded.scripts.map((s) => buildScriptReport(s.shown, s.analysis, s.problems));
+    if (!scripts.length) return EXIT_USAGE;
+    let code = loaded.code;
+    const recordPaths = args.lists.get('records') ?? [];
+    let progress = null;
+    if (recordPaths.length) {
+      const r = loadRecords(io, recordPaths, 'report');
+      // Bad rows are listed by `rungs progress`; here they only count, and the report is written.
+      if (r.code === EXIT_USAGE) code = EXIT_USAGE;
+      progress = { mark: r.mark, files: r.results };
     }
-    const data = loadWordTable();
-    const scripts: ScriptReport[] = [];
-    for (const file of files) {
-      const shown = file === '-' ? '<stdin>' : relative(io.cwd, file) || basename(file);
-      let text: string;
-      try {
-        text = file === '-' ? (io.readStdin ? io.readStdin() : '') : io.fs.readFile(file);
-      } catch (err) {
-        io.stderr(`rungs report: ${shown}:1:1: cannot read the file (${(err as NodeJS.ErrnoException).code ?? String(err)})\n`);
-        code = EXIT_USAGE;
-        continue;
-      }
-      const ctx = resolveScriptContext(file === '-' ? join(io.cwd, 'stdin.rungs') : file, io.fs);
-      const analysis = analyze({ text, data, options: ctx.options, lexicon: ctx.lexicon });
-      scripts.push(buildScriptReport(shown, analysis, lint(analysis, text, ctx.lint)));
-    }
-    if (!scripts.length) {
-      if (!files.length && !missing.length) io.stderr('rungs report: no *.rungs files found\n');
-      return EXIT_USAGE;
-    }
-    const html = renderReport({ scripts, version: VERSION, caution: CAUTION });
+    const html = renderReport({ scripts, version: VERSION, caution: CAUTION, progress });
     try {
       io.fs.writeFile(output, html);
     } catch (err) {
@@ -86,6 +72,6 @@ export const reportCommand: Command = {
       }
       io.stdout(`${pdfPath}\n`);
     }
-    return code;
+    return code === EXIT_USAGE ? EXIT_USAGE : EXIT_OK;
   },
 };

@@ -1,6 +1,7 @@
 // The plain data a report is drawn from: one `ScriptReport` per script, built from the analysis
 // and the lint results. JSON-safe (the language server sends it to the editor, which draws the
 // same report), with 1-based lines as people read them.
+import { compareSets, type SetComparison } from '../core/sets';
 import type { Analysis, Problem, Severity } from '../core/types';
 import type { LadderStep } from '../lsp/contract';
 import { ladderSteps } from './ladderSteps';
@@ -62,6 +63,8 @@ export interface ScriptReport {
   steps: LadderStep[];
   /** Problems outside every rung (header settings, config files), in line order. */
   scriptProblems: ReportProblem[];
+  /** Balance of the labelled item sets (core/sets.ts), as the script's set settings ask. */
+  sets: SetComparison;
 }
 
 const finite = (n: number): number | null => (Number.isFinite(n) ? n : null);
@@ -121,5 +124,6 @@ export function buildScriptReport(file: string, a: Analysis, problems: Problem[]
     rungs,
     steps: ladderSteps(a, problems),
     scriptProblems: sorted.filter((p) => !claimed.has(p)).map(reportProblem),
+    sets: compareSets(a),
   };
 }

@@ -4,7 +4,9 @@
 // Save button, the page's only script.
 import { createHash } from 'node:crypto';
 import { escapeHtml, webviewPolicy } from './html';
+import { renderBalance } from './balanceSection';
 import type { ScriptReport } from './model';
+import { renderProgress, type ReportProgress } from './progressSection';
 import { renderItemTables, renderLadderSection, renderProblems, renderScriptHeading, renderSources } from './scriptSections';
 import { REPORT_STYLE } from './style';
 
@@ -13,6 +15,8 @@ export interface ReportInput {
   /** Rungs version, shown in the footer. */
   version: string;
   caution: string;
+  /** Client progress from rate records, drawn after the scripts; null or absent without records. */
+  progress?: ReportProgress | null;
 }
 
 export interface WebviewOptions {
@@ -30,6 +34,7 @@ export function renderScriptSection(s: ScriptReport, index: number, caution: str
     renderLadderSection(s, `s${index + 1}`),
     renderItemTables(s),
     renderProblems(s),
+    renderBalance(s.sets),
     renderSources(),
     `<p class="caution">${escapeHtml(caution)}</p>`,
     '</section>',
@@ -49,9 +54,10 @@ export function renderReport(input: ReportInput, webview?: WebviewOptions): stri
   const styleAttr = webview ? ` nonce="${webview.nonce}"` : '';
   const names = input.scripts.map((s) => s.title ?? s.file);
   const title = names.length === 1 ? `Rungs report: ${names[0]}` : `Rungs report: ${names.length} scripts`;
-  const contents = input.scripts.length > 1
-    ? `<nav><ol>${input.scripts.map((s, i) => `<li><a href="#script-${i + 1}">${escapeHtml(s.title ?? s.file)}</a></li>`).join('')}</ol></nav>`
-    : '';
+  const hasProgress = Boolean(input.progress?.files.length);
+  const entries = input.scripts.map((s, i) => `<li><a href="#script-${i + 1}">${escapeHtml(s.title ?? s.file)}</a></li>`);
+  if (hasProgress) entries.push('<li><a href="#records">Client progress</a></li>');
+  const contents = entries.length > 1 ? `<nav><ol>${entries.join('')}</ol></nav>` : '';
   return `<!DOCTYPE html>
 <html lang="en">
 <head>
@@ -63,8 +69,9 @@ export function renderReport(input: ReportInput, webview?: WebviewOptions): stri
 </head>
 <body>
 ${webview ? '<div class="toolbar"><button id="save" type="button">Save report as HTML…</button></div>\n' : ''}<header class="report"><h1>${escapeHtml(title)}</h1>
-<p>Difficulty ladders, item scores, paced durations and problems of stimulus scripts.</p>${contents}</header>
+<p>Difficulty ladders, item scores, paced durations, problems and matched sets of stimulus scripts${hasProgress ? ', and client progress from rate records' : ''}.</p>${contents}</header>
 ${input.scripts.map((s, i) => renderScriptSection(s, i, input.caution)).join('\n')}
+${renderProgress(input.progress ?? null, input.caution)}
 <footer class="report"><p>Made by Rungs ${escapeHtml(input.version)}. Nothing in this file runs or fetches anything.</p></footer>
 ${webview ? `<script nonce="${webview.nonce}">${SAVE_SCRIPT}</script>\n` : ''}</body>
 </html>
