@@ -10,6 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { formatLength } from '../../server/src/core/timing';
 import { STEP_RULES } from '../../server/src/report/ladderSteps';
 import { HOSTILE, HOSTILE_CLIENT, HOSTILE_FILE, HOSTILE_RECORDS, HOSTILE_SCRIPT } from './hostile';
 
@@ -24,7 +25,7 @@ if (skip) console.warn(`SKIPPED report browser test: missing chromium (${chromiu
 const SAMPLES = readdirSync(join(root, 'sample-scripts')).filter((f) => f.endsWith('.rungs')).sort();
 const RECORDS = join('sample-scripts', readdirSync(join(root, 'sample-scripts')).find((f) => f.endsWith('.rates.csv'))!);
 
-interface ScoreJson { file: string; rungs: { name: string; line: number; items: unknown[] }[] }
+interface ScoreJson { file: string; rungs: { name: string; line: number; items: unknown[]; sessionSeconds: Record<string, number> }[] }
 interface LintJson { file: string; problems: { line: number; rule: string }[] }
 interface SetsJson { file: string; pairs: { a: string; b: string; metrics: Record<string, { equivalent: boolean }> }[] }
 interface ProgressJson { benefitMark: number; files: { trends: { client: string; rung: string; sessions: number; ratios: number[]; atMark: number; note: string }[] }[] }
@@ -101,6 +102,17 @@ describe.skipIf(skip)('the report in Chromium', () => {
     for (const [i, s] of scored.entries()) {
       const problems = linted.find((l) => l.file === s.file)!.problems;
       expect(await page.locator(`section#script-${i + 1} ul.problems li`).count()).toBe(problems.length);
+    }
+  });
+
+  it('shows the session plan of every rung: its length with gaps at each pace, as `rungs score` gives it', async () => {
+    for (const [i, s] of scored.entries()) {
+      const rows = page.locator(`section#script-${i + 1} section.plan tbody tr:not(.total)`);
+      expect(await rows.count()).toBe(s.rungs.length);
+      for (const [k, r] of s.rungs.entries()) {
+        const cell = (await rows.nth(k).locator('td').nth(1).textContent()) ?? '';
+        for (const [pace, seconds] of Object.entries(r.sessionSeconds)) expect(cell).toContain(`${formatLength(seconds)} at ${pace}`);
+      }
     }
   });
 

@@ -86,6 +86,22 @@ describe('rungs report: the HTML', () => {
     expect(section(html)).toBe(section(renderReport(input)));
   });
 
+  it('plans each rung as its items back to back with a gap between them', () => {
+    const text = readFileSync(join(SAMPLES, 'morning-routine.rungs'), 'utf8');
+    const a = analyze({ text, data: words });
+    const plan = buildScriptReport('m.rungs', a, lint(a, text)).plan;
+    const [unison] = plan.modes;
+    expect(plan.gap).toBe(2);
+    a.rungs.forEach((r, i) => {
+      r.paces.forEach((p, k) => {
+        // computed: the projected durations of the items plus (items - 1) gaps of 2 s (no phrase
+        // pauses by default), e.g. Greetings at 1 wps: 11 s + 4 × 2 s = 19 s.
+        expect(unison.rungs[i].paces[k]).toEqual({ pace: p.label, seconds: expect.closeTo(r.totalSeconds[k] + (r.items.length - 1) * 2, 6) });
+      });
+    });
+    expect(unison.rungs[0].paces[0].seconds).toBeCloseTo(19, 6);
+  });
+
   it('escapes hostile text in titles, rung names, items, notes, set labels, client codes and file names', async () => {
     const r = await run(['report', HOSTILE_FILE, '--records', 'c.rates.csv', '-o', 'r.html'], { [HOSTILE_FILE]: HOSTILE_SCRIPT, 'c.rates.csv': HOSTILE_RECORDS });
     expect(r.code).toBe(0);

@@ -5,6 +5,7 @@ import { compareSets, type SetComparison } from '../core/sets';
 import type { Analysis, Problem, Severity } from '../core/types';
 import type { LadderStep } from '../lsp/contract';
 import { ladderSteps } from './ladderSteps';
+import { buildPlan, type ReportPlan } from './planSection';
 
 export interface ReportItem {
   line: number;
@@ -63,6 +64,8 @@ export interface ScriptReport {
   steps: LadderStep[];
   /** Problems outside every rung (header settings, config files), in line order. */
   scriptProblems: ReportProblem[];
+  /** Session lengths per rung and pace with gaps, from the cue timing plan (core/timing.ts). */
+  plan: ReportPlan;
   /** Balance of the labelled item sets (core/sets.ts), as the script's set settings ask. */
   sets: SetComparison;
 }
@@ -124,6 +127,7 @@ export function buildScriptReport(file: string, a: Analysis, problems: Problem[]
     rungs,
     steps: ladderSteps(a, problems),
     scriptProblems: sorted.filter((p) => !claimed.has(p)).map(reportProblem),
+    plan: buildPlan(a),
     sets: compareSets(a),
   };
 }

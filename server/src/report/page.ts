@@ -5,6 +5,7 @@
 import { createHash } from 'node:crypto';
 import { escapeHtml, webviewPolicy } from './html';
 import { renderBalance } from './balanceSection';
+import { renderPlan } from './planSection';
 import type { ScriptReport } from './model';
 import { renderProgress, type ReportProgress } from './progressSection';
 import { renderItemTables, renderLadderSection, renderProblems, renderScriptHeading, renderSources } from './scriptSections';
@@ -33,6 +34,7 @@ export function renderScriptSection(s: ScriptReport, index: number, caution: str
     renderScriptHeading(s),
     renderLadderSection(s, `s${index + 1}`),
     renderItemTables(s),
+    renderPlan(s.plan),
     renderProblems(s),
     renderBalance(s.sets),
     renderSources(),
