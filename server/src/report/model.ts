@@ -2,7 +2,7 @@
 // and the lint results. JSON-safe (the language server sends it to the editor, which draws the
 // same report), with 1-based lines as people read them.
 import { compareSets, type SetComparison } from '../core/sets';
-import type { Analysis, Problem, Severity } from '../core/types';
+import type { Analysis, ItemAnalysis, Problem, Severity } from '../core/types';
 import type { LadderStep } from '../lsp/contract';
 import { ladderSteps } from './ladderSteps';
 import { buildPlan, type ReportPlan } from './planSection';
@@ -70,6 +70,21 @@ export interface ScriptReport {
   sets: SetComparison;
 }
 
+/** The facts of an item every output shows first, under these names (JSON schema, report). */
+export function itemFacts(it: ItemAnalysis) {
+  return {
+    line: it.node.line + 1,
+    text: it.node.text,
+    id: it.node.id,
+    note: it.node.note,
+    sets: it.sets,
+    words: it.wordCount,
+    syllables: it.syllables,
+    phonemes: it.phonemes,
+    wcm: it.wcm,
+  };
+}
+
 const finite = (n: number): number | null => (Number.isFinite(n) ? n : null);
 
 function reportProblem(p: Problem): ReportProblem {
@@ -97,15 +112,7 @@ export function buildScriptReport(file: string, a: Analysis, problems: Problem[]
       max: empty ? null : finite(r.max),
       totalSeconds: r.totalSeconds,
       items: r.items.map((it) => ({
-        line: it.node.line + 1,
-        text: it.node.text,
-        id: it.node.id,
-        note: it.node.note,
-        sets: it.sets,
-        words: it.wordCount,
-        syllables: it.syllables,
-        phonemes: it.phonemes,
-        wcm: it.wcm,
+        ...itemFacts(it),
         zipfMean: it.zipfMean,
         zipfMin: it.zipfMin,
         lowFrequencyWords: it.lowFrequencyWords,

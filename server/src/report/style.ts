@@ -66,20 +66,7 @@ svg.progress .accuracy { fill: #fff; stroke: #111; stroke-width: 1.3; }
 @media print {
   @page { margin: 14mm 12mm; }
   body { max-width: none; padding: 0; font-size: 10pt; }
-  .sub { font-weight: normal; color: #444; font-size: 0.9em; }
-table.balance td:first-child { text-align: left; }
-table.balance .bad { font-weight: 600; }
-.panels { display: flex; flex-wrap: wrap; gap: 8px 16px; }
-figure.panel { margin: 0; width: 240px; }
-figure.panel figcaption { font-size: 0.8em; color: #333; }
-svg.progress .mark-line { stroke: #111; stroke-width: 1.2; stroke-dasharray: 5 3; }
-svg.progress .trend-line { fill: none; stroke: #555; stroke-width: 1.2; }
-svg.progress .ratio { fill: #fff; stroke: #1f5fa8; stroke-width: 1.5; }
-svg.progress .ratio.at-mark { fill: #1f5fa8; }
-svg.progress .session { fill: #111; }
-svg.progress .accuracy { fill: #fff; stroke: #111; stroke-width: 1.3; }
-.readiness.ready { font-weight: 600; }
-.toolbar { display: none; }
+  .toolbar { display: none; }
   section.script { margin: 0; }
   section.script + section.script, section.records { break-before: page; }
   table, figure, .rung, dl.facts, .caution, svg { break-inside: avoid; }
