@@ -3,7 +3,7 @@
 // script at all. In the editor's webview it takes the webview's nonce rules instead and adds a
 // Save button, the page's only script.
 import { createHash } from 'node:crypto';
-import { escapeHtml, webviewPolicy } from './html';
+import { documentHead, escapeHtml, webviewPolicy } from './html';
 import { renderBalance } from './balanceSection';
 import { renderPlan } from './planSection';
 import type { ScriptReport } from './model';
@@ -53,23 +53,13 @@ export function renderReport(input: ReportInput, webview?: WebviewOptions): stri
   const csp = webview
     ? webviewPolicy(webview)
     : ["default-src 'none'", `style-src 'sha256-${styleHash}'`, "script-src 'none'", 'img-src data:', "base-uri 'none'", "form-action 'none'"].join('; ');
-  const styleAttr = webview ? ` nonce="${webview.nonce}"` : '';
   const names = input.scripts.map((s) => s.title ?? s.file);
   const title = names.length === 1 ? `Rungs report: ${names[0]}` : `Rungs report: ${names.length} scripts`;
   const hasProgress = Boolean(input.progress?.files.length);
   const entries = input.scripts.map((s, i) => `<li><a href="#script-${i + 1}">${escapeHtml(s.title ?? s.file)}</a></li>`);
   if (hasProgress) entries.push('<li><a href="#records">Client progress</a></li>');
   const contents = entries.length > 1 ? `<nav><ol>${entries.join('')}</ol></nav>` : '';
-  return `<!DOCTYPE html>
-<html lang="en">
-<head>
-<meta charset="UTF-8">
-<meta http-equiv="Content-Security-Policy" content="${csp}">
-<meta name="viewport" content="width=device-width, initial-scale=1.0">
-<title>${escapeHtml(title)}</title>
-<style${styleAttr}>${REPORT_STYLE}</style>
-</head>
-<body>
+  return `${documentHead({ csp, title, style: REPORT_STYLE, nonce: webview?.nonce })}
 ${webview ? '<div class="toolbar"><button id="save" type="button">Save report as HTML…</button></div>\n' : ''}<header class="report"><h1>${escapeHtml(title)}</h1>
 <p>Difficulty ladders, item scores, paced durations, problems and matched sets of stimulus scripts${hasProgress ? ', and client progress from rate records' : ''}.</p>${contents}</header>
 ${input.scripts.map((s, i) => renderScriptSection(s, i, input.caution)).join('\n')}
