@@ -81,7 +81,9 @@ describe.skipIf(skip)('VS Code workbench (code-server + Chromium)', () => {
 
   it('installs the .vsix into the workbench', () => {
     expect(report.installed).toMatch(/rungs\.vsix' was successfully installed/);
-    expect(statSync(join(root, '.cache', 'workbench', 'rungs.vsix')).size).toBeLessThan(4_000_000);
+    // The package carries the compressed pronunciation model (about 4.2 MB, itself bounded at 5 MB
+    // by tests/core/estimator.test.ts) beside the bundles and word tables.
+    expect(statSync(join(root, '.cache', 'workbench', 'rungs.vsix')).size).toBeLessThan(8_000_000);
   });
 
   it('lists every error and warning of the server in the Problems panel', () => {

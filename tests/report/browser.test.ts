@@ -158,7 +158,7 @@ describe.skipIf(skip)('the report in Chromium', () => {
     await page.screenshot({ path: join(artifacts, 'report-print.png'), fullPage: true });
     await page.emulateMedia({ media: 'screen' });
     // The README's picture is this screenshot; RUNGS_UPDATE_README=1 copies it into docs/.
-    if (process.env.RUNGS_UPDATE_README === '1') copyFileSync(join(artifacts, 'report-ladder.png'), join(root, 'docs', 'report-ladder.png'));
+    if (process.env.RUNGS_UPDATE_README === '1') copyFileSync(join(artifacts, 'report-ladder.png'), join(root, 'client', 'images', 'report-ladder.png'));
     for (const f of ['report-screen.png', 'report-print.png', 'report-ladder.png']) {
       expect(readFileSync(join(artifacts, f)).subarray(1, 4).toString()).toBe('PNG');
     }
