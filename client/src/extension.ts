@@ -8,6 +8,7 @@ import { sortCurrentRung, WorkspaceCheck } from './commands';
 import { LadderView } from './ladderView';
 import { ProgressView, RECORDS_LANGUAGE } from './progressView';
 import { DidAnalyzeNotification } from './protocol';
+import { openReport } from './reportView';
 import { ItemStatus } from './statusBar';
 import { espeakFound, runDelivery } from './delivery';
 
@@ -84,6 +85,11 @@ export async function activate(context: vscode.ExtensionContext): Promise<RungsA
         : vscode.window.visibleTextEditors.find((v) => v.document.languageId === RECORDS_LANGUAGE);
       if (e) await progress.show(e.document);
       else void vscode.window.showInformationMessage('Rungs: open a rate records file (*.rates.csv) to see its progress.');
+    }),
+    vscode.commands.registerCommand('rungs.openReport', async () => {
+      const editor = activeRungsEditor();
+      if (editor && client) await openReport(client, editor.document, String(context.extension.packageJSON.version ?? ''));
+      else void vscode.window.showInformationMessage('Rungs: open a .rungs script to see its report.');
     }),
     vscode.commands.registerCommand('rungs.sortCurrentRung', async () => {
       const editor = activeRungsEditor();

@@ -2,16 +2,12 @@
 // Pure functions from the server's `rungs/ladder` payload to markup, so they are unit-tested
 // without an editor. Every string that came from the script is escaped here; colours come from
 // the editor theme's CSS variables, so the view follows light, dark and high-contrast themes.
+import { documentHead, escapeHtml, webviewPolicy } from '../../server/src/report/html';
 import { estimatedMark, estimatedNote } from './present';
 import { SET_MARK_CSS, setLegend, setMarks, setMarkSvg } from './ladderSets';
 import type { Ladder, LadderProblem, LadderRung, LadderStep } from './protocol';
 
-const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
-
-/** Escapes text for use in HTML/SVG content and in double- or single-quoted attributes. */
-export function escapeHtml(text: string): string {
-  return String(text).replace(/[&<>"']/g, (c) => ESCAPES[c]);
-}
+export { escapeHtml };
 
 const fmt = (n: number): string => (Number.isFinite(n) ? n.toFixed(1) : '–');
 
@@ -214,23 +210,7 @@ export function renderLadderPage(o: PageOptions): string {
  * body on `update` messages.
  */
 export function renderWebviewPage(o: PageOptions & { title: string; style: string }): string {
-  const csp = [
-    "default-src 'none'",
-    `style-src 'nonce-${o.nonce}'`,
-    `script-src 'nonce-${o.nonce}'`,
-    `img-src ${o.cspSource} data:`,
-    `font-src ${o.cspSource}`,
-  ].join('; ');
-  return `<!DOCTYPE html>
-<html lang="en">
-<head>
-<meta charset="UTF-8">
-<meta http-equiv="Content-Security-Policy" content="${csp}">
-<meta name="viewport" content="width=device-width, initial-scale=1.0">
-<title>${escapeHtml(o.title)}</title>
-<style nonce="${o.nonce}">${o.style}</style>
-</head>
-<body>
+  return `${documentHead({ csp: webviewPolicy(o), title: o.title, style: o.style, nonce: o.nonce })}
 <h1 id="heading">${escapeHtml(o.heading)}</h1>
 <div id="chart" class="chart">${o.body}</div>
 <script nonce="${o.nonce}">${SCRIPT}</script>

@@ -1,7 +1,7 @@
 // Builds everything: the compact word tables and the esbuild bundles (CLI, language server,
 // VS Code client). `npm run build` runs this; tests and the demo run it first.
 import { build } from 'esbuild';
-import { existsSync, statSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, statSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { buildWordData } from './build-data.mjs';
@@ -21,6 +21,14 @@ const stale =
 if (stale) {
   const { words, bytes } = await buildWordData(dataDir);
   console.log(`word table: ${words} words, ${(bytes / 1e6).toFixed(1)} MB`);
+}
+
+// The pronunciation estimator's model is trained by `npm run train:pronounce` and committed;
+// the build only copies it beside the word tables, where it is read on the first estimate.
+const model = join(root, 'server/data/pronounce-model.txt.br');
+if (existsSync(model)) {
+  mkdirSync(dataDir, { recursive: true });
+  copyFileSync(model, join(dataDir, 'pronounce-model.txt.br'));
 }
 
 const common = {
@@ -43,7 +51,7 @@ const serverAsSibling = {
   },
 };
 const entries = [
-  { in: 'server/src/cli/bin.ts', out: 'rungs.js', plugins: [serverAsSibling] },
+  { in: 'server/src/cli/bin.ts', out: 'rungs.js', plugins: [serverAsSibling], external: ['playwright-core'] },
   { in: 'server/src/lsp/main.ts', out: 'server.js' },
   { in: 'client/src/extension.ts', out: 'extension.js', external: ['vscode'] },
   // The benchmark calls the core in-process through this small bundle (not shipped).

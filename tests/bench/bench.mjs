@@ -169,3 +169,8 @@ if (jsonFile) writeFileSync(jsonFile, `${JSON.stringify(figures, null, 2)}\n`);
 
 // Model speech fitted to the timing plan (its own script: it needs espeak-ng and takes a while).
 spawnSync(process.execPath, [join(root, 'tests/bench/audio.mjs')], { cwd: root, stdio: 'inherit' });
+
+// 4. The pronunciation estimator on the held-out words, beside the rules it replaces.
+const { pronounceReport } = await import('./pronounce.mjs');
+console.log('');
+console.log(pronounceReport());

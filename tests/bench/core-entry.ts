@@ -6,3 +6,10 @@ export { balanceSets } from '../../server/src/core/balance';
 export { makeModelAudio } from '../../server/src/speech/makeAudio';
 export { ESPEAK, findOnPath } from '../../server/src/speech/espeak';
 export { makePace } from '../../server/src/core/pace';
+// The pronunciation estimator and its comparison (tests/bench/pronounce.mjs).
+export { parseModels } from '../../server/src/core/g2p/model';
+export { estimateCandidates } from '../../server/src/core/g2p/estimator';
+export { decode } from '../../server/src/core/g2p/decode';
+export { letterToSound } from '../../server/src/core/lts/letterToSound';
+export { score as scorePronunciations } from './pronounceEval';
+export { PSEUDOWORDS } from './pseudowords';

@@ -110,7 +110,7 @@ describe('estimatePronunciation', () => {
   ];
   it.each(morphology)('%s -> %s (%s)', (word, phones, how) => {
     const estimate = estimatePronunciation(word, without(word));
-    expect(estimate).toEqual({ phones: phones.split(' '), source: 'morphology', how });
+    expect(estimate).toEqual({ phones: phones.split(' '), source: 'morphology', how, alternatives: [] });
   });
 
   it('strips a dictionary comment from the stem', () => {
@@ -121,12 +121,13 @@ describe('estimatePronunciation', () => {
     expect(estimatePronunciation('alborgs', data).phones).toEqual('AO1 L B AO0 R G Z'.split(' '));
   });
 
-  it('falls back to the letter-to-sound rules', () => {
+  it('falls back to the letter-to-sound rules when no estimator model is loaded', () => {
     const none: WordData = { pronunciations: () => undefined, count: () => 0 };
     expect(estimatePronunciation('blick', none)).toEqual({
       phones: letterToSound('blick'),
       source: 'estimate',
       how: 'letter-to-sound rules',
+      alternatives: [],
     });
   });
 });

@@ -7,7 +7,7 @@ import { createWriteStream, mkdirSync, mkdtempSync, writeFileSync } from 'node:f
 import http from 'node:http';
 import net from 'node:net';
 import { join } from 'node:path';
-import { chromium, type BrowserContext, type FrameLocator, type Page } from 'playwright-core';
+import { chromium, type BrowserContext, type Frame, type FrameLocator, type Page } from 'playwright-core';
 
 /** What every workbench run needs: the programs, the .vsix, and where things go. */
 export interface WorkbenchSetup {
@@ -57,6 +57,10 @@ export interface DriverReport {
   itemsAfterEdit: number;
   jumpedToLine: string;
   statusBarText: string;
+  /** The report view: its ladder's item points, rung tables' item rows and Save buttons. */
+  reportItems: number;
+  reportRows: number;
+  reportSaveButtons: number;
   screenshots: string[];
   timings: Record<string, number>;
   runDir: string;
@@ -159,6 +163,34 @@ async function problemRows(page: Page, filter: string, expectRow: string | null)
 
 function ladderFrame(page: Page): FrameLocator {
   return page.frameLocator('iframe.webview.ready').frameLocator('iframe#active-frame');
+}
+
+/**
+ * Runs "Open Report for This Script" and reads the report's webview: the frame whose document
+ * holds the report header, found as the webview's frames load (no fixed wait).
+ */
+async function openReport(
+  page: Page,
+  run: (page: Page, title: string) => Promise<void>,
+): Promise<{ reportItems: number; reportRows: number; reportSaveButtons: number }> {
+  const find = async (): Promise<Frame | null> => {
+    for (const f of page.frames()) if ((await f.locator('header.report').count().catch(() => 0)) > 0) return f;
+    return null;
+  };
+  await run(page, 'Rungs: Open Report for This Script');
+  const deadline = Date.now() + 30_000;
+  let frame = await find();
+  while (!frame && Date.now() < deadline) {
+    await page.waitForEvent('framenavigated', { timeout: Math.max(1, deadline - Date.now()) }).catch(() => undefined);
+    frame = await find();
+  }
+  if (!frame) throw new Error('the report webview did not appear');
+  await frame.locator('svg.ladder circle.item').first().waitFor({ timeout: 15_000 });
+  return {
+    reportItems: await frame.locator('svg.ladder circle.item').count(),
+    reportRows: await frame.locator('table.items tbody tr:not(.total)').count(),
+    reportSaveButtons: await frame.locator('button#save').count(),
+  };
 }
 
 export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
@@ -296,9 +328,14 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
     await shot('overview');
     lap('liveEdit');
 
+    // 7. The printable report of the script (as edited) in a webview of its own, with Save.
+    const report = await openReport(page, runCommand);
+    await shot('report');
+    lap('report');
+
     return {
       installed, problemRows: rows, fixRemovedProblem, hoverText, fixedLineText, marks, markRules, items,
-      itemsAfterEdit, jumpedToLine, statusBarText, screenshots, timings, runDir: run,
+      itemsAfterEdit, jumpedToLine, statusBarText, ...report, screenshots, timings, runDir: run,
     };
   } finally {
     writeFileSync(join(run, 'browser-console.log'), consoleLines.join('\n'));

@@ -81,7 +81,9 @@ describe.skipIf(skip)('VS Code workbench (code-server + Chromium)', () => {
 
   it('installs the .vsix into the workbench', () => {
     expect(report.installed).toMatch(/rungs\.vsix' was successfully installed/);
-    expect(statSync(join(root, '.cache', 'workbench', 'rungs.vsix')).size).toBeLessThan(4_000_000);
+    // The package carries the compressed pronunciation model (about 4.2 MB, itself bounded at 5 MB
+    // by tests/core/estimator.test.ts) beside the bundles and word tables.
+    expect(statSync(join(root, '.cache', 'workbench', 'rungs.vsix')).size).toBeLessThan(8_000_000);
   });
 
   it('lists every error and warning of the server in the Problems panel', () => {
@@ -112,6 +114,13 @@ describe.skipIf(skip)('VS Code workbench (code-server + Chromium)', () => {
     expect(report.markRules).toContain('step-backwards');
     expect(report.items).toBe(oracle.ladder.rungs.reduce((n, r) => n + r.items.length, 0));
     expect(report.itemsAfterEdit).toBe(report.items + 1);
+  });
+
+  it('opens the report of the edited script with every item and a Save button', () => {
+    // The report is made after the edit above, so it holds the new item too.
+    expect(report.reportItems).toBe(report.itemsAfterEdit);
+    expect(report.reportRows).toBe(report.itemsAfterEdit);
+    expect(report.reportSaveButtons).toBe(1);
   });
 
   it('jumps to an item from the ladder and shows it in the status bar', () => {

@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CodeAction, CompletionItem, Diagnostic, DocumentSymbol, Hover, InlayHint } from 'vscode-languageserver-protocol';
 import { analyze } from '../../server/src/core/analyze';
+import { estimatePronunciation } from '../../server/src/core/lts/estimate';
 import * as convert from '../../server/src/lsp/convert';
 import { lint } from '../../server/src/rules/index';
 import { ruleDocsUrl } from '../../server/src/rules/docs';
@@ -247,6 +248,28 @@ describe('estimated pronunciations are marked wherever numbers show', () => {
     const item = hoverText(await hoverAt(1, 27, u));
     expect(item).toContain(`difficulty **≈${a.items[0].difficulty}**`);
     expect(item).toContain('≈ 1 word with an estimated pronunciation: teodric');
+  });
+
+  it('the hover lists the estimator\'s alternatives with scores; a quick fix writes one as @say', async () => {
+    const est = estimatePronunciation('teodric', words);
+    expect(est.alternatives.length).toBe(5);
+    const hover = hoverText(await hoverAt(1, 2, u));
+    for (const [i, c2] of est.alternatives.entries()) {
+      expect(hover).toContain(`| ${i + 1} | \`${c2.phones.join(' ')}\``);
+      expect(hover).toContain(`| ${Math.round(100 * c2.share)} % | ${c2.log10.toFixed(2)} |`);
+    }
+    const actions = await c.request<CodeAction[]>('textDocument/codeAction', {
+      textDocument: { uri: u },
+      range: { start: { line: 1, character: 2 }, end: { line: 1, character: 2 } },
+      context: { diagnostics: [] },
+    });
+    const second = actions.find((x) => x.title.startsWith('Use estimate 2 for "teodric"'))!;
+    expect(second.kind).toBe('quickfix');
+    const after = applyTextEdits(text, editsFor(second.edit!, u));
+    const say = `@say teodric = ${est.alternatives[1].phones.join(' ')}`;
+    expect(after).toBe(`${say}\n${text}`);
+    // Written as an override, the word is no longer estimated.
+    expect(analyze({ text: after, data: words }).items[0].estimatedWords).toBe(0);
   });
 });
 

@@ -2,6 +2,8 @@
 // quick-fix-only fixes, the Unnecessary tag, facts-only pace messages, words with no estimate,
 // items with nothing to say and overrides no item uses.
 import { describe, expect, it } from 'vitest';
+import { estimatePronunciation } from '../../server/src/core/lts/estimate';
+import { words } from '../helpers/data';
 import { lintText } from './check';
 
 const only = (text: string, rule: string) => lintText(text).filter((p) => p.rule === rule);
@@ -14,9 +16,12 @@ describe('duplicate-item', () => {
 });
 
 describe('estimated-word', () => {
-  it('offers a letter-to-sound estimate as a quick fix only', () => {
+  it('offers the estimate as a quick fix only', () => {
     const [p] = only('== One\nTeodric is here.\n', 'estimated-word');
-    expect(p.fix).toMatchObject({ batch: false, edits: [{ line: 0, character: 0, newText: '@say Teodric = T IY1 AA0 D R IH0 K\n' }] });
+    const estimate = estimatePronunciation('teodric', words);
+    expect(estimate.how).toBe('joint-sequence model');
+    expect(p.message).toContain('estimated from its spelling');
+    expect(p.fix).toMatchObject({ batch: false, edits: [{ line: 0, character: 0, newText: `@say Teodric = ${estimate.phones.join(' ')}\n` }] });
   });
 
   it('says plainly when no letter-to-sound rule applies, with no fix', () => {

@@ -13,7 +13,10 @@ export interface FlagSpec {
 }
 
 export interface ParsedArgs {
+  /** The last value of each flag (or true for a flag without a value). */
   flags: Map<string, string | true>;
+  /** Every value of each flag that takes one, in order, for options that may be repeated. */
+  lists: Map<string, string[]>;
   positionals: string[];
 }
 
@@ -45,8 +48,9 @@ function joinDashValues(argv: string[], specs: Record<string, FlagSpec>): string
 
 export function parseArgs(argv: string[], specs: Record<string, FlagSpec>): ParsedArgs {
   const options: NonNullable<ParseArgsConfig['options']> = {};
-  for (const [name, s] of Object.entries(specs)) options[name] = { type: s.value ? 'string' : 'boolean', ...(s.alias ? { short: s.alias } : {}) };
-  let parsed: { values: Record<string, string | boolean | undefined>; positionals: string[] };
+  // String options are read as lists so an option given twice keeps every value (`--records a --records b`).
+  for (const [name, s] of Object.entries(specs)) options[name] = { type: s.value ? 'string' : 'boolean', ...(s.value ? { multiple: true } : {}), ...(s.alias ? { short: s.alias } : {}) };
+  let parsed: { values: Record<string, string[] | boolean | undefined>; positionals: string[] };
   try {
     parsed = nodeParseArgs({ args: joinDashValues(argv, specs), options, strict: true, allowPositionals: true }) as typeof parsed;
   } catch (err) {
@@ -60,11 +64,17 @@ export function parseArgs(argv: string[], specs: Record<string, FlagSpec>): Pars
     throw new UsageError(`unknown option "${option}"`);
   }
   const flags = new Map<string, string | true>();
+  const lists = new Map<string, string[]>();
   for (const [name, v] of Object.entries(parsed.values)) {
     if (v === undefined || v === false) continue;
+    if (v === true) {
+      flags.set(name, true);
+      continue;
+    }
     const choices = specs[name]?.choices;
-    if (typeof v === 'string' && choices && !choices.includes(v)) throw new UsageError(`--${name} must be one of ${choices.join(', ')}, not "${v}"`);
-    flags.set(name, v);
+    for (const one of v) if (choices && !choices.includes(one)) throw new UsageError(`--${name} must be one of ${choices.join(', ')}, not "${one}"`);
+    flags.set(name, v[v.length - 1]);
+    lists.set(name, v);
   }
-  return { flags, positionals: parsed.positionals };
+  return { flags, lists, positionals: parsed.positionals };
 }

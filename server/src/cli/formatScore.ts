@@ -4,6 +4,7 @@ import type { Analysis, ItemAnalysis, Pace, Problem } from '../core/types';
 import { stringify } from 'csv-stringify/sync';
 import { baselineRatio, fasterThanReadingWords, formatNumber } from '../core/pace';
 import { CAUTION } from '../core/caution';
+import { itemFacts } from '../report/model';
 import { describeLengths, sessionLengths } from '../core/timing';
 import { jsonPieces } from './jsonStream';
 import { terminalSafe } from '../core/excerpt';
@@ -76,15 +77,7 @@ function paceNote(a: Analysis, p: Pace): string {
 
 function itemJson(it: ItemAnalysis): unknown {
   return {
-    line: it.node.line + 1,
-    text: it.node.text,
-    id: it.node.id,
-    note: it.node.note,
-    sets: it.sets,
-    words: it.wordCount,
-    syllables: it.syllables,
-    phonemes: it.phonemes,
-    wcm: it.wcm,
+    ...itemFacts(it),
     zipfMean: round(it.zipfMean, 4),
     zipfMin: round(it.zipfMin, 4),
     lowFrequencyWords: it.lowFrequencyWords,

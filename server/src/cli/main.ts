@@ -11,6 +11,8 @@ import { cuesCommand } from './cues';
 import { audioCommand } from './audio';
 import { practiceCommand } from './practice';
 import { VERSION } from '../version';
+import { pronounceCommand } from './pronounce';
+import { reportCommand } from './report';
 
 export interface Command {
   name: string;
@@ -21,11 +23,11 @@ export interface Command {
 
 export { VERSION } from '../version';
 
-export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, practiceCommand, lspCommand];
+export const COMMANDS: Command[] = [scoreCommand, lintCommand, setsCommand, progressCommand, cuesCommand, audioCommand, practiceCommand, pronounceCommand, reportCommand, lspCommand];
 
 function help(): string {
   const lines = ['Usage: rungs <command> [options]', '', 'Commands:'];
-  for (const c of COMMANDS) lines.push(`  ${c.name.padEnd(8)} ${c.summary}`);
+  for (const c of COMMANDS) lines.push(`  ${c.name.padEnd(10)} ${c.summary}`);
   lines.push('', 'Run `rungs <command> --help` for a command\'s options.');
   return `${lines.join('\n')}\n`;
 }

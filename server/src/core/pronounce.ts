@@ -1,7 +1,9 @@
 // Pronunciation of spoken words, in order of trust: a written override (script, then workspace
 // lexicon), the CMU Pronouncing Dictionary (first listed pronunciation unless a variant is
-// chosen), morphology on a dictionary stem, then letter-to-sound rules. Whatever did not come
-// from the dictionary or an override is marked, so every display can say it is an estimate.
+// chosen), morphology on a dictionary stem, then the trained estimator (letter-to-sound rules
+// when no model is loaded). Whatever did not come from the dictionary or an override is marked,
+// so every display can say it is an estimate.
+import type { Candidate } from './g2p/decode';
 import { estimatePronunciation } from './lts/estimate';
 import { lg10wf, zipf } from './frequency';
 import { isVowel, parsePhones } from './phones';
@@ -18,6 +20,8 @@ export interface Pronunciation {
   how: string;
   /** Set when a requested variant does not exist; the first listed one was used instead. */
   variantError: string | null;
+  /** The estimator's ranked candidates with scores, when it made the estimate; else empty. */
+  alternatives: Candidate[];
 }
 
 /** Everything about a word that does not depend on where it stands; computed once per spelling. */
@@ -92,7 +96,7 @@ export class Pronouncer {
     const o = this.overrides.get(spoken);
     let wanted = variant;
     if (o && o.phones.length && wanted === null) {
-      return { phones: o.phones, source: 'override', variant: 0, variants, how: `override (${o.origin})`, variantError: null };
+      return { phones: o.phones, source: 'override', variant: 0, variants, how: `override (${o.origin})`, variantError: null, alternatives: [] };
     }
     if (o && o.variant !== null && wanted === null) wanted = o.variant;
     if (variants.length) {
@@ -111,6 +115,7 @@ export class Pronouncer {
         variants,
         how: index > 1 ? `listed pronunciation ${index} of ${variants.length}` : 'CMU Pronouncing Dictionary',
         variantError,
+        alternatives: [],
       };
     }
     const est = estimatePronunciation(spoken, this.data);
@@ -120,6 +125,7 @@ export class Pronouncer {
       variant: 0,
       variants: [],
       how: est.how,
+      alternatives: est.alternatives,
       variantError: wanted !== null ? `"${spoken}" is not in the dictionary, so it has no listed pronunciation ${wanted}` : null,
     };
   }

@@ -3,6 +3,8 @@
 import type { RecordsOptions } from './records/settings';
 import type { Finding } from './findings';
 
+import type { Candidate } from './g2p/decode';
+
 export type Severity = 'error' | 'warning' | 'info' | 'hint';
 
 /** A range inside the script text, 0-based, end exclusive. */
@@ -296,4 +298,10 @@ export interface WordData {
   pronunciations(word: string): string[] | undefined;
   /** SUBTLEX-US count of a lower-case word, 0 when unseen. */
   count(word: string): number;
+  /**
+   * Up to `k` estimated pronunciations of a lower-case spelling from the trained estimator
+   * (core/g2p), best first; undefined when no model is available (the letter-to-sound rules
+   * are used instead).
+   */
+  estimate?(word: string, k: number): Candidate[] | undefined;
 }

@@ -3,16 +3,25 @@
 // costs hundreds; that is what keeps start-up of the CLI and the server fast.
 import { existsSync, readFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
+import type { Candidate } from '../core/g2p/decode';
 import type { WordData } from '../core/types';
+import { estimateWith } from './pronounceModel';
 
 export class WordTable implements WordData {
   private readonly text: string;
   private readonly offsets: Uint32Array;
   private readonly cache = new Map<string, { count: number; prons: string[] | undefined } | null>();
 
+  /** Folder of the pronunciation model, read on the first estimate (none: no estimator). */
+  modelDir: string | null = null;
+
   constructor(text: string, offsets: Uint32Array) {
     this.text = text;
     this.offsets = offsets;
+  }
+
+  estimate(word: string, k: number): Candidate[] | undefined {
+    return this.modelDir === null ? undefined : estimateWith(this.modelDir, word, k);
   }
 
   /** Number of distinct words in the table. */
@@ -93,6 +102,7 @@ export function loadWordTable(dataDir?: string): WordTable {
       ? new Uint32Array(raw.buffer, raw.byteOffset, raw.byteLength / 4)
       : new Uint32Array(raw.buffer.slice(raw.byteOffset, raw.byteOffset + raw.byteLength));
   const table = new WordTable(text, offsets);
+  table.modelDir = dir;
   if (!dataDir) shared = table;
   return table;
 }

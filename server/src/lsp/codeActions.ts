@@ -66,6 +66,19 @@ function wordActions(s: Snapshot, item: ItemAnalysis, w: WordAnalysis, line: num
       edit: edit(s, [{ line: at, character: 0, endLine: at, endCharacter: 0, newText: `@say ${w.spoken} = ${w.phones.join(' ')}${eol}` }]),
     });
   }
+  // The estimator's other candidates, each a quick fix writing it as the word's override.
+  if (!scriptOverride && w.source === 'estimate') {
+    const { alternatives } = s.analysis.pronouncer.pronouncer.score(w.spoken);
+    const at = overrideInsertLine(s);
+    alternatives.slice(1).forEach((c, i) => {
+      const phones = c.phones.join(' ');
+      actions.push({
+        title: `Use estimate ${i + 2} for "${w.spoken}" (${Math.round(100 * c.share)} %): @say ${w.spoken} = ${phones}`,
+        kind: CodeActionKind.QuickFix,
+        edit: edit(s, [{ line: at, character: 0, endLine: at, endCharacter: 0, newText: `@say ${w.spoken} = ${phones}${lineEnding(s.text)}` }]),
+      });
+    });
+  }
   // A variant mark "(n)" is read only after a plain word, and applies to every word of its token:
   // after "Dr." or "$5" it would be read aloud, after "well-read" it would apply to both parts.
   const token = w.variants.length > 1 ? tokenOf(item, w) : undefined;

@@ -130,3 +130,6 @@ export interface DeliveryResult {
   /** One line for people: what was written, or why nothing was. */
   message: string;
 }
+/** `rungs/report`: the plain data of a script's report (server/src/report/model.ts), drawn by the client. */
+export const REPORT_METHOD = 'rungs/report';
+export type { ScriptReport } from '../report/model';

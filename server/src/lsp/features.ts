@@ -14,6 +14,7 @@ import { formatDocument } from './formatScript';
 import { hover } from './hover';
 import { inlayHints } from './inlay';
 import { itemAt, ItemAtRequest, ladder, LadderRequest } from './ladder';
+import { ReportRequest, scriptReport } from './report';
 import { PROGRESS_METHOD, type ProgressView } from './contract';
 import { progressView, recordsHover, recordsLenses } from './records';
 import type { RecordsDocuments } from './recordsDocuments';
@@ -94,6 +95,7 @@ export function registerFeatures(
     return r ? progressView(r.result, r.mark) : null;
   }));
   connection.onRequest(ItemAtRequest, on('rungs/itemAt', null, (p) => p.uri, (s, p) => itemAt(s, p.line)));
+  connection.onRequest(ReportRequest, on('rungs/report', null, (p) => p.uri, (s) => scriptReport(s)));
 
   connection.onExecuteCommand(async (p) => {
     try {

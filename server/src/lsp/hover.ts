@@ -4,6 +4,7 @@
 import { isEstimated } from '../core/pronounce';
 import { MarkupKind, type Hover } from 'vscode-languageserver/node';
 import { settingSpec } from '../core/settings';
+import type { Candidate } from '../core/g2p/decode';
 import { toIpa } from '../core/phones';
 import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
 import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
@@ -38,6 +39,13 @@ function sourceText(w: WordAnalysis, how: string): string {
   return isEstimated(w) ? `${ESTIMATED_MARK} estimated pronunciation (${how}): check it, or add a pronunciation override` : how;
 }
 
+/** The estimator's ranked candidates with their shares; a quick fix writes any of them as @say. */
+function estimatorAlternatives(word: string, alternatives: Candidate[]): string {
+  const rows = alternatives.map((c, i) => `| ${i + 1} | \`${c.phones.join(' ')}\` /${toIpa(c.phones)}/ | ${Math.round(100 * c.share)} % | ${c.log10.toFixed(2)} |`);
+  const head = `Estimator's alternatives for ${md(word)} (share among them; log10 probability); a quick fix writes one as \`@say\`:`;
+  return [head, '', '| # | phones | share | log10 p |', '|---:|---|---:|---:|', ...rows].join('\n');
+}
+
 export function wordHoverText(s: Snapshot, w: WordAnalysis, variantMark: number | null): string {
   const score = s.analysis.pronouncer.pronouncer.score(w.spoken, variantMark);
   const lines: string[] = [];
@@ -53,6 +61,10 @@ export function wordHoverText(s: Snapshot, w: WordAnalysis, variantMark: number 
   if (w.zipf < LOW_FREQUENCY_ZIPF) {
     lines.push('');
     lines.push(w.count === 0 ? 'Not seen in SUBTLEX-US (lowest Zipf).' : `Low frequency (Zipf below ${LOW_FREQUENCY_ZIPF}).`);
+  }
+  if (score.alternatives.length > 1) {
+    lines.push('');
+    lines.push(estimatorAlternatives(w.spoken, score.alternatives));
   }
   if (w.variants.length > 1 || (w.variants.length === 1 && w.source !== 'dictionary')) {
     lines.push('');

@@ -2,8 +2,9 @@
 // a contract with client/ (keep them): `rungs/ladder`, `rungs/itemAt`, and the notification
 // `rungs/didAnalyze` sent after every analysis.
 import { NotificationType, RequestType } from 'vscode-languageserver/node';
-import { DID_ANALYZE_METHOD, ITEM_AT_METHOD, LADDER_METHOD, type ItemAt, type Ladder, type LadderStep } from './contract';
-import { RULES } from '../rules/index';
+import { DID_ANALYZE_METHOD, ITEM_AT_METHOD, LADDER_METHOD, type ItemAt, type Ladder } from './contract';
+import { maxOf } from '../core/arrays';
+import { ladderSteps } from '../report/ladderSteps';
 import { ladderMetric, METRIC_NAMES, metricOf, rungStatsByIndex, stepLimit } from '../rules/shared';
 import type { Snapshot } from './documents';
 
@@ -17,7 +18,6 @@ const round1 = (n: number) => Math.round(n * 10) / 10;
 
 export function ladder(s: Snapshot): Ladder {
   const a = s.analysis;
-  const ladderRules = new Set(RULES.filter((r) => r.category === 'ladder').map((r) => r.id));
   const title = a.script.header.find((h) => h.key === 'title')?.value.trim() || null;
   // The medians and the step limit are those the ladder rules judge (the configured metric).
   const metric = ladderMetric({ settings: s.lint });
@@ -40,29 +40,14 @@ export function ladder(s: Snapshot): Ladder {
       sets: it.sets,
     })),
   }));
-  const steps: LadderStep[] = [];
-  const withItems = a.rungs.filter((r) => r.items.length > 0);
-  for (let i = 1; i < withItems.length; i++) {
-    const from = withItems[i - 1];
-    const to = withItems[i];
-    // A ladder problem about this step sits on the later rung (its header or within it), or
-    // points at the earlier rung through its related information.
-    const end = a.rungs[to.index + 1]?.node.line ?? Infinity;
-    const p = s.problems.find(
-      (x) =>
-        ladderRules.has(x.rule) &&
-        x.line >= to.node.line &&
-        x.line < end &&
-        (x.line === to.node.line || x.related?.some((r) => r.line === from.node.line)),
-    );
-    steps.push({ from: from.index, to: to.index, delta: round1(rungs[to.index].median - rungs[from.index].median), problem: p?.rule ?? null });
-  }
+  // Steps are measured on the same metric as the rungs' medians above.
+  const steps = ladderSteps(a, s.problems, (r) => on(r).median);
   const values = rungs.flatMap((r) => r.items.map((i) => i.value));
   return {
     title,
     direction: a.options.direction,
     metric: METRIC_NAMES[metric],
-    scaleMax: metric === 'difficulty' ? 100 : Math.max(1, Math.ceil(Math.max(0, ...values))),
+    scaleMax: metric === 'difficulty' ? 100 : Math.max(1, Math.ceil(maxOf([0, ...values]))),
     maxStep: stepLimit(a, s.lint).value ?? null,
     rungs,
     steps,

@@ -30,7 +30,7 @@ export const estimatedWord: Rule = {
   category: 'item',
   docs: [
     'Words missing from the CMU Pronouncing Dictionary (names, new words) are pronounced by',
-    'morphology on a dictionary stem or by letter-to-sound rules, and their syllables, phonemes and',
+    'morphology on a dictionary stem or by the trained estimator, and their syllables, phonemes and',
     'complexity are only as good as that estimate. Each such word is reported with the estimated',
     'phones. The quick fix inserts a `@say word = PHONES` line with the estimate at the end of the',
     'script header: check the phones and correct them if needed. `rungs lint --fix` and fix-all',
@@ -52,7 +52,7 @@ export const estimatedWord: Rule = {
           report({ ...at, message: `no English letter-to-sound rule applies to "${excerpt(word)}"; add a pronunciation with @say ${excerpt(word)} = PHONES` });
           continue;
         }
-        const how = w.source === 'morphology' ? 'built from a dictionary stem' : 'estimated by letter-to-sound rules';
+        const how = w.source === 'morphology' ? 'built from a dictionary stem' : 'estimated from its spelling';
         const say = `@say ${word} = ${phones}`;
         report({
           ...at,

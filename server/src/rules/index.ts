@@ -61,6 +61,12 @@ export const RULES: Rule[] = [
 
 export const RULE_IDS: string[] = RULES.map((r) => r.id);
 
+/**
+ * The rules that judge a step between neighbouring rungs. Other ladder rules (a thin or unsorted
+ * rung) are about one rung and are listed with its problems, not drawn on a step.
+ */
+export const STEP_RULES: string[] = [stepBackwards.id, stepTooBig.id, unevenSteps.id, rungsOverlap.id];
+
 /** The rules built from findings; the compiler checks below that every kind has one of them. */
 const FINDING_RULES = [unknownKey, badValue, unknownPhone, badVariant, badConfig, internalError] as const;
 type Unowned = Exclude<FindingKind, (typeof FINDING_RULES)[number]['kinds'][number]>;

@@ -1,0 +1,1 @@
+export const PARAMS: Record<string, unknown>;

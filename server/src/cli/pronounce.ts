@@ -1,0 +1,57 @@
+// `rungs pronounce WORD... [--estimate]`: each word's pronunciation and where it came from. With
+// --estimate the dictionary (and morphology on its stems) is skipped and the trained estimator
+// answers alone, so anyone can compare its guesses with the dictionary's entries.
+import { ALTERNATIVES, ESTIMATOR_HOW } from '../core/lts/estimate';
+import { letterToSound } from '../core/lts/letterToSound';
+import { toIpa } from '../core/phones';
+import { countSyllables, Pronouncer, type Pronunciation } from '../core/pronounce';
+import { DEFAULT_WCM_OPTIONS } from '../core/wcm';
+import { loadWordTable } from '../data/wordTable';
+import { parseArgs } from './args';
+import { EXIT_OK, UsageError, type CliIO } from './io';
+import type { Command } from './main';
+
+const percent = (share: number): string => `${(100 * share).toFixed(share >= 0.1 ? 0 : 1)} %`;
+
+function estimateOnly(word: string, data: ReturnType<typeof loadWordTable>): Pronunciation {
+  const candidates = data.estimate(word, ALTERNATIVES);
+  const base = { variant: 0, variants: [], variantError: null };
+  if (candidates !== undefined && candidates.length > 0) {
+    return { ...base, phones: candidates[0].phones, source: 'estimate', how: ESTIMATOR_HOW, alternatives: candidates };
+  }
+  return { ...base, phones: letterToSound(word), source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
+}
+
+/** One block per word: phones, IPA, syllables, source, and the estimator's alternatives. */
+export function formatPronunciation(word: string, p: Pronunciation): string {
+  if (p.phones.length === 0) return `${word}\t(no estimate: no letter-to-sound rule applies)\n`;
+  const n = countSyllables(p.phones);
+  const source = p.source === 'dictionary' || p.source === 'override' ? p.how : `≈ estimated: ${p.source} (${p.how})`;
+  const lines = [`${word}\t${p.phones.join(' ')}\t/${toIpa(p.phones)}/\t${n} syllable${n === 1 ? '' : 's'}\t${source}`];
+  p.alternatives.forEach((c, i) => lines.push(`  ${i + 1}. ${c.phones.join(' ').padEnd(32)} ${percent(c.share).padStart(6)}   log10 p ${c.log10.toFixed(2)}`));
+  return `${lines.join('\n')}\n`;
+}
+
+export const pronounceCommand: Command = {
+  name: 'pronounce',
+  summary: 'print the pronunciation of words and where it came from',
+  usage: [
+    'Usage: rungs pronounce WORD... [--estimate]',
+    '',
+    '  Looks each word up as a script would: the CMU Pronouncing Dictionary, then morphology on a',
+    '  dictionary stem, then the trained estimator (with its ranked alternatives and their shares).',
+    '  --estimate  skip the dictionary and morphology: the estimator answers alone',
+  ].join('\n'),
+  run(io: CliIO, argv: string[]): number {
+    const args = parseArgs(argv, { estimate: { alias: 'e' } });
+    if (!args.positionals.length) throw new UsageError('give at least one word');
+    const data = loadWordTable();
+    const pronouncer = new Pronouncer(data, [], DEFAULT_WCM_OPTIONS);
+    for (const raw of args.positionals) {
+      const word = raw.toLowerCase();
+      const p = args.flags.has('estimate') ? estimateOnly(word, data) : pronouncer.pronounce(word, null);
+      io.stdout(formatPronunciation(word, p));
+    }
+    return EXIT_OK;
+  },
+};

@@ -1,0 +1,62 @@
+// The pronunciation estimator beside the NRL letter-to-sound rules and the npm `syllable`
+// package, on the held-out tenth of the CMU Pronouncing Dictionary (FNV-1a 32 of the spelling
+// mod 10 == 0, never used in training or tuning) and on invented pseudowords. `npm run bench`
+// prints it; `node tests/bench/pronounce.mjs` prints it alone (after `npm run build`), and
+// `node tests/bench/pronounce.mjs --dev FILE` scores a model trained with `--dev` on the
+// development tenth instead, for choosing parameters.
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { brotliDecompressSync } from 'node:zlib';
+import { dictionary } from 'cmu-pronouncing-dictionary';
+import { syllable } from 'syllable';
+import { entries, part } from '../../server/scripts/g2p/data.mjs';
+
+const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
+const require = createRequire(import.meta.url);
+
+export function pronounceReport(modelFile = join(root, 'dist', 'data', 'pronounce-model.txt.br'), which = 'test') {
+  const core = require(join(root, 'dist', 'bench-core.js'));
+  const heldOut = new Map();
+  for (const [word, prons] of entries(dictionary)) if (part(word) === which) heldOut.set(word, prons);
+  const cpu0 = process.cpuUsage();
+  const [forward, reverse] = core.parseModels(brotliDecompressSync(readFileSync(modelFile)).toString('utf8'));
+  const estimator = { forward, reverse };
+  const loadMs = process.cpuUsage(cpu0).user / 1000;
+
+  const top = new Map();
+  const cpu1 = process.cpuUsage();
+  for (const word of heldOut.keys()) top.set(word, core.estimateCandidates(estimator, word, 5)[0]?.phones ?? []);
+  const estimatorUs = (process.cpuUsage(cpu1).user * 1) / heldOut.size;
+
+  const systems = [
+    ['joint-sequence estimator (both directions)', (w) => ({ phones: top.get(w) ?? core.estimateCandidates(estimator, w, 1)[0]?.phones ?? [] })],
+    ['  its left-to-right model alone', (w) => ({ phones: core.decode(forward, w, 1)[0]?.phones ?? [] })],
+    ['NRL letter-to-sound rules', (w) => ({ phones: core.letterToSound(w) })],
+    ['npm `syllable` (syllables only)', (w) => ({ syllables: syllable(w) })],
+  ];
+  const pseudo = new Map(core.PSEUDOWORDS.map(([w, n]) => [w, [Array.from({ length: n }, () => 'AH0')]]));
+  const pct = (x) => (x === null ? '–' : `${(100 * x).toFixed(1)} %`);
+  const lines = [
+    which === 'test'
+      ? `Held-out words: ${heldOut.size} (FNV-1a 32 of the spelling mod 10 == 0); pseudowords: ${pseudo.size}`
+      : `Development words: ${heldOut.size} (FNV-1a 32 of the spelling mod 10 == 1); pseudowords: ${pseudo.size}`,
+    '',
+    '| method | phones exact (no stress) | phones exact (stress) | phone error rate | syllables exact | primary stress exact | WCM exact | pseudoword syllables exact |',
+    '|---|---:|---:|---:|---:|---:|---:|---:|',
+  ];
+  for (const [name, system] of systems) {
+    const s = core.scorePronunciations(heldOut, system);
+    const p = core.scorePronunciations(pseudo, system);
+    lines.push(`| ${name} | ${pct(s.phonesExact)} | ${pct(s.phonesExactStress)} | ${pct(s.per)} | ${pct(s.syllablesExact)} | ${pct(s.stressExact)} | ${pct(s.wcmExact)} | ${pct(p.syllablesExact)} |`);
+  }
+  lines.push('');
+  lines.push(`Estimator: model read in ${loadMs.toFixed(0)} ms CPU (once, on the first estimate); ${estimatorUs.toFixed(0)} µs CPU per word (target <= 1000), top 5 candidates.`);
+  return lines.join('\n');
+}
+
+if (process.argv[1] === fileURLToPath(import.meta.url)) {
+  const dev = process.argv.indexOf('--dev');
+  console.log(dev >= 0 ? pronounceReport(process.argv[dev + 1], 'dev') : pronounceReport());
+}

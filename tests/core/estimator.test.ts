@@ -1,0 +1,132 @@
+// The trained pronunciation estimator (joint-sequence model, Bisani & Ney 2008): the committed
+// model matches its training script and parameters, the held-out split is what README states,
+// and accuracy on held-out words reaches the published level (about 75 % of words exactly right
+// with stress ignored for joint-sequence models on the CMU dictionary; Bisani & Ney 2008,
+// Speech Communication 50(5), from memory).
+import { readFileSync, statSync } from 'node:fs';
+import { join } from 'node:path';
+import { brotliDecompressSync } from 'node:zlib';
+import { dictionary } from 'cmu-pronouncing-dictionary';
+import { describe, expect, it } from 'vitest';
+import { decode } from '../../server/src/core/g2p/decode';
+import { estimateCandidates } from '../../server/src/core/g2p/estimator';
+import { parseModels } from '../../server/src/core/g2p/model';
+import { estimatePronunciation } from '../../server/src/core/lts/estimate';
+import { letterToSound } from '../../server/src/core/lts/letterToSound';
+import { entries, fnv1a, part } from '../../server/scripts/g2p/data.mjs';
+import { MODEL_PATH, inputsChecksum } from '../../server/scripts/g2p/model-file.mjs';
+import { PARAMS } from '../../server/scripts/g2p/params.mjs';
+import { score } from '../bench/pronounceEval';
+import { PSEUDOWORDS } from '../bench/pseudowords';
+import { words } from '../helpers/data';
+
+const [model, reverse] = parseModels(brotliDecompressSync(readFileSync(MODEL_PATH)).toString('utf8'));
+const estimator = { forward: model, reverse };
+const best = (w: string) => ({ phones: estimateCandidates(estimator, w, 1)[0]?.phones ?? [] });
+
+describe('the committed model', () => {
+  it('was trained by the current training script, parameters and dictionary', () => {
+    // A changed script, parameter or dictionary version changes this checksum: retrain with
+    // `npm run train:pronounce` and commit the model.
+    expect([model.header.direction, reverse.header.direction]).toEqual(['forward', 'reverse']);
+    for (const m of [model, reverse]) {
+      expect(m.header.params).toEqual(PARAMS);
+      expect(m.header.checksum).toBe(inputsChecksum(PARAMS));
+    }
+  });
+
+  it('is a compact file (at most 5 MB)', () => {
+    expect(statSync(MODEL_PATH).size).toBeLessThanOrEqual(5e6);
+  });
+});
+
+describe('the held-out split', () => {
+  it('uses 32-bit FNV-1a (test vectors of the FNV reference, from memory)', () => {
+    expect(fnv1a('')).toBe(0x811c9dc5);
+    expect(fnv1a('a')).toBe(0xe40c292c);
+    expect(fnv1a('foobar')).toBe(0xbf9cf968);
+  });
+
+  it('holds out about a tenth of the plain spellings', () => {
+    const all = [...entries(dictionary).keys()];
+    const held = all.filter((w) => part(w) === 'test').length;
+    expect(held / all.length).toBeGreaterThan(0.09);
+    expect(held / all.length).toBeLessThan(0.11);
+  });
+});
+
+describe('accuracy on held-out words', () => {
+  // Every third held-out word keeps the test quick; `npm run bench` scores all of them.
+  const heldOut = new Map<string, string[][]>();
+  let i = 0;
+  for (const [w, prons] of entries(dictionary)) if (part(w) === 'test' && i++ % 3 === 0) heldOut.set(w, prons);
+  const s = score(heldOut, best);
+
+  it('stays at the level measured when the model was committed, far above the NRL rules', () => {
+    // Measured on all held-out words (README): 75.1 % phones exact with stress ignored, 96.7 %
+    // syllables exact (the 98 % goal is not yet met). The NRL rules reach 37.6 % and 93.0 % on
+    // the same words. These floors, on a third of them, catch a regression of the model or decoder.
+    expect(s.words).toBeGreaterThan(4000);
+    expect(s.phonesExact!).toBeGreaterThanOrEqual(0.73);
+    expect(s.syllablesExact).toBeGreaterThanOrEqual(0.955);
+    const rules = score(heldOut, (w) => ({ phones: letterToSound(w) }));
+    expect(s.phonesExact!).toBeGreaterThan(rules.phonesExact! + 0.3);
+    expect(s.syllablesExact).toBeGreaterThan(rules.syllablesExact);
+  });
+
+  it('gives the syllable counts set by rule to most invented pseudowords', () => {
+    for (const [w] of PSEUDOWORDS) expect(words.pronunciations(w), w).toBeUndefined();
+    const pseudo = new Map(PSEUDOWORDS.map(([w, n]) => [w, [Array.from({ length: n }, () => 'AH0')]]));
+    expect(score(pseudo, best).syllablesExact).toBeGreaterThanOrEqual(0.9);
+  });
+});
+
+describe('decoding', () => {
+  it('ranks candidates with shares that sum to 1', () => {
+    const c = estimateCandidates(estimator, 'okafor', 5);
+    expect(c.length).toBe(5);
+    expect(c.reduce((t, x) => t + x.share, 0)).toBeCloseTo(1, 6);
+    // Exactly one primary stress ranks first (common practice: one main stress per word), then by score.
+    const primaries = (x: { phones: string[] }) => x.phones.filter((p) => p.endsWith('1')).length;
+    expect(primaries(c[0])).toBe(1);
+    for (let k = 1; k < c.length; k++) {
+      const [a, b] = [primaries(c[k - 1]) === 1, primaries(c[k]) === 1];
+      expect(a || !b).toBe(true);
+      if (a === b) expect(c[k].log10).toBeLessThanOrEqual(c[k - 1].log10);
+    }
+    expect(new Set(c.map((x) => x.phones.join(' '))).size).toBe(5);
+  });
+
+  it('emits only CMU phones, stress digits on vowels only', () => {
+    const cmu = /^(AA|AE|AH|AO|AW|AY|EH|ER|EY|IH|IY|OW|OY|UH|UW)[012]$|^(B|CH|D|DH|F|G|HH|JH|K|L|M|N|NG|P|R|S|SH|T|TH|V|W|Y|Z|ZH)$/;
+    for (const m of [model, reverse]) for (const g of m.graphones.slice(1)) for (const p of g!.phones) expect(p).toMatch(cmu);
+  });
+
+  it('leaves a run of letters far longer than any word to the rules', () => {
+    expect(estimateCandidates(estimator, 'x'.repeat(50_000), 5)).toEqual([]);
+    expect(estimatePronunciation('x'.repeat(50_000), words).how).toBe('letter-to-sound rules');
+  });
+
+  it('returns nothing for letters the model never saw', () => {
+    expect(estimateCandidates(estimator, 'ωμέγα', 5)).toEqual([]);
+    expect(decode(model, '', 5)).toEqual([]);
+  });
+});
+
+describe('the fallback order', () => {
+  it('morphology on a listed stem comes before the estimator', () => {
+    // "unkindnesses" is not listed; its stems are (CMU 0.7b via npm cmu-pronouncing-dictionary@3.0.0).
+    expect(words.pronunciations('unkindnesses')).toBeUndefined();
+    const e = estimatePronunciation('unkindnesses', words);
+    expect(e.source).toBe('morphology');
+    expect(e.alternatives).toEqual([]);
+  });
+
+  it('an unlisted name goes to the estimator, with ranked alternatives', () => {
+    expect(words.pronunciations('teodric')).toBeUndefined();
+    const e = estimatePronunciation('teodric', words);
+    expect(e.source).toBe('estimate');
+    expect(e.how).toBe('joint-sequence model');
+    expect(e.alternatives[0].phones).toEqual(e.phones);
+  });
+});
