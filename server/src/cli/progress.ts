@@ -3,7 +3,8 @@
 // row (an error problem), 2 a usage error or an unreadable file.
 import { dirname, relative, resolve, sep } from 'node:path';
 import { resolveScriptContext } from '../config/resolve';
-import { isRecordsFile, readProgress, scriptFacts, type ScriptFacts, type ScriptLookup } from '../core/records';
+import { isRecordsFile, scriptFacts, type ScriptFacts, type ScriptLookup } from '../core/records';
+import { readProgress } from '../rules/records';
 import type { WordData } from '../core/types';
 import { loadWordTable } from '../data/wordTable';
 import { parseArgs } from './args';

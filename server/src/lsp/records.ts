@@ -7,7 +7,8 @@ import { MarkupKind, type CodeLens, type Hover } from 'vscode-languageserver/nod
 import { resolveScriptContext, type ResolveOptions } from '../config/resolve';
 import { CAUTION } from '../core/caution';
 import { formatNumber } from '../core/pace';
-import { isRecordsFile, readProgress, scriptFacts, type ProgressResult, type RateRecord, type ScriptFacts, type ScriptLookup } from '../core/records';
+import { isRecordsFile, scriptFacts, type ProgressResult, type RateRecord, type ScriptFacts, type ScriptLookup } from '../core/records';
+import { readProgress } from '../rules/records';
 import type { WordData } from '../core/types';
 import type { ProgressView } from './contract';
 import { nodeFs, pathKey } from '../node/nodeFs';
