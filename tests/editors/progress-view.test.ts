@@ -5,7 +5,8 @@ import { execFileSync } from 'node:child_process';
 import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { readProgress, scriptFacts, type ProgressResult } from '../../server/src/core/records';
+import { scriptFacts, type ProgressResult } from '../../server/src/core/records';
+import { readProgress } from '../../server/src/rules/records';
 import { runProgressWorkbench, type ProgressDriverReport } from './cs-progress';
 import { chromiumBin, codeServer, missing, root, skip } from './workbench-env';
 

@@ -7,7 +7,8 @@ import { describe, expect, it } from 'vitest';
 import { defaultOptions, applySettings } from '../../server/src/core/options';
 import { parseScript } from '../../server/src/core/parse';
 import { renderFindings } from '../../server/src/rules/index';
-import { readProgress, scriptFacts, type ProgressResult, type ScriptLookup } from '../../server/src/core/records';
+import { scriptFacts, type ProgressResult, type ScriptLookup } from '../../server/src/core/records';
+import { readProgress } from '../../server/src/rules/records';
 import { tokenize } from '../../server/src/core/tokenize';
 import { words } from '../helpers/data';
 

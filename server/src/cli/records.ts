@@ -2,7 +2,8 @@
 // with its scripts found relative to it; shared by `rungs progress` and `rungs report --records`.
 import { dirname, relative, resolve, sep } from 'node:path';
 import { resolveScriptContext } from '../config/resolve';
-import { isRecordsFile, readProgress, scriptFacts, type ScriptFacts, type ScriptLookup } from '../core/records';
+import { isRecordsFile, scriptFacts, type ScriptFacts, type ScriptLookup } from '../core/records';
+import { readProgress } from '../rules/records';
 import type { WordData } from '../core/types';
 import { loadWordTable } from '../data/wordTable';
 import { expandPaths } from './files';

@@ -40,6 +40,15 @@ export type Finding = Range &
     | { kind: 'lexicon-refused'; name: string; reason: string }
     | { kind: 'script-only-key'; key: string }
     | { kind: 'unreadable-config-value'; key: string; example: string }
+    /** A rate-records cell that cannot be used: its column, and what is wrong with what it takes. */
+    | { kind: 'record-bad-cell'; column: string; value: string; explanation: string }
+    | { kind: 'record-unknown-column'; name: string; known: readonly string[] }
+    | { kind: 'record-repeated-column'; name: string }
+    | { kind: 'record-missing-column'; column: string }
+    /** A records row equal to an earlier one (`earlierLine` 0-based); it is counted once. */
+    | { kind: 'record-duplicate-row'; earlierLine: number }
+    /** A records row the CSV parser cannot read; `explanation` is the parser's account. */
+    | { kind: 'record-syntax'; explanation: string }
     /** Rungs itself failed: a rule threw (its id), or the whole analysis did (null). */
     | { kind: 'internal-failure'; rule: string | null; error: string }
   );

@@ -30,6 +30,11 @@ export const SET_SETTINGS: SettingSpec[] = [
     summary: 'Equivalence bound for matched sets, in standard deviations (default 0.5; a project convention).',
     example: '0.5',
     range: NUMBER_RANGES['set-bound'],
+    editor: {
+      name: 'sets.bound',
+      markdownDescription:
+        'Equivalence bound for matched sets (`@set`), in standard deviations of the pooled items: two sets count as matched on a measure when the difference of their means is shown to lie within ±bound SD. Default 0.5 (a project convention). A script\'s `@set-bound` line wins.',
+    },
     apply(value, o) {
       // `(?:sd\s*)?$` rather than `(?:sd)?\s*$` after `\s*`: two runs of spaces side by side would
       // split a long run every possible way (quadratic).
@@ -51,6 +56,10 @@ export const SET_SETTINGS: SettingSpec[] = [
     summary: 'Fewest items a matched set needs before it is compared (default 5; at least 2).',
     example: '5',
     range: NUMBER_RANGES['set-min-items'],
+    editor: {
+      name: 'sets.minItems',
+      markdownDescription: 'Fewest items a matched set needs before it is compared with the others (at least 2; default 5). A script\'s `@set-min-items` line wins.',
+    },
     apply(value, o) {
       const v = value.trim();
       if (!/^\d+$/.test(v) || Number(v) < 2) return `@set-min-items must be a whole number, 2 or more, not "${excerpt(v)}"`;
@@ -69,6 +78,10 @@ export const SET_SETTINGS: SettingSpec[] = [
     summary: 'Compare matched sets over the whole script (default) or rung by rung.',
     example: 'rung',
     values: ['script', 'rung'],
+    editor: {
+      name: 'sets.scope',
+      markdownDescription: 'Compare matched sets over the whole script (`script`, default) or within each rung (`rung`). A script\'s `@set-scope` line wins.',
+    },
     apply(value, o) {
       const v = value.trim().toLowerCase();
       if (v !== 'script' && v !== 'rung') return `@set-scope is script or rung, not "${value.trim()}"`;

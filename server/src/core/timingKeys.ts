@@ -25,6 +25,10 @@ export const TIMING_KEYS: SettingSpec[] = [
     summary: 'How an item\'s time is shared among its words in cue tracks, model audio and the practice page: by syllables (default) or equal slots.',
     example: 'syllables',
     values: ['syllables', 'equal'],
+    editor: {
+      name: 'timing.wordSlots',
+      markdownDescription: "How an item's time is shared among its words in cue tracks, model audio and the practice page: in proportion to `syllables` (default) or in `equal` slots. A script's `@word-slots` line wins.",
+    },
     apply(value, o) {
       const v = value.trim().toLowerCase();
       if (v !== 'syllables' && v !== 'equal') return `@word-slots is syllables or equal, not "${value.trim()}"`;
@@ -41,6 +45,10 @@ export const TIMING_KEYS: SettingSpec[] = [
     range: SECONDS_RANGE,
     summary: 'Pause after phrase-break punctuation (, ; : . ! ? dashes) inside an item, in seconds (default 0).',
     example: '0.3 s',
+    editor: {
+      name: 'timing.phrasePause',
+      markdownDescription: "Pause after phrase-break punctuation (, ; : . ! ? dashes) inside an item, in seconds (default 0). A script's `@phrase-pause` line wins.",
+    },
     apply(value, o) {
       const n = readSeconds(value, 'phrase-pause');
       if (typeof n === 'string') return n;
@@ -57,6 +65,10 @@ export const TIMING_KEYS: SettingSpec[] = [
     range: SECONDS_RANGE,
     summary: 'Silence between items in a session plan, in seconds (default 2).',
     example: '2 s',
+    editor: {
+      name: 'timing.itemGap',
+      markdownDescription: "Silence between items in a session plan (cue tracks, model audio, practice page, session length), in seconds (default 2). A script's `@item-gap` line wins.",
+    },
     apply(value, o) {
       const n = readSeconds(value, 'item-gap');
       if (typeof n === 'string') return n;
@@ -73,6 +85,10 @@ export const TIMING_KEYS: SettingSpec[] = [
     range: { min: 0, max: 10, above: true },
     summary: "Echo mode: the client's response window after each model, as a multiple of the model's length (default 1).",
     example: '1',
+    editor: {
+      name: 'timing.echoWindow',
+      markdownDescription: "Echo mode: the client's response window after each model, as a multiple of the model's length (above 0, at most 10; default 1). A script's `@echo-window` line wins.",
+    },
     apply(value, o) {
       const m = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*(x|×)?\s*$/i.exec(value);
       const n = m ? Number(m[1]) : NaN;

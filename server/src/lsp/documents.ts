@@ -7,7 +7,7 @@ import { checkScript, mergeFileProblems, type CheckCache, type FileProblem } fro
 import { analyze, type AnalyzeOutput } from '../core/analyze';
 import { splitLines } from '../core/parse';
 import type { ItemAnalysis, Problem, RungAnalysis, WordData } from '../core/types';
-import { clearConfigCache } from '../config/resolve';
+import { clearConfigCache, type ResolveOptions } from '../config/resolve';
 import { nodeFs, pathKey, uriToPath } from '../node/nodeFs';
 import { analysisFailed } from '../rules/internalError';
 import type { LintSettings } from '../rules/types';
@@ -199,13 +199,13 @@ export class AnalysisStore {
       const path = uriToPath(doc.uri);
       // Editor settings are the resolver's lowest layer above the defaults; workspace config
       // files and the script header win over them, as in `rungs lint`.
-      const baseDir = this.folderOf(path);
+      const editor = this.editorLayer(doc.uri, path);
       const checked = checkScript({
         text,
-        path: path ?? join(baseDir, 'untitled.rungs'),
+        path: path ?? join(editor.baseDir, 'untitled.rungs'),
         fs: nodeFs,
         data: this.data,
-        editor: { settings: toConfigObject(settings), baseDir, name: EDITOR_LAYER },
+        editor,
         cache: state.cache,
       });
       state.dependencies = new Map(checked.dependencies.map((p) => [pathKey(p), p]));
@@ -244,6 +244,14 @@ export class AnalysisStore {
       this.logged.add(m);
       this.hooks.log(m);
     }
+  }
+
+  /**
+   * A document's editor settings as the resolver's editor layer (scripts and records files alike):
+   * config-file shape, lexicon paths relative to the document's workspace folder.
+   */
+  editorLayer(uri: string, path: string | null): NonNullable<ResolveOptions['editor']> & { name: string } {
+    return { settings: toConfigObject(this.settingsFor(uri)), baseDir: this.folderOf(path), name: EDITOR_LAYER };
   }
 
   /** The workspace folder holding a script (editor lexicon paths are relative to it). */

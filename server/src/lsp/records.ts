@@ -4,10 +4,11 @@
 // records are read from open documents first, then from disk.
 import { dirname, join, resolve } from 'node:path';
 import { MarkupKind, type CodeLens, type Hover } from 'vscode-languageserver/node';
-import { resolveScriptContext } from '../config/resolve';
+import { resolveScriptContext, type ResolveOptions } from '../config/resolve';
 import { CAUTION } from '../core/caution';
 import { formatNumber } from '../core/pace';
-import { isRecordsFile, readProgress, scriptFacts, type ProgressResult, type RateRecord, type ScriptFacts, type ScriptLookup } from '../core/records';
+import { isRecordsFile, scriptFacts, type ProgressResult, type RateRecord, type ScriptFacts, type ScriptLookup } from '../core/records';
+import { readProgress } from '../rules/records';
 import type { WordData } from '../core/types';
 import type { ProgressView } from './contract';
 import { nodeFs, pathKey } from '../node/nodeFs';
@@ -32,14 +33,17 @@ function readText(path: string, open: OpenText): string | null {
   }
 }
 
+/** Editor settings as the resolver's lowest layer above the defaults (config files win). */
+export type EditorLayer = ResolveOptions['editor'];
+
 /** Scripts relative to a records file: open documents win over the copy on disk. */
-export function lookupFor(recordsPath: string, open: OpenText): ScriptLookup {
+export function lookupFor(recordsPath: string, open: OpenText, editor?: EditorLayer): ScriptLookup {
   const cache = new Map<string, ScriptFacts | null>();
   return (written) => {
     const full = resolve(dirname(recordsPath), written);
     if (!cache.has(full)) {
       const text = readText(full, open);
-      cache.set(full, text === null ? null : scriptFacts(text, resolveScriptContext(full, nodeFs).options));
+      cache.set(full, text === null ? null : scriptFacts(text, resolveScriptContext(full, nodeFs, { editor }).options));
     }
     return cache.get(full)!;
   };
@@ -50,10 +54,10 @@ export function today(now = new Date()): string {
   return `${now.getFullYear()}-${z(now.getMonth() + 1)}-${z(now.getDate())}`;
 }
 
-/** Progress of one records file, with its settings from config files beside it. */
-export function recordsProgress(path: string, text: string, open: OpenText, data?: WordData): { result: ProgressResult; mark: number } {
-  const options = resolveScriptContext(path, nodeFs).options.records;
-  return { result: readProgress({ text, scripts: lookupFor(path, open), options, today: today(), data }), mark: options.benefitMark };
+/** Progress of one records file, with its settings from the editor and config files beside it. */
+export function recordsProgress(path: string, text: string, open: OpenText, data?: WordData, editor?: EditorLayer): { result: ProgressResult; mark: number } {
+  const options = resolveScriptContext(path, nodeFs, { editor }).options.records;
+  return { result: readProgress({ text, scripts: lookupFor(path, open, editor), options, today: today(), data }), mark: options.benefitMark };
 }
 
 function baselineText(r: RateRecord): string {
@@ -149,12 +153,12 @@ export function findRecordsFiles(folders: string[], cap = 200): string[] {
  * Markdown lines for a script's rung hover: the latest ratio of each client whose records (in the
  * workspace, or open) name this script and rung. Empty when no records name it.
  */
-export function rungRecordsNote(scriptPath: string, rungIndex: number, recordsFiles: string[], open: OpenText): string[] {
+export function rungRecordsNote(scriptPath: string, rungIndex: number, recordsFiles: string[], open: OpenText, editor?: EditorLayer): string[] {
   const latest = new Map<string, { r: RateRecord; mark: number }>();
   for (const file of recordsFiles) {
     const text = readText(file, open);
     if (text === null) continue;
-    const { result, mark } = recordsProgress(file, text, open);
+    const { result, mark } = recordsProgress(file, text, open, undefined, editor);
     for (const r of result.records) {
       if (r.condition !== 'paced' || !r.script || r.rungIndex !== rungIndex) continue;
       if (pathKey(resolve(dirname(file), r.script)) !== pathKey(scriptPath)) continue;

@@ -11,10 +11,10 @@ import type { WordData } from '../core/types';
 import { uriToPath } from '../node/nodeFs';
 import { toLspDiagnostic } from './convert';
 import { DidAnalyzeNotification } from './ladder';
-import { findRecordsFiles, isRecordsPath, recordsProgress, rungRecordsNote } from './records';
+import { findRecordsFiles, isRecordsPath, recordsProgress, rungRecordsNote, type EditorLayer } from './records';
 
 export class RecordsDocuments {
-  private readonly cache = new Map<string, { version: number; result: ProgressResult; mark: number }>();
+  private readonly cache = new Map<string, { version: number; settings: string; result: ProgressResult; mark: number }>();
 
   constructor(
     private readonly connection: Connection,
@@ -22,6 +22,8 @@ export class RecordsDocuments {
     private readonly data: WordData,
     /** Versions published so far, shared with the script publisher. */
     private readonly published: Map<string, number>,
+    /** A document's editor settings (rungs.*), layered below config files as for scripts. */
+    private readonly editorFor: (uri: string, path: string | null) => EditorLayer,
   ) {}
 
   isRecords(uri: string): boolean {
@@ -34,10 +36,13 @@ export class RecordsDocuments {
   get(uri: string): { result: ProgressResult; mark: number } | null {
     const doc = this.documents.get(uri);
     if (!doc) return null;
+    const editor = this.editorFor(uri, uriToPath(uri));
+    // Read again when the text or the editor settings changed.
+    const settings = JSON.stringify(editor?.settings ?? null);
     const hit = this.cache.get(uri);
-    if (hit && hit.version === doc.version) return hit;
+    if (hit && hit.version === doc.version && hit.settings === settings) return hit;
     const path = uriToPath(uri) ?? '/untitled.rates.csv';
-    const r = { version: doc.version, ...recordsProgress(path, doc.getText(), this.openText, this.data) };
+    const r = { version: doc.version, settings, ...recordsProgress(path, doc.getText(), this.openText, this.data, editor) };
     this.cache.set(uri, r);
     return r;
   }
@@ -68,7 +73,7 @@ export class RecordsDocuments {
   addRungNote(h: Hover | null, scriptUri: string, rungIndex: number | undefined, workspaceFolders: string[]): Hover | null {
     const path = uriToPath(scriptUri);
     if (!h || rungIndex === undefined || !path || typeof h.contents !== 'object' || !('kind' in h.contents) || h.contents.kind !== MarkupKind.Markdown) return h;
-    const note = rungRecordsNote(path, rungIndex, findRecordsFiles(workspaceFolders.length ? workspaceFolders : [dirname(path)]), this.openText);
+    const note = rungRecordsNote(path, rungIndex, findRecordsFiles(workspaceFolders.length ? workspaceFolders : [dirname(path)]), this.openText, this.editorFor(scriptUri, path));
     if (note.length) h.contents.value += `\n${note.join('\n')}`;
     return h;
   }

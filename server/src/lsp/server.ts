@@ -42,7 +42,7 @@ export function startServer(argv: readonly string[]): Connection {
     analyzed: (s) => void connection.sendNotification(DidAnalyzeNotification, { uri: s.uri, version: s.version }),
   });
   const publisher = new Publisher(connection, documents, store);
-  const records = new RecordsDocuments(connection, documents, data, publisher.published);
+  const records = new RecordsDocuments(connection, documents, data, publisher.published, (uri, path) => store.editorLayer(uri, path));
   publisher.records = records;
   let caps: ClientCapabilities = {};
   let configurationSupport = false;

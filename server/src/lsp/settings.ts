@@ -125,7 +125,7 @@ const EDITOR_ONLY: Record<string, Record<string, unknown>> = {
 /** The JSON schema of one table setting as an editor setting. */
 function schemaOf(spec: SettingSpec & { editor: NonNullable<SettingSpec['editor']> }): Record<string, unknown> {
   const type =
-    spec.type === 'yes-no' ? 'boolean' : spec.type === 'weights' ? 'object' : spec.type === 'paces' || spec.type === 'choice' || spec.type === 'text' ? 'string' : 'number';
+    spec.type === 'yes-no' ? 'boolean' : spec.type === 'weights' ? 'object' : spec.type === 'paces' || spec.type === 'choice' || spec.type === 'text' || spec.type === 'labels' ? 'string' : 'number';
   const out: Record<string, unknown> = { type: spec.default === null ? [type, 'null'] : type, default: spec.default };
   if (spec.range && type === 'number') Object.assign(out, { minimum: spec.range.min, maximum: spec.range.max });
   if (spec.values && type === 'string' && spec.type === 'choice') out.enum = spec.values;

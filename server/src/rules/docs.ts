@@ -17,6 +17,7 @@ const CATEGORY_TITLES: Record<Rule['category'], string> = {
   item: 'Items',
   pace: 'Paces',
   format: 'The format itself',
+  records: 'Rate records',
 };
 
 /** The Markdown between `<!-- rules:start -->` and `<!-- rules:end -->` in the README. */

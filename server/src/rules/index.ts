@@ -6,9 +6,11 @@ import { pushAll } from '../core/arrays';
 import { badConfig } from './badConfig';
 import { badDirective } from './badDirective';
 import { badValue } from './badValue';
+import { badRecord } from './badRecord';
 import { badVariant } from './badVariant';
 import { isAllowed, readDirectives } from './directives';
 import { duplicateItem } from './duplicateItem';
+import { duplicateRecord } from './duplicateRecord';
 import { estimatedWord } from './estimatedWord';
 import { internalError, internalFailure } from './internalError';
 import { itemOutlier } from './itemOutlier';
@@ -16,6 +18,8 @@ import { itemTooLong } from './itemTooLong';
 import { paceAboveNorm } from './paceAboveNorm';
 import { paceBelowBaseline } from './paceBelowBaseline';
 import { paceSlowsDown } from './paceSlowsDown';
+import { recordsHeader } from './recordsHeader';
+import { recordsSyntax } from './recordsSyntax';
 import { rungsOverlap } from './rungsOverlap';
 import { silentItem } from './silentItem';
 import { smallSet } from './smallSet';
@@ -31,7 +35,7 @@ import { unmatchedSets } from './unmatchedSets';
 import { unsortedRung } from './unsortedRung';
 import { unusedOverride } from './unusedOverride';
 
-/** Every rule, in documentation order: ladder, items, paces, then the format itself. */
+/** Every rule, in documentation order: ladder, items, paces, the format itself, then rate records. */
 export const RULES: Rule[] = [
   stepBackwards,
   stepTooBig,
@@ -57,6 +61,10 @@ export const RULES: Rule[] = [
   badConfig,
   badDirective,
   internalError,
+  badRecord,
+  recordsHeader,
+  duplicateRecord,
+  recordsSyntax,
 ];
 
 export const RULE_IDS: string[] = RULES.map((r) => r.id);
@@ -68,7 +76,7 @@ export const RULE_IDS: string[] = RULES.map((r) => r.id);
 export const STEP_RULES: string[] = [stepBackwards.id, stepTooBig.id, unevenSteps.id, rungsOverlap.id];
 
 /** The rules built from findings; the compiler checks below that every kind has one of them. */
-const FINDING_RULES = [unknownKey, badValue, unknownPhone, badVariant, badConfig, internalError] as const;
+const FINDING_RULES = [unknownKey, badValue, unknownPhone, badVariant, badConfig, internalError, badRecord, recordsHeader, duplicateRecord, recordsSyntax] as const;
 type Unowned = Exclude<FindingKind, (typeof FINDING_RULES)[number]['kinds'][number]>;
 export const EVERY_KIND_OWNED: [Unowned] extends [never] ? true : never = true;
 

@@ -45,7 +45,7 @@ export interface Rule {
   id: string;
   summary: string;
   defaultSeverity: Severity;
-  category: 'ladder' | 'item' | 'pace' | 'format';
+  category: 'ladder' | 'item' | 'pace' | 'format' | 'records';
   /** A paragraph for the docs: what it checks, the numbers it uses, how to fix it. */
   docs: string;
   check(ctx: RuleContext, report: Report): void;

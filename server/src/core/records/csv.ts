@@ -2,7 +2,7 @@
 // cell stands, so each problem can name its line and column. The parser decides what the cells
 // are; a small walker over each record's raw text only measures where they start and end.
 import { parse } from 'csv-parse/sync';
-import type { Problem } from '../types';
+import { finding, type Finding } from '../findings';
 import type { Cell } from './types';
 
 export type Delimiter = ',' | ';' | '\t';
@@ -19,7 +19,8 @@ export interface CsvRead {
   /** The first non-blank row, or null for a file with none. */
   header: CsvRow | null;
   rows: CsvRow[];
-  problems: Problem[];
+  /** Rows the parser could not read. */
+  findings: Finding[];
 }
 
 /**
@@ -83,12 +84,12 @@ interface ParsedRecord {
 /**
  * Splits records text into rows of cells. `text` is the file's text without a byte-order mark;
  * CRLF and lone CR line ends are read as LF (every position stays the same, since CR only ends a
- * line). Records the parser cannot read become problems; the others are kept.
+ * line). Records the parser cannot read become findings; the others are kept.
  */
 export function readCsv(text: string): CsvRead {
   const lf = text.replace(/\r\n?/g, '\n');
   const delimiter = detectDelimiter(lf);
-  const problems: Problem[] = [];
+  const findings: Finding[] = [];
   let records: ParsedRecord[] = [];
   try {
     records = parse(lf, {
@@ -102,13 +103,13 @@ export function readCsv(text: string): CsvRead {
       on_skip: (err: { message: string; lines?: number } | undefined) => {
         if (!err) return;
         const line = Math.max(0, (err.lines ?? 1) - 1);
-        problems.push(csvProblem(line, err.message));
+        findings.push(syntaxFinding(line, err.message));
       },
     }) as unknown as ParsedRecord[];
   } catch (err) {
     // With skip_records_with_error the parser still stops at an unclosed quote at the end.
     const e = err as { message?: string; lines?: number };
-    problems.push(csvProblem(Math.max(0, (e.lines ?? 1) - 1), e.message ?? String(err)));
+    findings.push(syntaxFinding(Math.max(0, (e.lines ?? 1) - 1), e.message ?? String(err)));
   }
   const rows: CsvRow[] = [];
   for (const r of records) {
@@ -125,17 +126,9 @@ export function readCsv(text: string): CsvRead {
     rows.push({ line, cells });
   }
   const header = rows.shift() ?? null;
-  return { delimiter, header, rows, problems };
+  return { delimiter, header, rows, findings };
 }
 
-function csvProblem(line: number, message: string): Problem {
-  return {
-    rule: 'records-syntax',
-    severity: 'error',
-    message: `this row cannot be read as CSV: ${message.replace(/\s+at line \d+.*$/, '')}`,
-    line,
-    character: 0,
-    endLine: line,
-    endCharacter: 0,
-  };
+function syntaxFinding(line: number, message: string): Finding {
+  return finding({ line, character: 0, endLine: line, endCharacter: 0 }, { kind: 'record-syntax', explanation: message.replace(/\s+at line \d+.*$/, '') });
 }

@@ -4,7 +4,8 @@
 // plain data; the CLI, the language server, the progress view and reports render it.
 import { linearRegression } from 'simple-statistics';
 import { formatNumber } from '../pace';
-import type { Problem, WordData } from '../types';
+import type { Finding } from '../findings';
+import type { WordData } from '../types';
 import { readCsv } from './csv';
 import { add, cmp, div, fromNumber, toNumber, ZERO, type Q } from './exact';
 import { defaultRecordsOptions, type RecordsOptions } from './settings';
@@ -81,13 +82,19 @@ function readiness(sessions: Session[], o: RecordsOptions): { ready: boolean; no
   return { ready: true, note: `meets the mark in the last ${n} session${n === 1 ? '' : 's'}${floor !== null ? ` with accuracy of ${pct(floor)} or more` : ''}; consider the next rung` };
 }
 
-/** Rates, ratios and trends of one records file. Never throws on what the file holds. */
-export function readProgress(input: ProgressInput): ProgressResult {
+/** What the records core reads from one file: the result, with its problems as typed findings. */
+export type RecordsReading = Omit<ProgressResult, 'problems'> & { findings: Finding[] };
+
+/**
+ * Rates, ratios and trends of one records file, and what could not be used as findings (the
+ * records rules word them: `readProgress` in rules/records.ts). Never throws on what the file holds.
+ */
+export function readRecords(input: ProgressInput): RecordsReading {
   const o = input.options ?? defaultRecordsOptions();
   const text = input.text.charCodeAt(0) === 0xfeff ? input.text.slice(1) : input.text;
   const csv = readCsv(text);
   const checked = validateRows({ header: csv.header, rows: csv.rows, scripts: input.scripts, options: o, today: input.today, data: input.data });
-  const problems: Problem[] = [...csv.problems, ...checked.problems];
+  const findings: Finding[] = [...csv.findings, ...checked.findings];
 
   const unassisted = new Map<string, ValidRow[]>();
   for (const r of checked.rows) if (r.condition === 'unassisted') unassisted.set(r.client, [...(unassisted.get(r.client) ?? []), r]);
@@ -188,25 +195,6 @@ export function readProgress(input: ProgressInput): ProgressResult {
     });
   }
   trends.sort((a, b) => a.client.localeCompare(b.client) || a.script.localeCompare(b.script) || a.rungIndex - b.rungIndex);
-  problems.sort((a, b) => a.line - b.line || a.character - b.character);
-  return { records, trends, problems, delimiter: csv.delimiter, rows: csv.rows.length };
-}
-
-export interface ProgressFile {
-  /** The records file as it should be shown (a path). */
-  file: string;
-  text: string;
-  /** Finds scripts relative to this records file. */
-  scripts: ScriptLookup;
-}
-
-/**
- * Progress of several records files: each is read on its own (a paced row is compared with
- * unassisted rows of the same file). The entry point for reports and other renderers.
- */
-export function readProgressFiles(
-  files: ProgressFile[],
-  options: { today: string; records?: RecordsOptions; data?: WordData },
-): (ProgressResult & { file: string })[] {
-  return files.map((f) => ({ file: f.file, ...readProgress({ text: f.text, scripts: f.scripts, options: options.records, today: options.today, data: options.data }) }));
+  findings.sort((a, b) => a.line - b.line || a.character - b.character);
+  return { records, trends, findings, delimiter: csv.delimiter, rows: csv.rows.length };
 }

@@ -37,6 +37,11 @@ export const RECORDS_KEYS: SettingSpec[] = [
     range: NUMBER_RANGES['benefit-mark'],
     summary: 'Rate records: paced/unassisted words-per-second ratio that marks a meaningful benefit (default 1.2).',
     example: '1.2',
+    editor: {
+      name: 'records.benefitMark',
+      markdownDescription:
+        'Rate records (`*.rates.csv`): the paced/unassisted words-per-second ratio that marks a meaningful benefit from paced practice. Default 1.2 (20 % faster with the model; common practice). A config file beside the records file wins.',
+    },
     apply(value, o) {
       const m = NUMBER.exec(value);
       if (!m || !(Number(m[1]) > 0)) return `@benefit-mark must be a number above 0, e.g. 1.2, not "${excerpt(value.trim())}"`;
@@ -54,6 +59,10 @@ export const RECORDS_KEYS: SettingSpec[] = [
     default: DEFAULTS.fillers.join(', '),
     summary: 'Rate records: words left out when counting a transcript (default um, uh, er, erm, hmm).',
     example: 'um, uh, er',
+    editor: {
+      name: 'records.fillers',
+      markdownDescription: 'Rate records: words left out when the words of a `transcript` cell are counted, separated by commas. Default `um, uh, er, erm, hmm`.',
+    },
     apply(value, o) {
       const words = value.split(/[,\s]+/).map((w) => w.trim().toLowerCase()).filter(Boolean);
       o.records = { ...o.records, fillers: words };
@@ -69,6 +78,10 @@ export const RECORDS_KEYS: SettingSpec[] = [
     range: NUMBER_RANGES['ready-sessions'],
     summary: 'Rate records: latest sessions that must meet the mark before a rung is called ready (default 2).',
     example: '2',
+    editor: {
+      name: 'records.readySessions',
+      markdownDescription: 'Rate records: how many latest sessions on a rung must meet the benefit mark before the trend says "consider the next rung". Default 2.',
+    },
     apply(value, o) {
       const m = /^\s*(\d+)\s*$/.exec(value);
       if (!m || Number(m[1]) < 1) return `@ready-sessions must be a whole number, 1 or more, not "${excerpt(value.trim())}"`;
@@ -88,6 +101,13 @@ export const RECORDS_KEYS: SettingSpec[] = [
     range: { min: 0, max: 1 },
     summary: 'Rate records: accuracy (correct/words) the ready sessions must reach too, 0-1 or a percentage (default none).',
     example: '80%',
+    editor: {
+      name: 'records.accuracyFloor',
+      markdownDescription:
+        'Rate records: accuracy (`correct` / `words`) the ready sessions must also reach, as a fraction (`0.8`) or a percentage (`"80%"`); `"none"` (default) sets no floor.',
+      // A fraction, or the text forms "80%" and "none".
+      schema: { type: ['number', 'string'] },
+    },
     apply(value, o) {
       const v = value.trim();
       if (/^(none|off|no)$/i.test(v)) {

@@ -1,9 +1,11 @@
-// Checks records rows one cell at a time. A bad cell is a typed problem on that cell (line and
-// column); a row with a problem is left out of the computations but never dropped unreported.
+// Checks records rows one cell at a time. A bad cell is a typed finding on that cell (line and
+// column; the records rules in server/src/rules/ word it); a row with one is left out of the
+// computations but never dropped unreported.
 import { parsePaces } from '../pace';
 import { Pronouncer } from '../pronounce';
 import { tokenize } from '../tokenize';
-import type { Pace, Problem, WordData } from '../types';
+import { finding, type Finding } from '../findings';
+import type { Pace, WordData } from '../types';
 import { DEFAULT_WCM_OPTIONS } from '../wcm';
 import { COLUMNS, MAX_PLAUSIBLE_WPS, REQUIRED_COLUMNS, type Column } from './columns';
 import type { CsvRow } from './csv';
@@ -60,26 +62,23 @@ export function dayNumber(date: string): number | null {
   return t / 86_400_000;
 }
 
-function problem(at: { line: number; character: number; endLine: number; endCharacter: number }, message: string, rule = 'bad-record'): Problem {
-  return { rule, severity: 'error', message, line: at.line, character: at.character, endLine: at.endLine, endCharacter: at.endCharacter };
-}
 
-export function validateRows(input: ValidateInput): { rows: ValidRow[]; problems: Problem[] } {
-  const problems: Problem[] = [];
+export function validateRows(input: ValidateInput): { rows: ValidRow[]; findings: Finding[] } {
+  const findings: Finding[] = [];
   const { header } = input;
-  if (!header) return { rows: [], problems };
+  if (!header) return { rows: [], findings };
   const index = new Map<Column, number>();
   header.cells.forEach((c, k) => {
     const name = c.value.trim().toLowerCase() as Column;
     if (!COLUMNS.includes(name)) {
-      problems.push({ ...problem(c, `unknown column "${c.value.trim()}": it is kept in the file but not read (columns: ${COLUMNS.join(', ')})`, 'records-header'), severity: 'warning' });
+      findings.push(finding(c, { kind: 'record-unknown-column', name: c.value.trim(), known: COLUMNS }));
     } else if (index.has(name)) {
-      problems.push(problem(c, `column "${name}" appears twice; the first one is read`, 'records-header'));
+      findings.push(finding(c, { kind: 'record-repeated-column', name }));
     } else index.set(name, k);
   });
   const headerRange = { line: header.line, character: 0, endLine: header.line, endCharacter: header.cells[header.cells.length - 1]?.endCharacter ?? 0 };
   for (const col of REQUIRED_COLUMNS) {
-    if (!index.has(col)) problems.push(problem(headerRange, `the header has no "${col}" column`, 'records-header'));
+    if (!index.has(col)) findings.push(finding(headerRange, { kind: 'record-missing-column', column: col }));
   }
   const pronouncer = input.data ? new Pronouncer(input.data, [], DEFAULT_WCM_OPTIONS) : null;
   const fillers = new Set(input.options.fillers.map((f) => f.toLowerCase()));
@@ -94,8 +93,8 @@ export function validateRows(input: ValidateInput): { rows: ValidRow[]; problems
       const last = row.cells[row.cells.length - 1];
       cells[col] = row.cells[k] ?? { value: '', line: last.endLine, character: last.endCharacter, endLine: last.endLine, endCharacter: last.endCharacter };
     }
-    const own: Problem[] = [];
-    const bad = (col: Column, message: string) => own.push(problem(cells[col]!, message));
+    const own: Finding[] = [];
+    const bad = (col: Column, explanation: string) => own.push(finding(cells[col]!, { kind: 'record-bad-cell', column: col, value: cells[col]!.value, explanation }));
     const text = (col: Column) => (cells[col]?.value ?? '').trim();
     const missing = (col: Column, why = '') => index.has(col) && bad(col, `${col} is empty${why}`);
 
@@ -188,11 +187,11 @@ export function validateRows(input: ValidateInput): { rows: ValidRow[]; problems
     const key = JSON.stringify(row.cells.map((c) => c.value.trim()));
     const earlier = seen.get(key);
     if (earlier !== undefined) {
-      own.push(problem({ line: row.line, character: 0, endLine: row.line, endCharacter: row.cells[row.cells.length - 1].endCharacter }, `this row repeats line ${earlier + 1}; it is counted once`, 'duplicate-record'));
+      own.push(finding({ line: row.line, character: 0, endLine: row.line, endCharacter: row.cells[row.cells.length - 1].endCharacter }, { kind: 'record-duplicate-row', earlierLine: earlier }));
     } else seen.set(key, row.line);
 
     if (own.length || day === null || !condition || !client || !words || !seconds) {
-      problems.push(...own);
+      findings.push(...own);
       continue;
     }
     rows.push({
@@ -218,7 +217,7 @@ export function validateRows(input: ValidateInput): { rows: ValidRow[]; problems
       note: text('note') || null,
     });
   }
-  return { rows, problems };
+  return { rows, findings };
 }
 
 const cmpGreater = (a: Q, b: Q): boolean => a.n * b.d > b.n * a.d;
