@@ -8,6 +8,7 @@
 // Policy allows only this page's own script and style (by hash) and data: audio; no network.
 import { createHash } from 'node:crypto';
 import type { SessionPlan } from '../core/timing';
+import { documentHead, escapeHtml } from '../report/html';
 import { PAGE_SCRIPT, PAGE_STYLE } from './pageAssets';
 
 export interface PracticeItem {
@@ -34,9 +35,6 @@ export interface PracticeOptions {
 
 const sha256 = (text: string) => `'sha256-${createHash('sha256').update(text, 'utf8').digest('base64')}'`;
 
-export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
-}
 
 /** JSON that cannot close the data block it sits in (every <, > and & is written as \uXXXX). */
 function safeJson(value: unknown): string {
@@ -80,17 +78,7 @@ export function renderPracticePage(plan: SessionPlan, options: PracticeOptions):
     "base-uri 'none'",
     "form-action 'none'",
   ].join('; ');
-  return `<!DOCTYPE html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta http-equiv="Content-Security-Policy" content="${escapeHtml(csp)}">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<meta name="referrer" content="no-referrer">
-<title>${escapeHtml(options.title)}</title>
-<style>${PAGE_STYLE}</style>
-</head>
-<body>
+  return `${documentHead({ csp, title: options.title, style: PAGE_STYLE })}
 <main>
 <p id="count" aria-live="polite"></p>
 <p id="item" lang="en" aria-live="off"></p>

@@ -23,7 +23,7 @@ export function webviewPolicy(o: { nonce: string; cspSource: string }): string {
 
 /**
  * The start of a Rungs page up to its open body: the policy, the title and the one style sheet
- * (with the page's nonce in a webview). Shared by the ladder view and the report. The policy and
+ * (with the page's nonce in a webview). Shared by the ladder view, the report and the practice page. The policy and
  * nonce are the project's own strings (quotes in a policy must stay as written), never user text.
  */
 export function documentHead(o: { csp: string; title: string; style: string; nonce?: string }): string {
@@ -33,6 +33,7 @@ export function documentHead(o: { csp: string; title: string; style: string; non
 <meta charset="UTF-8">
 <meta http-equiv="Content-Security-Policy" content="${o.csp}">
 <meta name="viewport" content="width=device-width, initial-scale=1.0">
+<meta name="referrer" content="no-referrer">
 <title>${escapeHtml(o.title)}</title>
 <style${o.nonce ? ` nonce="${o.nonce}"` : ''}>${o.style}</style>
 </head>
