@@ -7,6 +7,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import * as oniguruma from 'vscode-oniguruma';
 import * as vsctm from 'vscode-textmate';
+import { SETTINGS } from '../../server/src/core/settings';
 
 const root = join(__dirname, '..', '..');
 const here = join(root, 'tests', 'grammar');
@@ -80,5 +81,21 @@ describe('TextMate grammar', () => {
       }
     });
     expect(bare).toEqual([]);
+  });
+
+  // The settings table (server/src/core/settings.ts) is the one list of keys: every key and alias
+  // a script may hold is coloured as a known setting, never as an unknown one.
+  it('colours every key and alias of the settings table as a known setting', async () => {
+    const grammar = await loadGrammar();
+    const wrong: string[] = [];
+    for (const spec of SETTINGS) {
+      for (const key of [spec.key, ...spec.aliases]) {
+        const line = `@${key} ${spec.example}`;
+        const t = grammar.tokenizeLine(line, INITIAL).tokens.find((x) => x.startIndex === 1);
+        const scope = t?.scopes.at(-1) ?? '(none)';
+        if (!scope.startsWith('keyword.other.setting')) wrong.push(`@${key}: ${scope}`);
+      }
+    }
+    expect(wrong).toEqual([]);
   });
 });
