@@ -1,0 +1,72 @@
+// The size bounds of a script's text (README "Limits"): the analysis reads at most MAX_LINE_CHARS
+// characters of a line and MAX_SCRIPT_BYTES bytes (UTF-8) of a script, so a pasted blob or a huge
+// document from the editor is checked up to the bound instead of being waited on. Only the text
+// analysed is cut; the caller keeps the original, so nothing the user wrote is rewritten.
+import { finding, type Finding } from './findings';
+
+/** Longest line analysed, in characters (UTF-16 code units, as editors count columns). */
+export const MAX_LINE_CHARS = 10_000;
+/** Largest script analysed, in bytes of UTF-8: the same bound the CLI reads files with. */
+export const MAX_SCRIPT_BYTES = 32 * 1024 * 1024;
+
+export interface BoundedText {
+  /** The text to analyse: `text` itself when nothing is over a bound. */
+  text: string;
+  /** One finding per cut line and one for a cut script; empty when nothing was cut. */
+  findings: Finding[];
+}
+
+/** Where to cut a line so a surrogate pair is not split (the cut may be one code unit short). */
+function cutAt(text: string, at: number): number {
+  const c = text.charCodeAt(at - 1);
+  return c >= 0xd800 && c <= 0xdbff ? at - 1 : at;
+}
+
+/** UTF-8 length of text[from, to), counting a lone surrogate as 3 bytes (as U+FFFD). */
+function utf8Length(text: string, from: number, to: number): number {
+  let n = 0;
+  for (let i = from; i < to; i++) {
+    const c = text.charCodeAt(i);
+    if (c < 0x80) n += 1;
+    else if (c < 0x800) n += 2;
+    else if (c >= 0xd800 && c <= 0xdbff && i + 1 < to && (text.charCodeAt(i + 1) & 0xfc00) === 0xdc00) {
+      n += 4;
+      i++;
+    } else n += 3;
+  }
+  return n;
+}
+
+export function boundText(text: string, maxLine = MAX_LINE_CHARS, maxBytes = MAX_SCRIPT_BYTES): BoundedText {
+  const findings: Finding[] = [];
+  const parts: string[] = [];
+  let changed = false;
+  let bytes = 0;
+  let line = 0;
+  let start = 0;
+  // One pass over the lines (breaks \r\n, \r, \n as splitLines); linear in the text's length.
+  while (start <= text.length) {
+    let end = start;
+    while (end < text.length && text.charCodeAt(end) !== 10 && text.charCodeAt(end) !== 13) end++;
+    const brk = end >= text.length ? 0 : text.charCodeAt(end) === 13 && text.charCodeAt(end + 1) === 10 ? 2 : 1;
+    const length = end - start;
+    const kept = length > maxLine ? cutAt(text, start + maxLine) - start : length;
+    // The whole line (up to its own bound) and its break must fit, or the script stops before it.
+    const size = maxBytes < text.length * 3 ? utf8Length(text, start, start + kept) + brk : 0;
+    if (bytes + size > maxBytes) {
+      findings.push(finding({ line, character: 0, endLine: line, endCharacter: length }, { kind: 'script-over-limit', limit: maxBytes, checkedLines: line }));
+      changed = true;
+      break;
+    }
+    bytes += size;
+    if (kept < length) {
+      findings.push(finding({ line, character: kept, endLine: line, endCharacter: length }, { kind: 'line-over-limit', limit: maxLine, length }));
+      changed = true;
+    }
+    parts.push(text.slice(start, start + kept), text.slice(end, end + brk));
+    if (brk === 0) break;
+    start = end + brk;
+    line++;
+  }
+  return { text: changed ? parts.join('') : text, findings };
+}
