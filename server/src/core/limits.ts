@@ -9,6 +9,11 @@ export const MAX_LINE_CHARS = 10_000;
 /** Largest script analysed, in bytes of UTF-8: the same bound the CLI reads files with. */
 export const MAX_SCRIPT_BYTES = 32 * 1024 * 1024;
 
+/** A byte count as messages show it ("32 MiB", "100 bytes"). */
+export function formatBytes(n: number): string {
+  return n % (1024 * 1024) === 0 ? `${n / (1024 * 1024)} MiB` : `${n} bytes`;
+}
+
 export interface BoundedText {
   /** The text to analyse: `text` itself when nothing is over a bound. */
   text: string;

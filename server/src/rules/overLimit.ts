@@ -1,8 +1,7 @@
 // over-limit: a line or a whole script larger than the analysis reads (core/limits.ts finds it).
 // The rest is checked; the part past the bound is not, and nothing in the file is changed.
+import { formatBytes } from '../core/limits';
 import { findingRule } from './findingRule';
-
-const size = (bytes: number) => (bytes % (1024 * 1024) === 0 ? `${bytes / (1024 * 1024)} MiB` : `${bytes} bytes`);
 
 export const overLimit = findingRule(
   {
@@ -23,5 +22,5 @@ export const overLimit = findingRule(
   (f) =>
     f.kind === 'line-over-limit'
       ? { message: `this line has ${f.length} characters; only the first ${f.limit} are checked` }
-      : { message: `the script is larger than ${size(f.limit)}: checked up to line ${f.checkedLines} only` },
+      : { message: `the script is larger than ${formatBytes(f.limit)}: checked up to line ${f.checkedLines} only` },
 );
