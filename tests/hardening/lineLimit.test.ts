@@ -4,11 +4,13 @@
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { fc, it as fcIt } from '@fast-check/vitest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { checkScript } from '../../server/src/check/checkScript';
 import { main } from '../../server/src/cli/main';
 import { nodeFs } from '../../server/src/cli/nodeIo';
 import { MAX_FILE_BYTES } from '../../server/src/node/boundedRead';
+import { splitLines } from '../../server/src/core/parse';
 import { boundText, MAX_LINE_CHARS, MAX_SCRIPT_BYTES } from '../../server/src/core/limits';
 import { words } from '../helpers/data';
 
@@ -94,4 +96,26 @@ describe('a line over the bound', () => {
     await run(['lint', '--fix', 'short.rungs']);
     expect(readFileSync(join(dir, 'short.rungs'), 'utf8')).toContain('@paces 1');
   });
+});
+
+describe('boundText on any text', () => {
+  const text = fc.array(fc.oneof(fc.string({ unit: 'grapheme' }), fc.constantFrom('\n', '\r', '\r\n', '😀', 'é')), { maxLength: 30 }).map((a) => a.join(''));
+  fcIt.prop([text, fc.integer({ min: 1, max: 12 }), fc.integer({ min: 1, max: 60 })])(
+    'keeps a prefix of each kept line, within both bounds, with a finding for every cut',
+    (t, maxLine, maxBytes) => {
+      const r = boundText(t, maxLine, maxBytes);
+      const before = splitLines(t);
+      const after = splitLines(r.text);
+      // A script cut drops whole lines; the lines kept are prefixes of the originals.
+      expect(after.length).toBeLessThanOrEqual(before.length);
+      after.forEach((l, i) => {
+        expect(before[i].startsWith(l)).toBe(true);
+        expect(l.length).toBeLessThanOrEqual(maxLine);
+        if (l.length < before[i].length && i < after.length - 1) expect(r.findings.some((f) => f.kind === 'line-over-limit' && f.line === i)).toBe(true);
+      });
+      expect(Buffer.byteLength(r.text, 'utf8')).toBeLessThanOrEqual(Math.max(maxBytes, 0));
+      if (r.text !== t) expect(r.findings.length).toBeGreaterThan(0);
+      else expect(r.findings).toEqual([]);
+    },
+  );
 });

@@ -44,34 +44,41 @@ function utf8Length(text: string, from: number, to: number): number {
 
 export function boundText(text: string, maxLine = MAX_LINE_CHARS, maxBytes = MAX_SCRIPT_BYTES): BoundedText {
   const findings: Finding[] = [];
-  const parts: string[] = [];
-  let changed = false;
+  // The spans left out, in order; the text is rebuilt only when there is one.
+  const dropped: [number, number][] = [];
+  const countBytes = maxBytes < text.length * 3;
   let bytes = 0;
   let line = 0;
   let start = 0;
   // One pass over the lines (breaks \r\n, \r, \n as splitLines); linear in the text's length.
-  while (start <= text.length) {
+  for (;;) {
     let end = start;
     while (end < text.length && text.charCodeAt(end) !== 10 && text.charCodeAt(end) !== 13) end++;
     const brk = end >= text.length ? 0 : text.charCodeAt(end) === 13 && text.charCodeAt(end + 1) === 10 ? 2 : 1;
     const length = end - start;
     const kept = length > maxLine ? cutAt(text, start + maxLine) - start : length;
     // The whole line (up to its own bound) and its break must fit, or the script stops before it.
-    const size = maxBytes < text.length * 3 ? utf8Length(text, start, start + kept) + brk : 0;
-    if (bytes + size > maxBytes) {
+    if (countBytes) bytes += utf8Length(text, start, start + kept) + brk;
+    if (bytes > maxBytes) {
       findings.push(finding({ line, character: 0, endLine: line, endCharacter: length }, { kind: 'script-over-limit', limit: maxBytes, checkedLines: line }));
-      changed = true;
+      dropped.push([start, text.length]);
       break;
     }
-    bytes += size;
     if (kept < length) {
       findings.push(finding({ line, character: kept, endLine: line, endCharacter: length }, { kind: 'line-over-limit', limit: maxLine, length }));
-      changed = true;
+      dropped.push([start + kept, end]);
     }
-    parts.push(text.slice(start, start + kept), text.slice(end, end + brk));
     if (brk === 0) break;
     start = end + brk;
     line++;
   }
-  return { text: changed ? parts.join('') : text, findings };
+  if (!dropped.length) return { text, findings };
+  const parts: string[] = [];
+  let at = 0;
+  for (const [from, to] of dropped) {
+    parts.push(text.slice(at, from));
+    at = to;
+  }
+  parts.push(text.slice(at));
+  return { text: parts.join(''), findings };
 }
