@@ -34,6 +34,8 @@ describe('numeric settings', () => {
     `@set-bound ${'9'.repeat(400)}`,
     '@set-bound 11',
     `@set-min-items ${'9'.repeat(400)}`,
+    // A benefit mark is a ratio of two rates; a mark above tenfold is not plausible (common practice).
+    '@benefit-mark 11',
   ])('%s is a problem on its line', (line) => {
     const ps = settingProblems(line);
     expect(ps.map((p) => p.rule)).toEqual(['bad-value']);
@@ -43,6 +45,7 @@ describe('numeric settings', () => {
     expect(settingProblems('@weights 0.4, 0.4, 0.2')).toEqual([]);
     expect(settingProblems('@baseline 0.8 wps')).toEqual([]);
     expect(settingProblems('@max-step 100')).toEqual([]);
+    expect(settingProblems('@benefit-mark 10')).toEqual([]);
   });
 
   it('no difficulty is NaN and no ladder rule speaks of NaN after a bad @weights', () => {

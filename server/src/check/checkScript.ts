@@ -3,6 +3,7 @@
 // cache), lint, and gather the problems in config and lexicon files. Pure apart from the injected
 // file-system view, so tests run it on an in-memory file system.
 import type { AnalyzeOutput, ItemCache } from '../core/analyze';
+import { boundText } from '../core/limits';
 import { splitLines } from '../core/parse';
 import { analyzeSegments, type SegmentState } from '../core/segments';
 import type { AnalysisOptions, Problem, WordData } from '../core/types';
@@ -74,9 +75,11 @@ export function checkScript(input: CheckInput): CheckResult {
     ...(input.fs.realpath && { realpath: input.fs.realpath.bind(input.fs) }),
   };
   const ctx = resolveScriptContext(input.path, recording, input.editor ? { editor: input.editor } : {});
+  // Only the part within the size bounds is analysed; the original text stays the result's text.
+  const bounded = boundText(input.text);
   const segments = analyzeSegments(
     {
-      text: input.text,
+      text: bounded.text,
       data: input.data,
       options: input.adjust ? input.adjust(ctx.options) : ctx.options,
       lexicon: ctx.lexicon,
@@ -85,9 +88,13 @@ export function checkScript(input: CheckInput): CheckResult {
     },
     input.cache?.segments,
   );
-  const analysis = segments.output;
+  const cut = bounded.findings.length > 0;
+  const analysis = cut ? { ...segments.output, findings: [...segments.output.findings, ...bounded.findings] } : segments.output;
   let problems: Problem[] | undefined;
-  const problemsWith = (lines: string[]) => (problems ??= lint(analysis, input.text, ctx.lint, lines));
+  // Positions in the analysed part lie in the original lines too. With a part cut off no fix is
+  // offered: a fix built from the part (a sorted rung, say) could drop what lies past the bound.
+  const problemsWith = (lines: string[]) =>
+    (problems ??= cut ? lint(analysis, bounded.text, ctx.lint, lines).map(({ fix: _fix, ...p }) => p) : lint(analysis, input.text, ctx.lint, lines));
   return {
     text: input.text,
     analysis,

@@ -40,7 +40,8 @@ export interface ConfigFs {
 export interface ResolveOptions {
   /**
    * Settings from the editor, in the shape of a config file (`{ "max-step": 12, rules: {...} }`),
-   * layered below config files. `baseDir` resolves their lexicon paths (the workspace folder).
+   * layered below config files. `baseDir` resolves their lexicon paths (the workspace folder) and
+   * is the highest folder searched for config files (for a script outside it: the script's folder).
    */
   editor?: { settings: unknown; baseDir: string; name?: string };
 }
@@ -76,10 +77,15 @@ function readLayer(file: string, fs: ConfigFs): ConfigLayer | { file: string; er
   return layer;
 }
 
-/** The config files that apply to a script, farthest first (pure: only `fs` is read). */
-export function findConfigFiles(scriptPath: string, fs: ConfigFs): ConfigLayer[] {
+/**
+ * The config files that apply to a script, farthest first (pure: only `fs` is read). The walk goes
+ * up to the root or a file with `root: true`; with `top`, it also ends at that folder (or, for a
+ * script outside it, at the script's own folder).
+ */
+export function findConfigFiles(scriptPath: string, fs: ConfigFs, top?: string): ConfigLayer[] {
   const found: ConfigLayer[] = [];
   let dir = dirname(scriptPath);
+  const last = top === undefined ? undefined : inside(resolve(top), resolve(dir)) ? resolve(top) : resolve(dir);
   for (;;) {
     const name = CONFIG_FILE_NAMES.find((n) => fs.exists(join(dir, n)));
     if (name) {
@@ -92,7 +98,7 @@ export function findConfigFiles(scriptPath: string, fs: ConfigFs): ConfigLayer[]
       }
     }
     const up = dirname(dir);
-    if (up === dir) break;
+    if (up === dir || (last !== undefined && resolve(dir) === last)) break;
     dir = up;
   }
   return found.reverse();
@@ -119,7 +125,9 @@ export function resolveScriptContext(path: string, fs: ConfigFs, opts: ResolveOp
   if (opts.editor) {
     layers.push(parseConfigObject(opts.editor.settings, opts.editor.name ?? 'editor settings', opts.editor.baseDir));
   }
-  layers.push(...findConfigFiles(path, fs));
+  // In the editor, config files are looked for up to the workspace folder only: one a folder
+  // above it (a home folder, a shared drive) is not the workspace's and is not read.
+  layers.push(...findConfigFiles(path, fs, opts.editor?.baseDir));
 
   let options = defaultOptions();
   const severities: SeverityOverrides = {};

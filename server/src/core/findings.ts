@@ -51,6 +51,10 @@ export type Finding = Range &
     | { kind: 'record-syntax'; explanation: string }
     /** Rungs itself failed: a rule threw (its id), or the whole analysis did (null). */
     | { kind: 'internal-failure'; rule: string | null; error: string }
+    /** A line longer than `limit` characters (core/limits.ts): analysed up to the bound. */
+    | { kind: 'line-over-limit'; limit: number; length: number }
+    /** A script over `limit` bytes: its first `checkedLines` whole lines are analysed. */
+    | { kind: 'script-over-limit'; limit: number; checkedLines: number }
   );
 
 export type FindingKind = Finding['kind'];

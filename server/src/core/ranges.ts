@@ -31,8 +31,9 @@ export const NUMBER_RANGES: Record<string, NumberRange> = {
   // Matched sets: an equivalence bound in standard deviations, and a count of items.
   'set-bound': { min: 0, max: 10, above: true, unit: 'standard deviations' },
   'set-min-items': { min: 2, max: 10_000 },
-  // Rate records: a ratio of two rates, and a count of sessions.
-  'benefit-mark': { min: 0, max: 100, above: true },
+  // Rate records: a ratio of two rates (a tenfold gain is already beyond any plausible benefit),
+  // and a count of sessions.
+  'benefit-mark': { min: 0, max: 10, above: true },
   'ready-sessions': { min: 1, max: 10_000 },
 };
 

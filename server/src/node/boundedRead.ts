@@ -1,10 +1,12 @@
 // Reads files the way a linter fed untrusted paths must: regular files only (a named pipe or a
 // device such as /dev/zero would block or never end) and never more than a fixed number of bytes.
 // Shared by the CLI and the language server.
+import { formatBytes, MAX_SCRIPT_BYTES } from '../core/limits';
 import { closeSync, constants, fstatSync, openSync, readSync, realpathSync, statSync } from 'node:fs';
 
-/** Largest script, config or lexicon file read, in bytes (README "Limits"). */
-export const MAX_FILE_BYTES = 32 * 1024 * 1024;
+/** Largest script, config or lexicon file read, in bytes (README "Limits"): the analysis's bound. */
+export const MAX_FILE_BYTES = MAX_SCRIPT_BYTES;
+export { formatBytes };
 
 /**
  * A read refused on purpose. Callers print `(err.code)` after "cannot read ..."; here `code` is the
@@ -69,9 +71,6 @@ export function realPath(path: string): string {
   }
 }
 
-export function formatBytes(n: number): string {
-  return n % (1024 * 1024) === 0 ? `${n / (1024 * 1024)} MiB` : `${n} bytes`;
-}
 
 /** All of standard input as text, up to `limit` bytes (a pipe from /dev/zero must not hang us). */
 export function readStdinBounded(limit = MAX_FILE_BYTES): string {

@@ -15,6 +15,7 @@ import { estimatedWord } from './estimatedWord';
 import { internalError, internalFailure } from './internalError';
 import { itemOutlier } from './itemOutlier';
 import { itemTooLong } from './itemTooLong';
+import { overLimit } from './overLimit';
 import { paceAboveNorm } from './paceAboveNorm';
 import { paceBelowBaseline } from './paceBelowBaseline';
 import { paceSlowsDown } from './paceSlowsDown';
@@ -60,6 +61,7 @@ export const RULES: Rule[] = [
   unusedOverride,
   badConfig,
   badDirective,
+  overLimit,
   internalError,
   badRecord,
   recordsHeader,
@@ -76,7 +78,7 @@ export const RULE_IDS: string[] = RULES.map((r) => r.id);
 export const STEP_RULES: string[] = [stepBackwards.id, stepTooBig.id, unevenSteps.id, rungsOverlap.id];
 
 /** The rules built from findings; the compiler checks below that every kind has one of them. */
-const FINDING_RULES = [unknownKey, badValue, unknownPhone, badVariant, badConfig, internalError, badRecord, recordsHeader, duplicateRecord, recordsSyntax] as const;
+const FINDING_RULES = [unknownKey, badValue, unknownPhone, badVariant, badConfig, overLimit, internalError, badRecord, recordsHeader, duplicateRecord, recordsSyntax] as const;
 type Unowned = Exclude<FindingKind, (typeof FINDING_RULES)[number]['kinds'][number]>;
 export const EVERY_KIND_OWNED: [Unowned] extends [never] ? true : never = true;
 
