@@ -6,6 +6,7 @@ import { main } from '../../server/src/cli/main';
 import { SETTINGS as KEYS } from '../../server/src/core/settings';
 import { NUMBER_RANGES } from '../../server/src/core/ranges';
 import { parseConfigText } from '../../server/src/config/parseConfig';
+import { applySettings, defaultOptions } from '../../server/src/core/options';
 import { lint, renderFindings } from '../../server/src/rules/index';
 import { analyzeText } from '../helpers/data';
 import { MemFs } from '../cli/memfs';
@@ -34,8 +35,6 @@ describe('numeric settings', () => {
     `@set-bound ${'9'.repeat(400)}`,
     '@set-bound 11',
     `@set-min-items ${'9'.repeat(400)}`,
-    // A benefit mark is a ratio of two rates; a mark above tenfold is not plausible (common practice).
-    '@benefit-mark 11',
   ])('%s is a problem on its line', (line) => {
     const ps = settingProblems(line);
     expect(ps.map((p) => p.rule)).toEqual(['bad-value']);
@@ -45,7 +44,22 @@ describe('numeric settings', () => {
     expect(settingProblems('@weights 0.4, 0.4, 0.2')).toEqual([]);
     expect(settingProblems('@baseline 0.8 wps')).toEqual([]);
     expect(settingProblems('@max-step 100')).toEqual([]);
-    expect(settingProblems('@benefit-mark 10')).toEqual([]);
+  });
+
+  it('a benefit mark (a rate-records key, read from config files) is bounded at tenfold', () => {
+    // A benefit mark is a ratio of two rates; a mark above tenfold is not plausible (common practice).
+    const bad = parseConfigText('{"benefit-mark": 11}', '/p/.rungs.json');
+    expect(renderFindings(bad.findings).map((p) => p.rule)).toEqual([]);
+    expect(applySettings(defaultOptions(), bad.settings, 'config').findings.map((f) => f.kind)).toEqual(['unreadable-value']);
+    const ok = parseConfigText('{"benefit-mark": 10}', '/p/.rungs.json');
+    expect(applySettings(defaultOptions(), ok.settings, 'config').findings).toEqual([]);
+  });
+
+  it('a rate-records key in a script header is a warning at the key, and changes nothing', () => {
+    const ps = settingProblems('@benefit-mark 1.5');
+    expect(ps.map((p) => [p.rule, p.severity, p.character])).toEqual([['bad-value', 'warning', 0]]);
+    expect(ps[0].message).toContain('config file');
+    expect(analyzeText(`@benefit-mark 1.5\n${ITEMS}`).options.records.benefitMark).toBe(1.2);
   });
 
   it('no difficulty is NaN and no ladder rule speaks of NaN after a bad @weights', () => {

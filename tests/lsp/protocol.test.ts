@@ -358,6 +358,8 @@ describe('completion, formatting, custom requests', () => {
     await c.open(other, '@di\n@direction \n== R\nHello. | @set \n// rungs: \n');
     const keys = await c.request<CompletionItem[]>('textDocument/completion', { textDocument: { uri: other }, position: { line: 0, character: 3 } });
     expect(keys.map((k) => k.label)).toEqual(expect.arrayContaining(['@direction', '@paces', '@baseline', '@max-step']));
+    // Rate-records keys are read from config files beside the records, never offered in a script.
+    expect(keys.map((k) => k.label)).not.toContain('@benefit-mark');
     const values = await c.request<CompletionItem[]>('textDocument/completion', { textDocument: { uri: other }, position: { line: 1, character: 11 } });
     expect(values.map((k) => k.label)).toEqual(['rising', 'falling']);
     const labels = await c.request<CompletionItem[]>('textDocument/completion', { textDocument: { uri: other }, position: { line: 3, character: 14 } });

@@ -104,7 +104,7 @@ describe('the benefit mark is compared exactly', () => {
     // computed: 23 / 20 = 1.15 w/s against 1.0 = 1.15 < 1.2; with the mark at 1.15 it meets it.
     const lines = [HEAD, '2026-03-02,C-0417,,,unassisted,10,10,,', '2026-03-02,C-0417,s.rungs,Short,paced,23,20,,'];
     expect(run(lines).records[1].benefit).toBe(false);
-    const o = applySettings(defaultOptions(), parseScript('@benefit-mark 1.15\n').header, 'script');
+    const o = applySettings(defaultOptions(), parseScript('@benefit-mark 1.15\n').header, 'config');
     expect(renderFindings(o.findings)).toEqual([]);
     expect(run(lines, { options: o.options.records }).records[1].benefit).toBe(true);
   });
@@ -223,7 +223,7 @@ describe('transcripts are counted with the project tokeniser, fillers left out',
   });
 
   it('takes the filler list from the settings', () => {
-    const o = applySettings(defaultOptions(), parseScript('@fillers um\n').header, 'script').options.records;
+    const o = applySettings(defaultOptions(), parseScript('@fillers um\n').header, 'config').options.records;
     const r = readProgress({ text: `${T}\n2026-03-02,C-0417,,,unassisted,,10,"um uh hello"\n`, scripts: lookup, today: TODAY, options: o });
     expect(r.records[0]).toMatchObject({ words: 2, fillersLeftOut: ['um'] });
   });
@@ -257,7 +257,7 @@ describe('trends', () => {
   });
 
   it('holds readiness back while accuracy is under the floor', () => {
-    const o = applySettings(defaultOptions(), parseScript('@accuracy-floor 90%\n@ready-sessions 2\n').header, 'script').options.records;
+    const o = applySettings(defaultOptions(), parseScript('@accuracy-floor 90%\n@ready-sessions 2\n').header, 'config').options.records;
     const lines = [HEAD, base, `${paced('2026-03-02', 13)}12`, `${paced('2026-03-09', 13)}11`];
     // computed: accuracy 12/13 = 92% then 11/13 = 85% < 90%.
     const t = run(lines, { options: o }).trends[0];
@@ -267,7 +267,7 @@ describe('trends', () => {
   });
 
   it('rejects unreadable settings with a message', () => {
-    const p = applySettings(defaultOptions(), parseScript('@benefit-mark lots\n@accuracy-floor 120%\n').header, 'script').findings;
+    const p = applySettings(defaultOptions(), parseScript('@benefit-mark lots\n@accuracy-floor 120%\n').header, 'config').findings;
     expect(renderFindings(p).map((x) => x.message)).toEqual([
       '@benefit-mark must be a number above 0, e.g. 1.2, not "lots"',
       '@accuracy-floor is a fraction 0-1 or a percentage, e.g. 0.8 or 80%, not "120%"',

@@ -7,6 +7,8 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { clearConfigCache, resolveScriptContext } from '../../server/src/config/resolve';
 import { analyze } from '../../server/src/core/analyze';
+import { applySettings } from '../../server/src/core/options';
+import { parseScript } from '../../server/src/core/parse';
 import { defaultOptions, SETTINGS, settingText, type SettingSpec } from '../../server/src/core/settings';
 import { editorConfiguration, normalizeSettings, toConfigObject } from '../../server/src/lsp/settings';
 import { MemFs } from '../cli/memfs';
@@ -41,7 +43,13 @@ describe('the settings table', () => {
       clearConfigCache();
       const fs = new MemFs({ '/w/.rungs.json': JSON.stringify({ [s.key]: s.example }), '/w/a.rungs': '' });
       const viaConfig = resolveScriptContext('/w/a.rungs', fs).options;
-      const viaHeader = analyze({ text: `@${s.key} ${s.example}\nHello.\n`, data: words }).options;
+      // A rate-records key is read from config layers only: a script header reports it and keeps
+      // the default, so the header's reading is compared with a config layer applied directly.
+      const header = `@${s.key} ${s.example}\nHello.\n`;
+      const viaHeader = s.recordsOnly
+        ? applySettings(defaultOptions(), parseScript(header).header, 'config').options
+        : analyze({ text: header, data: words }).options;
+      if (s.recordsOnly) expect(analyze({ text: header, data: words }).options, s.key).toEqual(defaultOptions());
       expect(viaConfig, s.key).toEqual(viaHeader);
       if (!s.editor) continue;
       const editor = normalizeSettings(s.editor.name.split('.').reduceRight<unknown>((v, k) => ({ [k]: v }), s.example));

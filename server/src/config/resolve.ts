@@ -136,7 +136,7 @@ export function resolveScriptContext(path: string, fs: ConfigFs, opts: ResolveOp
   const findings: ScriptContext['findings'] = [];
   for (const layer of layers) {
     for (const f of layer.findings) findings.push({ file: layer.file, finding: f });
-    const applied = applySettings(options, layer.settings, 'script');
+    const applied = applySettings(options, layer.settings, 'config');
     options = applied.options;
     for (const f of applied.findings) findings.push({ file: layer.file, finding: f });
     Object.assign(severities, layer.rules);

@@ -16,6 +16,7 @@ export type Finding = Range &
         fixable: boolean;
       }
     | { kind: 'script-key-on-rung'; key: string }
+    | { kind: 'records-key-in-script'; key: string }
     | { kind: 'missing-value'; key: string; example: string }
     /** A value its reader could not read; `expected` is the reader's account of what it takes. */
     | { kind: 'unreadable-value'; key: string; expected: string }

@@ -19,12 +19,14 @@ const valueRange = (s: Setting): Range => ({ line: s.line, character: s.valueSta
 
 /**
  * Applies settings to options in order. Unknown keys (with the nearest known key) and values that
- * cannot be read (with what the key takes) become findings; the rules word them.
+ * cannot be read (with what the key takes) become findings; the rules word them. `scope` says
+ * where the settings were written: a script header, a rung, or a config layer (a file or the
+ * editor settings).
  */
 export function applySettings(
   base: AnalysisOptions,
   settings: Setting[],
-  scope: 'script' | 'rung',
+  scope: 'script' | 'rung' | 'config',
 ): { options: AnalysisOptions; findings: Finding[] } {
   const o: AnalysisOptions = { ...base, weights: { ...base.weights }, wcm: { ...base.wcm }, timing: { ...base.timing } };
   const findings: Finding[] = [];
@@ -36,6 +38,10 @@ export function applySettings(
     }
     if (scope === 'rung' && spec.scope === 'script') {
       findings.push(finding(keyRange(s), { kind: 'script-key-on-rung', key: spec.key }));
+      continue;
+    }
+    if (scope !== 'config' && spec.recordsOnly) {
+      findings.push(finding(keyRange(s), { kind: 'records-key-in-script', key: spec.key }));
       continue;
     }
     if (!s.value.trim() && spec.key !== 'title') {

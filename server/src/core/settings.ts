@@ -43,6 +43,11 @@ export interface SettingSpec {
   range?: NumberRange;
   /** Only in a script, never in a config file or editor settings (`@title`, `@say`, `@set`). */
   scriptOnly?: boolean;
+  /**
+   * Read for rate records only, from config files and editor settings beside the records file. A
+   * script header never reaches a records file, so the key there is reported, not silently kept.
+   */
+  recordsOnly?: boolean;
   /** Reads the written value into options; returns an error message, or null when it was read. */
   apply(value: string, o: AnalysisOptions): string | null;
   /** The value in options that item scores depend on (the item cache is keyed on these). */

@@ -71,7 +71,8 @@ export function completion(s: Snapshot, line: number, character: number): Comple
   const keyTyped = /^@[\w-]*$/.exec(trimmed);
   if (keyTyped) {
     const header = isInHeader(s, line);
-    return KEYS.filter((k) => (header ? k.scope !== 'rung' : k.scope !== 'script' || RUNG_KEYS.has(k.key))).map((k) =>
+    // Rate-records keys belong in config files beside the records, never in a script.
+    return KEYS.filter((k) => !k.recordsOnly && (header ? k.scope !== 'rung' : k.scope !== 'script' || RUNG_KEYS.has(k.key))).map((k) =>
       keyItem(k, line, indent, character),
     );
   }

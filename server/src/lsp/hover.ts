@@ -168,6 +168,7 @@ function settingHoverText(setting: Setting): string | null {
   if (!spec) return null;
   const aliases = spec.aliases.length ? ` (also ${spec.aliases.map((a) => `@${a}`).join(', ')})` : '';
   const where = spec.scope === 'script' ? 'script header' : spec.scope === 'rung' ? 'rung' : 'script header or a rung';
+  if (spec.recordsOnly) return `**@${spec.key}** — ${spec.summary}\n\nA rate-records setting: it is read from a config file (\`.rungs.json\`, \`.rungs.yaml\`) or the editor settings beside the records file, and a script header does not reach it.`;
   return `**@${spec.key}**${aliases} — ${spec.summary}\n\nExample: \`@${spec.key} ${spec.example}\` · applies in the ${where}`;
 }
 

@@ -16,13 +16,16 @@ export const badValue = findingRule(
       'per minute instead of per second, `@direction` other than rising or falling, a count that is',
       'not a whole number, `@weights` that are not three numbers of 0 or more or are all 0 (they',
       'need not add up to 1: the difficulty is their weighted mean), a script-wide key on a rung',
-      'header, a `@say` line without phones, a note with no sentence before its `|`. The message says',
+      'header, a rate-records key (`@benefit-mark`, `@fillers`, `@ready-sessions`, `@accuracy-floor`)',
+      'in a script header, where it reaches no records file (a warning: put it in a config file beside',
+      'the records), a `@say` line without phones, a note with no sentence before its `|`. The message says',
       'what the key expects, with an example. The setting is ignored and the default (or config',
       'value) stays in force. The same checks apply to values in config files.',
     ].join(' '),
   },
   [
     'script-key-on-rung',
+    'records-key-in-script',
     'missing-value',
     'unreadable-value',
     'setting-without-key',
@@ -35,6 +38,12 @@ export const badValue = findingRule(
     switch (f.kind) {
       case 'script-key-on-rung':
         return { message: `@${f.key} applies to the whole script: put it in the header, above the first rung` };
+      case 'records-key-in-script':
+        // Nothing is lost (the key never did anything in a script), so this one is a warning.
+        return {
+          message: `@${f.key} is a rate-records setting and a script header does not reach records files: put "${f.key}" in a config file (.rungs.json or .rungs.yaml) beside the records file`,
+          severity: 'warning',
+        };
       case 'missing-value':
         return { message: `@${f.key} needs a value, e.g. "@${f.key} ${f.example}"` };
       case 'unreadable-value':
