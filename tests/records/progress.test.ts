@@ -152,6 +152,14 @@ describe('bad rows: each kind is reported on its cell, and the rest is used', ()
     expect(msg(11)[0]).toBe('unknown condition "echo": write unassisted or paced');
     expect(msg(13)[0]).toBe('"s.rungs" has no rung "Middle" (its rungs: 1 "Short", 2 "Long")');
     expect(msg(16)[0]).toBe('this row repeats line 2; it is counted once');
+    expect(msg(10)[0]).toBe('"02/03/2026" is not an ISO 8601 date: write YYYY-MM-DD, e.g. 2026-03-02');
+    expect(msg(12)[0]).toBe('no script "gone.rungs" (the path is relative to this records file)');
+    expect(msg(15)).toEqual([
+      'script is empty: a paced row names the script it practised',
+      'rung is empty: a paced row names the rung it practised (name or number)',
+      'no pace: give one in the pace column, or a script and rung that set one',
+    ]);
+    expect(msg(17)[0]).toBe('14 correct words is more than the 12 words of the row');
   });
 
   it('still computes the good rows', () => {

@@ -42,7 +42,7 @@ export type Finding = Range &
     | { kind: 'script-only-key'; key: string }
     | { kind: 'unreadable-config-value'; key: string; example: string }
     /** A rate-records cell that cannot be used: its column, and what is wrong with what it takes. */
-    | { kind: 'record-bad-cell'; column: string; value: string; explanation: string }
+    | { kind: 'record-bad-cell'; column: string; value: string; problem: RecordCellProblem }
     | { kind: 'record-unknown-column'; name: string; known: readonly string[] }
     | { kind: 'record-repeated-column'; name: string }
     | { kind: 'record-missing-column'; column: string }
@@ -68,3 +68,25 @@ export type FindingData = Finding extends infer F ? (F extends Finding ? Omit<F,
 export function finding(range: Range, data: FindingData): Finding {
   return { line: range.line, character: range.character, endLine: range.endLine, endCharacter: range.endCharacter, ...data } as Finding;
 }
+
+/** Why a required records cell may not be empty (said after "... is empty"). */
+export type EmptyCellReason = 'condition-choices' | 'no-transcript' | 'paced-needs-script' | 'paced-needs-rung';
+
+/** What is wrong with one records cell (`value` of the finding is the cell, trimmed). */
+export type RecordCellProblem =
+  | { what: 'empty'; why: EmptyCellReason | null }
+  | { what: 'not-iso-date' }
+  | { what: 'not-in-calendar' }
+  | { what: 'in-future'; today: string }
+  | { what: 'unknown-condition' }
+  | { what: 'not-a-number' }
+  | { what: 'not-above-zero' }
+  | { what: 'not-a-count' }
+  | { what: 'implausible-rate'; words: number; seconds: string; rate: number; limit: number }
+  | { what: 'more-correct-than-words'; words: number }
+  | { what: 'no-such-script' }
+  | { what: 'no-such-rung'; script: string; rungs: string[] }
+  | { what: 'unreadable-pace'; explanation: string }
+  | { what: 'not-one-pace'; count: number }
+  | { what: 'rung-without-pace' }
+  | { what: 'no-pace' };

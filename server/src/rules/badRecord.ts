@@ -1,5 +1,6 @@
 // bad-record: a cell of a rate-records row that cannot be used. The records core finds it
 // (server/src/core/records/validate.ts, one check per column); this file words it.
+import type { EmptyCellReason, RecordCellProblem } from '../core/findings';
 import type { Described } from './types';
 import { findingRule } from './findingRule';
 
@@ -22,6 +23,52 @@ export const badRecord = findingRule(
     ].join(' '),
   },
   ['record-bad-cell'],
-  // The core's explanation names the column, the value and what the column takes.
-  (f): Described => ({ message: f.explanation }),
+  // Each message names the column, the value and what the column takes.
+  (f): Described => ({ message: cellMessage(f.column, f.value, f.problem) }),
 );
+
+const EMPTY_REASON: Record<EmptyCellReason, string> = {
+  'condition-choices': ': write unassisted or paced',
+  'no-transcript': ' and there is no transcript to count',
+  'paced-needs-script': ': a paced row names the script it practised',
+  'paced-needs-rung': ': a paced row names the rung it practised (name or number)',
+};
+
+function cellMessage(column: string, value: string, p: RecordCellProblem): string {
+  switch (p.what) {
+    case 'empty':
+      return `${column} is empty${p.why ? EMPTY_REASON[p.why] : ''}`;
+    case 'not-iso-date':
+      return `"${value}" is not an ISO 8601 date: write YYYY-MM-DD, e.g. 2026-03-02`;
+    case 'not-in-calendar':
+      return `${value} is not a date of the calendar`;
+    case 'in-future':
+      return `${value} is in the future (today is ${p.today})`;
+    case 'unknown-condition':
+      return `unknown condition "${value}": write unassisted or paced`;
+    case 'not-a-number':
+      return column === 'words' ? `words must be a whole number, not "${value}"` : `${column} must be a number, not "${value}"`;
+    case 'not-above-zero':
+      return `${column} must be above 0, not ${value}`;
+    case 'not-a-count':
+      return column === 'correct' ? `correct must be a whole number, 0 or more, not "${value}"` : `${column} must be a whole number, 0 or more, not ${value}`;
+    case 'implausible-rate':
+      return `${p.words} words in ${p.seconds} s is ${p.rate.toFixed(1)} words/s, faster than any plausible speech (${p.limit} words/s): check both numbers`;
+    case 'more-correct-than-words':
+      return `${value} correct words is more than the ${p.words} words of the row`;
+    case 'no-such-script':
+      return `no script "${value}" (the path is relative to this records file)`;
+    case 'no-such-rung': {
+      const names = p.rungs.map((r, i) => `${i + 1} "${r}"`).join(', ');
+      return `"${p.script}" has no rung "${value}" (its rungs: ${names || 'none'})`;
+    }
+    case 'unreadable-pace':
+      return p.explanation;
+    case 'not-one-pace':
+      return `give one pace, not ${p.count}`;
+    case 'rung-without-pace':
+      return 'the rung has no pace and the row gives none';
+    case 'no-pace':
+      return 'no pace: give one in the pace column, or a script and rung that set one';
+  }
+}

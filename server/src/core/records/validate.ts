@@ -4,7 +4,7 @@
 import { parsePaces } from '../pace';
 import { Pronouncer } from '../pronounce';
 import { tokenize } from '../tokenize';
-import { finding, type Finding } from '../findings';
+import { finding, type EmptyCellReason, type Finding, type RecordCellProblem } from '../findings';
 import type { Pace, WordData } from '../types';
 import { DEFAULT_WCM_OPTIONS } from '../wcm';
 import { COLUMNS, MAX_PLAUSIBLE_WPS, REQUIRED_COLUMNS, type Column } from './columns';
@@ -94,30 +94,30 @@ export function validateRows(input: ValidateInput): { rows: ValidRow[]; findings
       cells[col] = row.cells[k] ?? { value: '', line: last.endLine, character: last.endCharacter, endLine: last.endLine, endCharacter: last.endCharacter };
     }
     const own: Finding[] = [];
-    const bad = (col: Column, explanation: string) => own.push(finding(cells[col]!, { kind: 'record-bad-cell', column: col, value: cells[col]!.value, explanation }));
+    const bad = (col: Column, problem: RecordCellProblem) => own.push(finding(cells[col]!, { kind: 'record-bad-cell', column: col, value: cells[col]!.value.trim(), problem }));
     const text = (col: Column) => (cells[col]?.value ?? '').trim();
-    const missing = (col: Column, why = '') => index.has(col) && bad(col, `${col} is empty${why}`);
+    const missing = (col: Column, why: EmptyCellReason | null = null) => index.has(col) && bad(col, { what: 'empty', why });
 
     const date = text('date');
     let day: number | null = null;
     if (!date) missing('date');
-    else if (!ISO_DATE.test(date)) bad('date', `"${date}" is not an ISO 8601 date: write YYYY-MM-DD, e.g. 2026-03-02`);
-    else if ((day = dayNumber(date)) === null) bad('date', `${date} is not a date of the calendar`);
-    else if (today !== null && day > today) bad('date', `${date} is in the future (today is ${input.today})`);
+    else if (!ISO_DATE.test(date)) bad('date', { what: 'not-iso-date' });
+    else if ((day = dayNumber(date)) === null) bad('date', { what: 'not-in-calendar' });
+    else if (today !== null && day > today) bad('date', { what: 'in-future', today: input.today });
 
     const client = text('client');
     if (!client) missing('client');
 
     const condText = text('condition').toLowerCase();
     let condition: Condition | null = null;
-    if (!condText) missing('condition', ': write unassisted or paced');
+    if (!condText) missing('condition', 'condition-choices');
     else if (condText === 'unassisted' || condText === 'paced') condition = condText;
-    else bad('condition', `unknown condition "${text('condition')}": write unassisted or paced`);
+    else bad('condition', { what: 'unknown-condition' });
 
     const seconds = decimal(text('seconds'));
     if (!text('seconds')) missing('seconds');
-    else if (!seconds) bad('seconds', `seconds must be a number, not "${text('seconds')}"`);
-    else if (seconds.n <= 0n) bad('seconds', `seconds must be above 0, not ${text('seconds')}`);
+    else if (!seconds) bad('seconds', { what: 'not-a-number' });
+    else if (seconds.n <= 0n) bad('seconds', { what: 'not-above-zero' });
 
     let words: Q | null = null;
     let wordsFromTranscript = false;
@@ -131,23 +131,23 @@ export function validateRows(input: ValidateInput): { rows: ValidRow[]; findings
     }
     if (text('words')) {
       const w = decimal(text('words'));
-      if (!w) bad('words', `words must be a whole number, not "${text('words')}"`);
-      else if (w.n < 0n || !isInteger(w)) bad('words', `words must be a whole number, 0 or more, not ${text('words')}`);
+      if (!w) bad('words', { what: 'not-a-number' });
+      else if (w.n < 0n || !isInteger(w)) bad('words', { what: 'not-a-count' });
       else words = w;
     } else if (spoken) {
       words = { n: BigInt(spoken.length), d: 1n };
       wordsFromTranscript = true;
-    } else missing('words', ' and there is no transcript to count');
+    } else missing('words', 'no-transcript');
     if (words && seconds && seconds.n > 0n && toNumber(words) / toNumber(seconds) > MAX_PLAUSIBLE_WPS) {
       const rate = toNumber(words) / toNumber(seconds);
-      bad(wordsFromTranscript ? 'transcript' : 'words', `${toNumber(words)} words in ${text('seconds')} s is ${rate.toFixed(1)} words/s, faster than any plausible speech (${MAX_PLAUSIBLE_WPS} words/s): check both numbers`);
+      bad(wordsFromTranscript ? 'transcript' : 'words', { what: 'implausible-rate', words: toNumber(words), seconds: text('seconds'), rate, limit: MAX_PLAUSIBLE_WPS });
     }
 
     let correct: number | null = null;
     if (text('correct')) {
       const c = decimal(text('correct'));
-      if (!c || c.n < 0n || !isInteger(c)) bad('correct', `correct must be a whole number, 0 or more, not "${text('correct')}"`);
-      else if (words && cmpGreater(c, words)) bad('correct', `${text('correct')} correct words is more than the ${toNumber(words)} words of the row`);
+      if (!c || c.n < 0n || !isInteger(c)) bad('correct', { what: 'not-a-count' });
+      else if (words && cmpGreater(c, words)) bad('correct', { what: 'more-correct-than-words', words: toNumber(words) });
       else correct = toNumber(c);
     }
 
@@ -155,32 +155,31 @@ export function validateRows(input: ValidateInput): { rows: ValidRow[]; findings
     let facts: ScriptFacts | null = null;
     if (scriptPath) {
       facts = input.scripts(scriptPath);
-      if (!facts) bad('script', `no script "${scriptPath}" (the path is relative to this records file)`);
-    } else if (condition === 'paced') missing('script', ': a paced row names the script it practised');
+      if (!facts) bad('script', { what: 'no-such-script' });
+    } else if (condition === 'paced') missing('script', 'paced-needs-script');
     const rungText = text('rung') || null;
     let rungIndex: number | null = null;
     if (rungText && facts) {
       rungIndex = findRung(facts, rungText);
       if (rungIndex === null) {
-        const names = facts.rungs.map((r, i) => `${i + 1} "${r.name}"`).join(', ');
-        bad('rung', `"${scriptPath}" has no rung "${rungText}" (its rungs: ${names || 'none'})`);
+        bad('rung', { what: 'no-such-rung', script: scriptPath!, rungs: facts.rungs.map((r) => r.name) });
       }
-    } else if (!rungText && condition === 'paced') missing('rung', ': a paced row names the rung it practised (name or number)');
+    } else if (!rungText && condition === 'paced') missing('rung', 'paced-needs-rung');
 
     let pace: Pace | null = null;
     let paceFrom: 'row' | 'rung' | null = null;
     if (condition === 'paced') {
       if (text('pace')) {
         const { paces, error } = parsePaces(text('pace'));
-        if (error || paces.length !== 1) bad('pace', error ?? `give one pace, not ${paces.length}`);
+        if (error || paces.length !== 1) bad('pace', error ? { what: 'unreadable-pace', explanation: error } : { what: 'not-one-pace', count: paces.length });
         else [pace, paceFrom] = [paces[0], 'row'];
       } else if (facts && rungIndex !== null) {
         const first = facts.rungs[rungIndex].paces[0];
         if (first) [pace, paceFrom] = [first, 'rung'];
-        else bad('rung', 'the rung has no pace and the row gives none');
+        else bad('rung', { what: 'rung-without-pace' });
       } else if (!scriptPath) {
         // With an unknown script or rung the pace is unknown too, but that is already reported.
-        bad('pace', 'no pace: give one in the pace column, or a script and rung that set one');
+        bad('pace', { what: 'no-pace' });
       }
     }
 
