@@ -8,6 +8,7 @@
 //   node server/scripts/train-pronounce.mjs               train on train + dev, write the model
 //   node server/scripts/train-pronounce.mjs --dev FILE    train on train only (to choose
 //                                                         parameters on dev), write FILE
+//     [--params JSON]                                     with these parameters changed
 import { spawn } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -27,6 +28,9 @@ const flag = (name) => {
   return at >= 0 ? process.argv[at + 1] : undefined;
 };
 const DIRECTIONS = ['forward', 'reverse'];
+// Parameters other than the committed ones are only for trials on the development tenth.
+const params = flag('--params') === undefined ? PARAMS : { ...PARAMS, ...JSON.parse(flag('--params')) };
+if (params !== PARAMS && flag('--dev') === undefined && flag('--direction') === undefined) throw new Error('--params needs --dev');
 
 /** (spelling, phones) pairs of the chosen parts; reversed for the right-to-left model. */
 function trainingPairs(parts, direction) {
@@ -44,33 +48,26 @@ function trainingPairs(parts, direction) {
 function trainOne(direction, parts) {
   const pairs = trainingPairs(parts, direction);
   log(`${direction}: ${pairs.length} training pronunciations`);
-  const aligned = align(pairs, PARAMS.shapes, PARAMS.emIterations, (m) => log(`${direction}: ${m}`));
-  // Only graphones some best alignment uses go into the model, numbered from 1 in first use.
-  const renumber = new Map();
-  const keys = [];
-  const sequences = [];
-  for (const p of aligned.paths) {
-    if (p === null) continue;
-    sequences.push(
-      p.map((g) => {
-        if (!renumber.has(g)) {
-          renumber.set(g, keys.length + 1);
-          keys.push(aligned.keys[g]);
-        }
-        return renumber.get(g);
-      }),
-    );
-  }
-  log(`${direction}: ${keys.length} graphones; counting ${PARAMS.order}-grams`);
-  const model = kneserNey(sequences, PARAMS.order, PARAMS.cutoffs);
+  const aligned = align(pairs, params.shapes, params.emIterations, (m) => log(`${direction}: ${m}`));
+  // Only graphones some best alignment uses go into the model, numbered from 1 in the order of
+  // their keys: the graphones of one letter then have consecutive numbers, so the decoder finds
+  // a letter's n-grams after a context as one run of the context's sorted successors.
+  const usedIds = new Set();
+  for (const p of aligned.paths) if (p !== null) for (const g of p) usedIds.add(g);
+  const keys = [...usedIds].map((g) => aligned.keys[g]).sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+  const renumber = new Map([...usedIds].map((g) => [g, keys.indexOf(aligned.keys[g]) + 1]));
+  const sequences = aligned.paths.filter((p) => p !== null).map((p) => p.map((g) => renumber.get(g)));
+  log(`${direction}: ${keys.length} graphones; counting ${params.order}-grams`);
+  const model = kneserNey(sequences, params.order, params.cutoffs);
   log(`${direction}: ${model.length} n-grams kept`);
-  const header = { method: 'joint-sequence n-gram, modified Kneser-Ney', direction, params: PARAMS, checksum: inputsChecksum(PARAMS), graphones: keys };
+  const header = { method: 'joint-sequence n-gram, modified Kneser-Ney', direction, params, checksum: inputsChecksum(params), graphones: keys };
   return modelText(header, model);
 }
 
 function child(direction, out, parts) {
   return new Promise((done, fail) => {
     const args = [...process.execArgv, fileURLToPath(import.meta.url), '--direction', direction, '--out', out, '--parts', parts.join(',')];
+    if (params !== PARAMS) args.push('--params', JSON.stringify(params));
     spawn(process.execPath, args, { stdio: 'inherit' }).on('exit', (code) => (code === 0 ? done() : fail(new Error(`${direction} model: exit ${code}`))));
   });
 }

@@ -21,7 +21,7 @@ export function pronounceReport(modelFile = join(root, 'dist', 'data', 'pronounc
   const heldOut = new Map();
   for (const [word, prons] of entries(dictionary)) if (part(word) === which) heldOut.set(word, prons);
   const cpu0 = process.cpuUsage();
-  const [forward, reverse] = core.parseModels(brotliDecompressSync(readFileSync(modelFile)).toString('utf8'));
+  const [forward, reverse] = core.parseModels(brotliDecompressSync(readFileSync(modelFile)));
   const estimator = { forward, reverse };
   const loadMs = process.cpuUsage(cpu0).user / 1000;
 

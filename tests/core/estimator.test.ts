@@ -20,7 +20,7 @@ import { score } from '../bench/pronounceEval';
 import { PSEUDOWORDS } from '../bench/pseudowords';
 import { words } from '../helpers/data';
 
-const [model, reverse] = parseModels(brotliDecompressSync(readFileSync(MODEL_PATH)).toString('utf8'));
+const [model, reverse] = parseModels(brotliDecompressSync(readFileSync(MODEL_PATH)));
 const estimator = { forward: model, reverse };
 const best = (w: string) => ({ phones: estimateCandidates(estimator, w, 1)[0]?.phones ?? [] });
 

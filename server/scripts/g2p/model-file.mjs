@@ -3,7 +3,8 @@
 // Format (Brotli-compressed UTF-8 text, read by server/src/core/g2p/model.ts): two models one after the
 // other, the left-to-right one first, each
 //   a header line: JSON { format, method, direction, scale, params, checksum, graphones },
-//   graphone i+1 = graphones[i] (0 is the word boundary)
+//   graphone i+1 = graphones[i] (0 is the word boundary), in the order of their keys (format 2),
+//   so the graphones of one letter have consecutive numbers
 //   then one line per n-gram, by order, then context, then token:
 //     <context step> <token> <log10 p x scale> [<log10 backoff x scale>]   (rounded)
 //   The context is the n-gram's line number among the entries (0-based; -1 for unigrams), written
@@ -17,7 +18,7 @@ import { fileURLToPath } from 'node:url';
 const here = dirname(fileURLToPath(import.meta.url));
 export const ROOT = join(here, '..', '..', '..');
 export const MODEL_PATH = join(ROOT, 'server', 'data', 'pronounce-model.txt.br');
-export const FORMAT = 1;
+export const FORMAT = 2;
 /** Log probabilities are stored in steps of 1/SCALE (0.002 log10: 0.5 % of a probability). */
 export const SCALE = 500;
 

@@ -20,7 +20,7 @@ export function loadEstimator(dataDir: string): Estimator | Error {
     const file = join(dataDir, MODEL_FILE);
     try {
       if (existsSync(file)) {
-        const [forward, reverse] = parseModels(brotliDecompressSync(readFileSync(file)).toString('utf8'));
+        const [forward, reverse] = parseModels(brotliDecompressSync(readFileSync(file)));
         hit = { forward, reverse: reverse ?? null };
       } else hit = new Error(`${file} not found: run \`npm run build\``);
     } catch (err) {

@@ -1,9 +1,17 @@
 // The pronunciation estimator's model: a joint-sequence (graphone) n-gram model (Bisani & Ney
 // 2008, "Joint-sequence models for grapheme-to-phoneme conversion", Speech Communication 50(5),
 // 434-451), trained on the CMU Pronouncing Dictionary by server/scripts/train-pronounce.mjs.
-// This file reads the model text (the format is described in server/scripts/g2p/model-file.mjs)
-// into flat arrays, and scores one graphone given a state: the backoff n-gram model is walked
-// as an automaton, so a step costs one or two table look-ups.
+// This file reads the model file's bytes (the format is described in
+// server/scripts/g2p/model-file.mjs) into a few flat typed arrays, and scores graphones given a
+// state: the backoff n-gram model is walked as an automaton.
+//
+// Layout: the file lists n-grams by order, then context, then token, so the n-grams extending
+// one context are a run of consecutive entries sorted by token, and (format 2) the graphones of
+// one letter have consecutive numbers. An entry keeps its token, its log probability and backoff
+// weight as scaled integers (16 bits each), the entry of its lower-order n-gram and the state
+// after it (32 bits each); the runs are found through one offset per entry. That is 18 bytes an
+// entry, about 13 MB for a model of 700,000 n-grams, with no hash table: a look-up is a binary
+// search in a short run, and the decoder reads all graphones of a letter after a state at once.
 
 export interface Graphone {
   letters: string;
@@ -30,168 +38,227 @@ export interface G2pModel {
   header: ModelHeader;
   /** Token i (1-based graphones; 0 is the word boundary). */
   graphones: (Graphone | null)[];
-  /** Tokens by their letters (one or two), for the decoder. */
-  byLetters: Map<string, number[]>;
+  /** The tokens reading these letters (one or two): numbers lo to hi - 1. */
+  byLetters: Map<string, { lo: number; hi: number }>;
   tokens: number;
-  /** (context entry, token) -> entry; context -1 is the empty context. */
-  table: PairTable;
-  logp: Float32Array;
-  bow: Float32Array;
+  /** The most letters any graphone reads. */
+  maxLetters: number;
+  /** Log probabilities are log10 x scale; scores inside the decoder stay in these units. */
+  scale: number;
+  /** Per entry: the last token of its n-gram. */
+  tok: Uint16Array;
+  /** Per entry: log10 P(token | context) x scale. */
+  logp: Int16Array;
+  /** Per entry that is a context: log10 backoff weight x scale (0 otherwise). */
+  bow: Int16Array;
   /** Entry of the same n-gram without its oldest token, -1 for unigrams. */
   backoff: Int32Array;
   /** State after this n-gram: the longest suffix of it that is a context (-1: none). */
   next: Int32Array;
+  /** The entries extending entry s by one token are firstChild[s] .. firstChild[s + 1] - 1. */
+  firstChild: Int32Array;
   /** State at the start of a word: the context <s>. */
   start: number;
 }
 
-/**
- * An open-addressing hash table from (context, token) pairs to entries. A Map keyed by
- * context * tokens + token would need keys beyond the small-integer range, which makes every
- * look-up several times slower; this keeps look-ups to a multiply and a probe or two.
- */
-export class PairTable {
-  private readonly mask: number;
-  private readonly ctx: Int32Array;
-  private readonly tok: Int32Array;
-  private readonly val: Int32Array;
+const NEWLINE = 10;
+const BRACE = 123;
 
-  constructor(capacity: number) {
-    let size = 1024;
-    while (size < capacity * 2) size *= 2;
-    this.mask = size - 1;
-    this.ctx = new Int32Array(size);
-    this.tok = new Int32Array(size).fill(-1);
-    this.val = new Int32Array(size);
-  }
-
-  private slot(ctx: number, tok: number): number {
-    return (Math.imul(ctx + 1, 0x9e3779b1) ^ Math.imul(tok, 0x85ebca6b)) & this.mask;
-  }
-
-  set(ctx: number, tok: number, value: number): void {
-    let i = this.slot(ctx, tok);
-    while (this.tok[i] !== -1 && (this.tok[i] !== tok || this.ctx[i] !== ctx)) i = (i + 1) & this.mask;
-    this.ctx[i] = ctx;
-    this.tok[i] = tok;
-    this.val[i] = value;
-  }
-
-  /** The entry, or -1 when absent. */
-  get(ctx: number, tok: number): number {
-    let i = this.slot(ctx, tok);
-    for (;;) {
-      const t = this.tok[i];
-      if (t === -1) return -1;
-      if (t === tok && this.ctx[i] === ctx) return this.val[i];
-      i = (i + 1) & this.mask;
-    }
-  }
-}
-
-/** Parses a model file: its models in order (each starts with a JSON header line). */
-export function parseModels(text: string): G2pModel[] {
+/** Parses a model file's bytes (UTF-8): its models in order (each starts with a JSON header line). */
+export function parseModels(bytes: Uint8Array): G2pModel[] {
   const models: G2pModel[] = [];
   let start = 0;
-  while (start < text.length) {
-    const next = text.indexOf('\n{', start);
-    const end = next < 0 ? text.length : next + 1;
-    models.push(parseModel(text.slice(start, end)));
+  while (start < bytes.length) {
+    let end = start;
+    // The next model starts at a line that begins with '{'.
+    for (;;) {
+      end = bytes.indexOf(NEWLINE, end);
+      if (end < 0 || end + 1 >= bytes.length) {
+        end = bytes.length;
+        break;
+      }
+      end++;
+      if (bytes[end] === BRACE) break;
+    }
+    models.push(parseModel(bytes.subarray(start, end)));
     start = end;
   }
   return models;
 }
 
-/** Parses one model's text; throws on a malformed file (the caller reports it once). */
-export function parseModel(text: string): G2pModel {
-  const firstBreak = text.indexOf('\n');
-  const header = JSON.parse(text.slice(0, firstBreak)) as ModelHeader;
-  if (header.format !== 1) throw new Error(`pronunciation model format ${header.format} is not supported`);
+function readHeader(bytes: Uint8Array, end: number): ModelHeader {
+  const header = JSON.parse(new TextDecoder().decode(bytes.subarray(0, end))) as ModelHeader;
+  if (header.format !== 2) throw new Error(`pronunciation model format ${header.format} is not supported`);
+  if (!(header.scale > 0)) throw new Error('pronunciation model has no scale');
+  return header;
+}
+
+function readGraphones(header: ModelHeader): Pick<G2pModel, 'graphones' | 'byLetters' | 'maxLetters'> {
   const graphones: (Graphone | null)[] = [null];
-  const byLetters = new Map<string, number[]>();
+  const byLetters = new Map<string, { lo: number; hi: number }>();
+  let maxLetters = 1;
   header.graphones.forEach((key, i) => {
     const cut = key.indexOf('}');
     const phones = key.slice(cut + 1).split('_').filter(Boolean);
     const g = { letters: key.slice(0, cut), phones, text: phones.join(' '), bare: phones.map((p) => p.replace(/\d$/, '')) };
     graphones.push(g);
-    const list = byLetters.get(g.letters) ?? [];
-    list.push(i + 1);
-    byLetters.set(g.letters, list);
+    const range = byLetters.get(g.letters);
+    if (range === undefined) byLetters.set(g.letters, { lo: i + 1, hi: i + 2 });
+    else if (range.hi === i + 1) range.hi++;
+    else throw new Error(`pronunciation model: the graphones of '${g.letters}' are not consecutive`);
+    maxLetters = Math.max(maxLetters, g.letters.length);
   });
+  return { graphones, byLetters, maxLetters };
+}
+
+/** Parses one model's bytes; throws on a malformed file (the caller reports it once). */
+export function parseModel(bytes: Uint8Array): G2pModel {
+  const firstBreak = bytes.indexOf(NEWLINE);
+  if (firstBreak < 0) throw new Error('pronunciation model has no header line');
+  const header = readHeader(bytes, firstBreak);
+  const { graphones, byLetters, maxLetters } = readGraphones(header);
   const tokens = graphones.length;
-  const scale = header.scale;
-  if (!(scale > 0)) throw new Error('pronunciation model has no scale');
-  // A hand-written scan of the integer fields: splitting 400,000 lines into strings costs
-  // several times more, and this runs on the first estimate of a session.
   let n = 0;
-  for (let q = firstBreak + 1; q < text.length; q++) if (text.charCodeAt(q) === 10) n++;
-  const logp = new Float32Array(n);
-  const bow = new Float32Array(n);
+  for (let q = firstBreak + 1; q < bytes.length; q++) if (bytes[q] === NEWLINE) n++;
+  const tok = new Uint16Array(n);
+  const logp = new Int16Array(n);
+  const bow = new Int16Array(n);
   const backoff = new Int32Array(n);
   const next = new Int32Array(n);
-  const table = new PairTable(n);
+  const firstChild = new Int32Array(n + 1);
+  const m: G2pModel = { header, graphones, byLetters, tokens, maxLetters, scale: header.scale, tok, logp, bow, backoff, next, firstChild, start: -1 };
   const fields = [0, 0, 0, 0];
   let p = firstBreak + 1;
   let ctx = -1;
+  let filled = 0;
   for (let i = 0; i < n; i++) {
     let count = 0;
+    // A hand-written scan of the integer fields: no string is made for any line.
     while (count < 4) {
       let sign = 1;
-      if (text.charCodeAt(p) === 45) {
+      if (bytes[p] === 45) {
         sign = -1;
         p++;
       }
       let v = 0;
-      let c = text.charCodeAt(p);
-      if (c < 48 || c > 57) throw new Error(`pronunciation model line ${i + 2}: not a number`);
+      let c = bytes[p];
+      if (!(c >= 48 && c <= 57)) throw new Error(`pronunciation model line ${i + 2}: not a number`);
       while (c >= 48 && c <= 57) {
         v = v * 10 + c - 48;
-        c = text.charCodeAt(++p);
+        c = bytes[++p];
       }
       fields[count++] = sign * v;
       p++;
-      if (c === 10) break;
+      if (c === NEWLINE) break;
     }
     if (count < 3) throw new Error(`pronunciation model line ${i + 2}: too few fields`);
+    const last = ctx;
     ctx += fields[0];
     const w = fields[1];
-    logp[i] = fields[2] / scale;
-    const isContext = count > 3;
-    if (isContext) bow[i] = fields[3] / scale;
-    table.set(ctx, w, i);
-    if (ctx < 0) backoff[i] = -1;
-    else {
-      const b = table.get(backoff[ctx], w);
+    if (ctx < last || ctx >= i || w < 0 || w >= tokens) throw new Error(`pronunciation model line ${i + 2}: out of order`);
+    tok[i] = w;
+    logp[i] = fields[2];
+    if (count > 3) bow[i] = fields[3];
+    if (ctx < 0) {
+      // Unigrams: entry t is token t, for every token.
+      if (w !== i) throw new Error(`pronunciation model line ${i + 2}: unigram out of order`);
+      backoff[i] = -1;
+    } else {
+      while (filled <= ctx) firstChild[filled++] = i;
+      const b = backoff[ctx] < 0 ? w : find(m, backoff[ctx], w);
       if (b < 0) throw new Error(`pronunciation model line ${i + 2}: missing lower-order n-gram`);
       backoff[i] = b;
     }
-    next[i] = isContext ? i : backoff[i] < 0 ? -1 : next[backoff[i]];
+    next[i] = count > 3 ? i : backoff[i] < 0 ? -1 : next[backoff[i]];
   }
-  const start = table.get(-1, 0);
-  if (start < 0) throw new Error('pronunciation model has no word-start context');
-  return { header, graphones, byLetters, tokens, table, logp, bow, backoff, next, start };
+  while (filled <= n) firstChild[filled++] = n;
+  if (n < tokens || tok[tokens - 1] !== tokens - 1) throw new Error('pronunciation model lacks unigrams');
+  m.start = 0;
+  if (firstChild[1] === firstChild[0] && n > tokens) throw new Error('pronunciation model has no word-start context');
+  return m;
+}
+
+/** The entry extending context `s` by `token`, -1 when the model has none. */
+function find(m: G2pModel, s: number, token: number): number {
+  let a = m.firstChild[s];
+  let b = m.firstChild[s + 1];
+  while (a < b) {
+    const mid = (a + b) >>> 1;
+    const t = m.tok[mid];
+    if (t === token) return mid;
+    if (t < token) a = mid + 1;
+    else b = mid;
+  }
+  return -1;
 }
 
 /** The result of the last `step` (kept in one object so the hot loop allocates nothing). */
 export const stepResult = { cost: 0, state: -1 };
 
-/** log10 P(token | state) and the next state, into `stepResult`; cost -Infinity when unknown. */
+/** log10 P(token | state) x scale and the next state, into `stepResult`. */
 export function step(m: G2pModel, state: number, token: number): void {
-  let s = state;
   let cost = 0;
-  for (;;) {
-    const e = m.table.get(s, token);
+  for (let s = state; s >= 0; s = m.backoff[s]) {
+    const e = find(m, s, token);
     if (e >= 0) {
       stepResult.cost = cost + m.logp[e];
       stepResult.state = m.next[e];
       return;
     }
-    if (s < 0) {
-      stepResult.cost = -Infinity;
-      stepResult.state = -1;
-      return;
+    cost += m.bow[s];
+  }
+  stepResult.cost = cost + m.logp[token];
+  stepResult.state = m.next[token];
+}
+
+/** Costs (log10 x scale) and next states of tokens lo .. hi - 1 after `state`, from `expand`. */
+export const expansion = { cost: new Int32Array(64), state: new Int32Array(64) };
+let seen = new Int32Array(64);
+let seenStamp = 0;
+
+/**
+ * Scores every token lo .. hi - 1 (the graphones of one letter) after `state` into `expansion`
+ * (index token - lo). Walks the backoff chain once: at each context, the run of its successors
+ * with tokens in range is found by one binary search, and tokens not yet scored take its values.
+ */
+export function expand(m: G2pModel, state: number, lo: number, hi: number): void {
+  const width = hi - lo;
+  if (expansion.cost.length < width) {
+    expansion.cost = new Int32Array(width);
+    expansion.state = new Int32Array(width);
+  }
+  if (seen.length < width) seen = new Int32Array(width);
+  if (++seenStamp === 0x7fffffff) {
+    seen.fill(0);
+    seenStamp = 1;
+  }
+  const { cost: outCost, state: outState } = expansion;
+  const { tok, logp, next } = m;
+  let left = width;
+  let cost = 0;
+  for (let s = state; s >= 0 && left > 0; s = m.backoff[s]) {
+    let a = m.firstChild[s];
+    const end = m.firstChild[s + 1];
+    let b = end;
+    while (a < b) {
+      const mid = (a + b) >>> 1;
+      if (tok[mid] < lo) a = mid + 1;
+      else b = mid;
+    }
+    for (let e = a; e < end && tok[e] < hi; e++) {
+      const j = tok[e] - lo;
+      if (seen[j] === seenStamp) continue;
+      seen[j] = seenStamp;
+      outCost[j] = cost + logp[e];
+      outState[j] = next[e];
+      left--;
     }
     cost += m.bow[s];
-    s = m.backoff[s];
+  }
+  if (left === 0) return;
+  for (let j = 0; j < width; j++) {
+    if (seen[j] === seenStamp) continue;
+    outCost[j] = cost + logp[lo + j];
+    outState[j] = next[lo + j];
   }
 }
