@@ -7,7 +7,8 @@ export { makeModelAudio } from '../../server/src/speech/makeAudio';
 export { ESPEAK, findOnPath } from '../../server/src/speech/espeak';
 export { makePace } from '../../server/src/core/pace';
 // The pronunciation estimator and its comparison (tests/bench/pronounce.mjs).
-export { parseModels } from '../../server/src/core/g2p/model';
+export { parseModels, modelBytes } from '../../server/src/core/g2p/model';
+export { DECOMPRESS_CHUNK } from '../../server/src/data/pronounceModel';
 export { estimateCandidates } from '../../server/src/core/g2p/estimator';
 export { decode } from '../../server/src/core/g2p/decode';
 export { letterToSound } from '../../server/src/core/lts/letterToSound';

@@ -34,8 +34,12 @@ export function addLog(a: number, b: number): number {
 export const DEFAULT_BEAM = 40;
 /** log10 distance below the best hypothesis at a letter beyond which candidates are dropped. */
 const PRUNE = 4;
-// eslint-disable-next-line
-const EXPAND = Number((globalThis as any).process?.env?.EXPAND ?? 99);
+/**
+ * log10 distance below the best hypothesis at a letter beyond which a hypothesis is not
+ * expanded even when the beam has room: on the development words 3 gave the same answers as no
+ * limit (0.05 points more phones exact) in 15 % less time; 2 lost 0.8 points.
+ */
+const EXPAND = 3;
 let expandWithin = 0;
 
 /** Hypothesis store: parallel arrays, index = hypothesis; grown by doubling, kept between calls. */

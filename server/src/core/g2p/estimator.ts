@@ -21,11 +21,15 @@ export interface Estimator {
 
 /** Proposals taken from each model before rescoring, and the beam that finds them (measured on
  * the development words: a wider beam or more proposals changed no answer). */
-// eslint-disable-next-line
-const ENV = (globalThis as any).process?.env ?? {};
-const PROPOSALS = Number(ENV.PROPOSALS ?? 4);
-const BEAM = Number(ENV.BEAM ?? 16);
-const TEMPERATURE = Number(ENV.TEMP ?? 0);
+const PROPOSALS = 4;
+const BEAM = 16;
+/**
+ * Temperature of the syllable vote (syllableVote.ts). On the development words (models trained
+ * without them) the vote raised syllables exact from 96.90 % to 97.28 % and phones exact from
+ * 74.44 % to 74.52 %; temperatures 1, 2, 4 and 6 gave 97.14, 97.20, 97.31 and 97.28 % syllables
+ * with fewer phones right, 10 lost phones (74.14 %).
+ */
+const TEMPERATURE = 3;
 
 /**
  * Longest spelling the estimator decodes. The longest plain words of the dictionary have about
@@ -47,6 +51,8 @@ export function estimateCandidates(e: Estimator, word: string, k: number): Candi
   if (e.reverse === null) return decode(e.forward, word, k, BEAM);
   const drow = reversed([...word]).join('');
   const proposals = new Map<string, string[]>();
+  // One more from the left-to-right model, whatever `k`, so the first answer does not depend on
+  // how many alternatives the caller shows (a hover shows five).
   for (const c of decode(e.forward, word, Math.max(k, PROPOSALS + 1), BEAM)) proposals.set(c.phones.join(' '), c.phones);
   for (const c of decode(e.reverse, drow, PROPOSALS, BEAM)) {
     const phones = reversed(c.phones);
@@ -59,10 +65,8 @@ export function estimateCandidates(e: Estimator, word: string, k: number): Candi
   }
   const wellFormed = (phones: string[]): number => (phones.filter((p) => p.endsWith('1')).length === 1 ? 1 : 0);
   scored.sort((a, b) => wellFormed(b.phones) - wellFormed(a.phones) || b.log10 - a.log10);
-  if (TEMPERATURE > 0) {
-    const chosen = syllableVote(scored, TEMPERATURE);
-    if (chosen > 0) scored.unshift(...scored.splice(chosen, 1));
-  }
+  const chosen = syllableVote(scored, TEMPERATURE);
+  if (chosen > 0) scored.unshift(...scored.splice(chosen, 1));
   const top = scored.slice(0, k);
   const best = Math.max(...top.map((c) => c.log10));
   const total = top.reduce((t, c) => t + 10 ** (c.log10 - best), 0);

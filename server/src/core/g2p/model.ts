@@ -178,6 +178,11 @@ export function parseModel(bytes: Uint8Array): G2pModel {
   return m;
 }
 
+/** Bytes of a model's n-gram arrays (what it keeps in memory beyond its small graphone list). */
+export function modelBytes(m: G2pModel): number {
+  return [m.tok, m.logp, m.bow, m.backoff, m.next, m.firstChild].reduce((t, a) => t + a.byteLength, 0);
+}
+
 /** The entry extending context `s` by `token`, -1 when the model has none. */
 function find(m: G2pModel, s: number, token: number): number {
   let a = m.firstChild[s];
