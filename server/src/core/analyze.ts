@@ -17,6 +17,7 @@ import type {
   ItemNode,
   Override,
   Pace,
+  PaceTiming,
   RungAnalysis,
   RungNode,
   WordAnalysis,
@@ -98,6 +99,33 @@ function pronouncerKey(overrides: Override[], options: AnalysisOptions): string 
   return `${JSON.stringify(options.wcm)}|${o}`;
 }
 
+/**
+ * An item's timings depend only on its paces, word and syllable counts and the script's options,
+ * and a rung of hundreds of items has a few dozen such pairs: items that share one share one
+ * (read-only) timings array, which saves most of the objects an analysis would otherwise keep.
+ */
+export class TimingTable {
+  private readonly byCounts = new Map<number, PaceTiming[]>();
+
+  constructor(
+    private readonly paces: Pace[],
+    private readonly options: AnalysisOptions,
+  ) {}
+
+  at(words: number, syllables: number): PaceTiming[] {
+    const { baseline, readingNormWps } = this.options;
+    // Both counts are small integers; the pair fits one number key (no string per item).
+    if (syllables >= 0x100000) return this.paces.map((p) => timeAt(p, words, syllables, baseline, readingNormWps));
+    const key = words * 0x100000 + syllables;
+    let hit = this.byCounts.get(key);
+    if (hit === undefined) {
+      hit = this.paces.map((p) => timeAt(p, words, syllables, baseline, readingNormWps));
+      this.byCounts.set(key, hit);
+    }
+    return hit;
+  }
+}
+
 export function analyzeItem(
   node: ItemNode,
   rung: number,
@@ -105,6 +133,7 @@ export function analyzeItem(
   options: AnalysisOptions,
   pronouncer: Pronouncer,
   findings: Finding[],
+  timings: TimingTable = new TimingTable(paces, options),
 ): ItemAnalysis {
   const tokens = tokenize(node.text, node.textStart);
   const words: WordAnalysis[] = [];
@@ -172,7 +201,7 @@ export function analyzeItem(
     difficulty: composite(components, options.weights),
     components,
     rank: 0,
-    timings: paces.map((p) => timeAt(p, wordCount, syllables, options.baseline, options.readingNormWps)),
+    timings: timings.at(wordCount, syllables),
     sets: node.sets,
   };
 }
@@ -214,6 +243,7 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
   const paces = explicitPaces ? rungSettings.options.paces : options.paces;
   node.paces = explicitPaces ? paces : null;
   const pacesKey = paces.map((p) => p.label).join(',');
+  const timings = new TimingTable(paces, options);
   const rungItems = node.items.map((it) => {
     const itemKey = `${pacesKey}\u0001${it.textStart}\u0001${it.text}`;
     const hit = entries.get(itemKey) ?? previous?.get(itemKey);
@@ -223,7 +253,7 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
       return { ...hit.item, node: it, rung: index, rank: 0 };
     }
     const own: Finding[] = [];
-    const item = analyzeItem(it, index, paces, options, pronouncer, own);
+    const item = analyzeItem(it, index, paces, options, pronouncer, own, timings);
     entries.set(itemKey, { item, findings: own });
     pushAll(findings, own);
     return item;
