@@ -441,10 +441,52 @@ function scanOther(st: State, i: number, c: number): number {
 }
 
 /**
+ * The common case of `scanWord` without its general machinery: a run of ASCII letters that ends
+ * where nothing can join it to more (not a letter, mark, apostrophe, hyphen, period or variant
+ * mark) and is not an undotted abbreviation. Such a run is one word whose spoken form is its
+ * lower case, exactly what `scanWord` makes of it (tests/core/tokenize.property.test.ts checks
+ * the two agree on arbitrary text). Returns the end, or -1 to leave the word to `scanWord`.
+ */
+function scanPlainWord(st: State, i: number): number {
+  const { text } = st;
+  const n = text.length;
+  let j = i;
+  let upper = false;
+  let c = 0;
+  for (; j < n; j++) {
+    c = text.charCodeAt(j);
+    if (c >= 0x61 && c <= 0x7a) continue;
+    if (c >= 0x41 && c <= 0x5a) {
+      upper = true;
+      continue;
+    }
+    break;
+  }
+  if (j < n && (c >= 0x80 || c === 0x2e || c === 0x27 || c === 0x2d || c === 0x28)) return -1;
+  const surface = text.slice(i, j);
+  if (j - i <= MAX_BARE_LENGTH && BARE.has(surface)) return -1;
+  st.tokens.push({
+    surface,
+    start: i + st.offset,
+    end: j + st.offset,
+    kind: 'word',
+    words: [upper ? surface.toLowerCase() : surface],
+    variant: null,
+    breakAfter: false,
+  });
+  return j;
+}
+
+/**
  * Tokenises one item (a sentence or phrase). Offsets index `text` exactly as given, plus `offset`.
  * Never throws; unspeakable characters are skipped.
  */
 export function tokenize(text: string, offset = 0): Token[] {
+  return tokenizeWith(text, offset, true);
+}
+
+/** `tokenize`, with the plain-word fast path on or off (off only to test that both agree). */
+export function tokenizeWith(text: string, offset: number, fast: boolean): Token[] {
   const st: State = { text, offset, tokens: [], openQuote: false };
   const n = text.length;
   let i = 0;
@@ -452,7 +494,10 @@ export function tokenize(text: string, offset = 0): Token[] {
     const c = text.charCodeAt(i);
     if (c <= 0x20) i++;
     else if (c >= 0x30 && c <= 0x39) i = scanNumber(st, i, i, false, null);
-    else if (isLetterAt(text, i)) i = scanWord(st, i);
+    else if (fast && c < 0x80 && ((c >= 0x61 && c <= 0x7a) || (c >= 0x41 && c <= 0x5a))) {
+      const end = scanPlainWord(st, i);
+      i = end >= 0 ? end : scanWord(st, i);
+    } else if (isLetterAt(text, i)) i = scanWord(st, i);
     else i = scanOther(st, i, c);
   }
   // The period of an abbreviation ("etc.", "p.m.") is a break only when it ends the item.
