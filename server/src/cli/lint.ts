@@ -3,6 +3,7 @@
 // error or an unreadable file (every other file is still linted and reported).
 import { relative, sep } from 'node:path';
 import { checkAndFix, checkScript, mergeFileProblems, type CheckCache, type FileProblem } from '../check/checkScript';
+import { memoFs } from '../config/memoFs';
 import { loadWordTable } from '../data/wordTable';
 import { RULES } from '../rules/index';
 import { VERSION } from '../version';
@@ -92,6 +93,8 @@ export const lintCommand: Command = {
 
     const progress = Boolean(io.isTTY) && !env.CI && !quiet && files.length >= PROGRESS_MIN_FILES;
     const data = loadWordTable();
+    // Scripts of one folder share their config lookups: each file-system answer is fetched once.
+    const configFs = memoFs(io.fs);
     const results: LintFileResult[] = [];
     const fileProblems: FileProblem[][] = [];
     const diffs: string[] = [];
@@ -109,7 +112,7 @@ export const lintCommand: Command = {
         io.stderr(`${clear}rungs lint: ${name}:1:1: ${read.cut}\n`);
         code = EXIT_USAGE;
       }
-      const input = { text: read.text, path: read.path, fs: io.fs, data, cache: { pronouncer: lastPronouncer } };
+      const input = { text: read.text, path: read.path, fs: configFs, data, cache: { pronouncer: lastPronouncer } };
       let checked = fix || dryRun ? checkAndFix(input) : checkScript(input);
       lastPronouncer = checked.cache.pronouncer;
       fileProblems.push(checked.fileProblems);

@@ -28,12 +28,42 @@ function nodeKey(node: ItemNode): string {
 const keys = new Map<string, string>();
 const MAX_KEYS = 100_000;
 
-function spokenKey(text: string): string {
+/** The spoken words of an item's text: lower case, and every run of other characters one space. */
+export function spokenKey(text: string): string {
+  return plainSpokenKey(text) ?? generalSpokenKey(text);
+}
+
+export function generalSpokenKey(text: string): string {
   return text
     .toLowerCase()
     .replace(/[’‘ʼ]/g, "'")
     .replace(/[^\p{L}\p{N}'()]+/gu, ' ')
     .trim();
+}
+
+/** ASCII letters, digits, ' ( and ): what the general key keeps of ASCII text. */
+function kept(c: number): boolean {
+  return (c >= 0x61 && c <= 0x7a) || (c >= 0x41 && c <= 0x5a) || (c >= 0x30 && c <= 0x39) || c === 0x27 || c === 0x28 || c === 0x29;
+}
+
+/**
+ * The key of the usual item without a regular expression: ASCII words separated by single spaces,
+ * with any punctuation only at the end ("My sister bought the bread."). Its key is its lower-case
+ * text up to the last kept character. Anything else (null) takes the general key;
+ * tests/rules/duplicateKey.property.test.ts checks the two agree on arbitrary text.
+ */
+function plainSpokenKey(text: string): string | null {
+  const n = text.length;
+  let end = 0;
+  for (let i = 0; i < n; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 0x80) return null;
+    if (!kept(c)) continue;
+    // Between two kept characters only one space may stand; nothing may stand before the first.
+    if (i !== end && (end === 0 || i !== end + 1 || text.charCodeAt(end) !== 0x20)) return null;
+    end = i + 1;
+  }
+  return text.slice(0, end).toLowerCase();
 }
 
 export const duplicateItem: Rule = {

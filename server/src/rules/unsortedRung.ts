@@ -24,9 +24,13 @@ export function sortRungEdit(ctx: Pick<RuleContext, 'analysis' | 'lines' | 'text
   // Each block moves with the line breaks inside it; what lies between blocks (the break after a
   // block, blank and setting lines) stays where it is, byte for byte. So no line is lost or merged
   // in a file with CR, LF and CRLF breaks mixed (a CR moved before an empty LF line would merge).
-  const breaks = lineBreaks(ctx.text);
-  const starts: number[] = [0];
-  for (let l = 0; l + 1 < lines.length; l++) starts.push(starts[l] + lines[l].length + breaks[l].length);
+  // Where each line starts in the text: the same for every rung of the analysis, so worked out once.
+  const starts = memo(ctx, 'lineStarts', () => {
+    const breaks = lineBreaks(ctx.text);
+    const at: number[] = [0];
+    for (let l = 0; l + 1 < lines.length; l++) at.push(at[l] + lines[l].length + breaks[l].length);
+    return at;
+  });
   const endOf = (l: number) => starts[l] + lines[l].length;
   const text = ctx.text;
   const parts: string[] = [];
