@@ -54,14 +54,18 @@ export interface AnalyzeOutput extends Analysis {
 }
 
 export interface CachedItem {
+  /** The paces (labels joined) and text column the item was scored with: a hit needs both equal. */
+  paces: string;
+  textStart: number;
   item: ItemAnalysis;
   /** Findings while scoring the item (their line is rewritten on reuse). */
-  findings: Finding[];
+  findings: readonly Finding[];
 }
 
 export interface ItemCache {
-  /** Everything besides an item's own text that its analysis depends on. */
+  /** Everything besides an item's own text, paces and column that its analysis depends on. */
   context: string;
+  /** By item text (the string the parse made: no key is built per item). */
   entries: Map<string, CachedItem>;
 }
 
@@ -136,7 +140,11 @@ export function analyzeItem(
   timings: TimingTable = new TimingTable(paces, options),
 ): ItemAnalysis {
   const tokens = tokenize(node.text, node.textStart);
-  const words: WordAnalysis[] = [];
+  // Sized exactly: an array grown by push keeps room for 17 words, and every item keeps its array.
+  let total = 0;
+  for (const t of tokens) total += t.words.length;
+  const words: WordAnalysis[] = new Array(total);
+  let w = 0;
   const parts = emptyWcmParts();
   let syllables = 0;
   let phonemes = 0;
@@ -157,7 +165,7 @@ export function analyzeItem(
       if (s.variantError && variant !== null) {
         findings.push(finding({ line: node.line, character: t.start, endLine: node.line, endCharacter: t.end }, { kind: 'variant-mark-not-listed', explanation: s.variantError }));
       }
-      words.push(new PlacedWord(t.surface, t.start, t.end, spoken, s));
+      words[w++] = new PlacedWord(t.surface, t.start, t.end, spoken, s);
       syllables += s.syllables;
       phonemes += s.phonemes;
       wcm += s.wcm.total;
@@ -218,6 +226,14 @@ function rankItems(items: ItemAnalysis[]): void {
   });
 }
 
+/** A cached item, when it was scored at the same paces and column (else it is scored again). */
+function usable(hit: CachedItem | undefined, paces: string, textStart: number): CachedItem | undefined {
+  return hit !== undefined && hit.textStart === textStart && hit.paces === paces ? hit : undefined;
+}
+
+/** The findings of the many items that have none (shared; never added to). */
+const NO_FINDINGS: readonly Finding[] = Object.freeze([]);
+
 /** What every rung of one analysis shares. */
 export interface RungContext {
   options: AnalysisOptions;
@@ -245,17 +261,16 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
   const pacesKey = paces.map((p) => p.label).join(',');
   const timings = new TimingTable(paces, options);
   const rungItems = node.items.map((it) => {
-    const itemKey = `${pacesKey}\u0001${it.textStart}\u0001${it.text}`;
-    const hit = entries.get(itemKey) ?? previous?.get(itemKey);
+    const hit = usable(entries.get(it.text), pacesKey, it.textStart) ?? usable(previous?.get(it.text), pacesKey, it.textStart);
     if (hit) {
-      entries.set(itemKey, hit);
+      entries.set(it.text, hit);
       for (const f of hit.findings) findings.push({ ...f, line: it.line, endLine: it.line });
       return { ...hit.item, node: it, rung: index, rank: 0 };
     }
-    const own: Finding[] = [];
-    const item = analyzeItem(it, index, paces, options, pronouncer, own, timings);
-    entries.set(itemKey, { item, findings: own });
-    pushAll(findings, own);
+    // The item's findings go straight to the rung's; the cache keeps its own copy only when it has any.
+    const before = findings.length;
+    const item = analyzeItem(it, index, paces, options, pronouncer, findings, timings);
+    entries.set(it.text, { paces: pacesKey, textStart: it.textStart, item, findings: findings.length > before ? findings.slice(before) : NO_FINDINGS });
     return item;
   });
   const inherited = node.sets.length ? node.sets : scriptSets;
