@@ -98,6 +98,27 @@ class PlacedWord implements WordAnalysis {
   }
 }
 
+/**
+ * Placed words shared by the items of one analysis. A word is the same object wherever it stands
+ * at the same column with the same spelling and score: a library's items often begin alike ("I
+ * want ...", "The nurse ..."), and every object an analysis keeps costs the collector time, so
+ * sharing them is much of what keeps analysis of a large script near the cost of its look-ups.
+ * Placed words are read-only, so sharing one is safe.
+ */
+export class PlacedWords {
+  private readonly byScore = new Map<WordScore, (PlacedWord | undefined)[]>();
+
+  get(surface: string, start: number, end: number, spoken: string, score: WordScore): PlacedWord {
+    let at = this.byScore.get(score);
+    if (at === undefined) this.byScore.set(score, (at = []));
+    const hit = at[start];
+    if (hit !== undefined && hit.end === end && hit.surface === surface && hit.spoken === spoken) return hit;
+    const w = new PlacedWord(surface, start, end, spoken, score);
+    at[start] = w;
+    return w;
+  }
+}
+
 function pronouncerKey(overrides: Override[], options: AnalysisOptions): string {
   const o = overrides.map((x) => `${x.word}=${x.phones.join(' ')}/${x.variant ?? ''}`).join(';');
   return `${JSON.stringify(options.wcm)}|${o}`;
@@ -138,6 +159,7 @@ export function analyzeItem(
   pronouncer: Pronouncer,
   findings: Finding[],
   timings: TimingTable = new TimingTable(paces, options),
+  placed: PlacedWords = new PlacedWords(),
 ): ItemAnalysis {
   const tokens = tokenize(node.text, node.textStart);
   // Sized exactly: an array grown by push keeps room for 17 words, and every item keeps its array.
@@ -165,7 +187,7 @@ export function analyzeItem(
       if (s.variantError && variant !== null) {
         findings.push(finding({ line: node.line, character: t.start, endLine: node.line, endCharacter: t.end }, { kind: 'variant-mark-not-listed', explanation: s.variantError }));
       }
-      words[w++] = new PlacedWord(t.surface, t.start, t.end, spoken, s);
+      words[w++] = placed.get(t.surface, t.start, t.end, spoken, s);
       syllables += s.syllables;
       phonemes += s.phonemes;
       wcm += s.wcm.total;
@@ -244,6 +266,8 @@ export interface RungContext {
   previous: Map<string, CachedItem> | undefined;
   /** Item analyses of this run, filled as items are scored. */
   entries: Map<string, CachedItem>;
+  /** Placed words shared by the items of this run (absent: shared within the rung). */
+  placed?: PlacedWords;
 }
 
 /**
@@ -260,6 +284,7 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
   node.paces = explicitPaces ? paces : null;
   const pacesKey = paces.map((p) => p.label).join(',');
   const timings = new TimingTable(paces, options);
+  const placed = shared.placed ?? new PlacedWords();
   const rungItems = node.items.map((it) => {
     const hit = usable(entries.get(it.text), pacesKey, it.textStart) ?? usable(previous?.get(it.text), pacesKey, it.textStart);
     if (hit) {
@@ -269,7 +294,7 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
     }
     // The item's findings go straight to the rung's; the cache keeps its own copy only when it has any.
     const before = findings.length;
-    const item = analyzeItem(it, index, paces, options, pronouncer, findings, timings);
+    const item = analyzeItem(it, index, paces, options, pronouncer, findings, timings, placed);
     entries.set(it.text, { paces: pacesKey, textStart: it.textStart, item, findings: findings.length > before ? findings.slice(before) : NO_FINDINGS });
     return item;
   });
@@ -320,7 +345,7 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
   const scriptSets = script.header.filter((h) => h.key === 'set' || h.key === 'sets').flatMap((h) => splitLabels(h.value));
   const rungs: RungAnalysis[] = [];
   const items: ItemAnalysis[] = [];
-  const shared: RungContext = { options, scriptSets, pronouncer, previous, entries };
+  const shared: RungContext = { options, scriptSets, pronouncer, previous, entries, placed: new PlacedWords() };
   script.rungs.forEach((node, index) => {
     const rung = analyzeRung(node, index, shared, findings);
     rungs.push(rung);
