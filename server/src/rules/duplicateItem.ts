@@ -1,34 +1,16 @@
 // duplicate-item: the same sentence written twice in one script.
-import type { ItemAnalysis, ItemNode } from '../core/types';
+import type { ItemAnalysis } from '../core/types';
 import type { Rule } from './types';
 import { itemRange, rungLabel } from './shared';
 import { excerpt } from '../core/excerpt';
 
-/** Two items are the same when their spoken words match, ignoring case, punctuation and spacing. */
-export function itemKey(text: string): string {
-  let key = keys.get(text);
-  if (key === undefined) {
-    // Bounded: a long editing session must not grow it without end.
-    if (keys.size >= MAX_KEYS) keys.clear();
-    keys.set(text, (key = spokenKey(text)));
-  }
-  return key;
-}
-
-/** Keys by parsed item: rungs an edit did not touch keep their nodes, so their keys are found by identity. */
-const byNode = new WeakMap<ItemNode, string>();
-
-function nodeKey(node: ItemNode): string {
-  let key = byNode.get(node);
-  if (key === undefined) byNode.set(node, (key = itemKey(node.text)));
-  return key;
-}
-
-/** Keys by item text, kept between runs: an edit changes one item, the rest are looked up. */
-const keys = new Map<string, string>();
-const MAX_KEYS = 100_000;
-
-/** The spoken words of an item's text: lower case, and every run of other characters one space. */
+/**
+ * Two items are the same when their spoken words match, ignoring case, punctuation and spacing:
+ * the key is the text in lower case with every run of other characters one space. Worked out
+ * afresh on every run: for the usual plain item that is one scan and one lower-casing, cheaper
+ * than remembering keys by item or text across runs (filling a cache of 10,000 keys on a fresh
+ * analysis costs more than the keys themselves).
+ */
 export function spokenKey(text: string): string {
   return plainSpokenKey(text) ?? generalSpokenKey(text);
 }
@@ -83,7 +65,7 @@ export const duplicateItem: Rule = {
   check(ctx, report) {
     const seen = new Map<string, ItemAnalysis>();
     for (const it of ctx.analysis.items) {
-      const key = nodeKey(it.node);
+      const key = spokenKey(it.node.text);
       if (!key) continue;
       const first = seen.get(key);
       if (!first) {
