@@ -352,8 +352,19 @@ export function settingText(v: unknown): string | null {
   return null;
 }
 
-/** The built-in options: every setting's default, read by its own reader. */
+/**
+ * The built-in options: every setting's default, read by its own reader. Read once; each caller
+ * gets its own copy (callers adjust their options), which is cheaper than reading the table again
+ * for every script of a library.
+ */
 export function defaultOptions(): AnalysisOptions {
+  defaults ??= readDefaults();
+  return structuredClone(defaults);
+}
+
+let defaults: AnalysisOptions | undefined;
+
+function readDefaults(): AnalysisOptions {
   const o = { baseline: null, wcm: {}, weights: {}, records: {}, timing: {} } as unknown as AnalysisOptions;
   for (const s of SETTINGS) {
     const text = settingText(s.default);
