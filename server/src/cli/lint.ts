@@ -18,6 +18,7 @@ import { formatLintJson } from './formats/json';
 import { formatSarif } from './formats/sarif';
 import { formatLintText } from './formats/text';
 import type { LintFileResult, LintRun } from './formats/types';
+import type { Problem } from '../core/types';
 import { EXIT_OK, EXIT_PROBLEMS, EXIT_USAGE, UsageError, type CliIO } from './io';
 import type { Command } from './main';
 
@@ -46,6 +47,13 @@ const USAGE = [
  * spelling once instead of once per file. Only the word scores: items are never shared by files.
  */
 let lastPronouncer: CheckCache['pronouncer'];
+
+/**
+ * A problem that no longer holds its script's analysis: a fix whose edits are worked out when
+ * first read (sorting a rung) keeps the whole analysis alive until then, and a run over a library
+ * would keep every script's analysis until the report is written.
+ */
+const detached = (p: Problem): Problem => (p.fix ? { ...p, fix: { ...p.fix } } : p);
 
 const shown = (cwd: string, file: string) => (file === '-' ? '<stdin>' : relative(cwd, file).split(sep).join('/') || file);
 
@@ -127,7 +135,7 @@ export const lintCommand: Command = {
           }
         } else diffs.push(unifiedDiff(name, read.text, checked.text));
       }
-      results.push({ file: name, problems: checked.problems });
+      results.push({ file: name, problems: checked.problems.map(detached) });
     });
     if (progress) io.stderr('\r\u001b[K');
     for (const [file, ps] of mergeFileProblems(fileProblems)) results.push({ file: shown(io.cwd, file), problems: ps });
