@@ -77,6 +77,16 @@ export function eolOf(ctx: Pick<RuleContext, 'analysis' | 'text'>): string {
   return memo(ctx, 'eol', () => lineEnding(ctx.text));
 }
 
+/**
+ * A value to one decimal, as messages show it. Counts and the composite difficulty (already rounded
+ * to one decimal) are returned as they are: Number(x.toFixed(1)) gives them back unchanged, and
+ * formatting every item of a large library to a string and back costs more than the rules.
+ */
+export function oneDecimal(x: number): number {
+  if (x === 0) return 0; // -0 formats as "0.0"
+  return Number.isInteger(x) || x === Math.round(x * 10) / 10 ? x : Number(x.toFixed(1));
+}
+
 const valuesByRung = new WeakMap<RungAnalysis, Map<LadderMetric, number[]>>();
 
 /**
@@ -87,7 +97,7 @@ export function rungValues(rung: RungAnalysis, metric: LadderMetric): number[] {
   let m = valuesByRung.get(rung);
   if (!m) valuesByRung.set(rung, (m = new Map()));
   let v = m.get(metric);
-  if (!v) m.set(metric, (v = rung.items.map((i) => Number(metricOf(i, metric).toFixed(1)))));
+  if (!v) m.set(metric, (v = rung.items.map((i) => oneDecimal(metricOf(i, metric)))));
   return v;
 }
 
