@@ -15,7 +15,7 @@ const FRAGMENTS = [
   'vs', 'Vs', 'VS', 'vs.', 'etc', 'etc.', 'St', 'st', 'Mrs', 'Ms', 'Prof', 'prof', 'Blvd', 'am', 'pm', 'a.m.', 'p.m.', 'U.K.', 'J.',
   'Smith', 'goin', "goin'", 'well', 'read', 'record(2)', 'x', 'X', 'caf\u00e9', 'e\u0301', '\u00fcber', '\u03b1\u03b2', '\u4e2d',
   '3', '10', '3:30', '1st', '2nd', '1,000', '5', '$5', '50%', "'90s", "'n", "'til", 'rock', 'roll', 'COVID', '19', 'okafor',
-  'x\u00ad', '\u200d', 'o\u2019clock',
+  'x\u00ad', '\u200d', 'o\u2019clock', 'J. Smith', 'John F. Kennedy', 'e.g.', 'I.', ' A', '. ',
 ];
 
 const fragmentText = fc.array(fc.constantFrom(...FRAGMENTS), { maxLength: 24 }).map((xs) => xs.join(''));

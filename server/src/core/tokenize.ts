@@ -442,8 +442,8 @@ function scanOther(st: State, i: number, c: number): number {
 
 /**
  * The common case of `scanWord` without its general machinery: a run of ASCII letters that ends
- * where nothing can join it to more (not a letter, mark, apostrophe, hyphen, period or variant
- * mark) and is not an undotted abbreviation. Such a run is one word whose spoken form is its
+ * where nothing can join it to more (not a letter, mark, apostrophe, hyphen or variant mark, nor a
+ * period that makes it an abbreviation or an initial) and is not an undotted abbreviation. Such a run is one word whose spoken form is its
  * lower case, exactly what `scanWord` makes of it (tests/core/tokenize.property.test.ts checks
  * the two agree on arbitrary text). Returns the end, or -1 to leave the word to `scanWord`.
  */
@@ -462,15 +462,22 @@ function scanPlainWord(st: State, i: number): number {
     }
     break;
   }
-  if (j < n && (c >= 0x80 || c === 0x2e || c === 0x27 || c === 0x2d || c === 0x28)) return -1;
+  if (j < n && (c >= 0x80 || c === 0x27 || c === 0x2d || c === 0x28)) return -1;
   const surface = text.slice(i, j);
-  if (j - i <= MAX_BARE_LENGTH && BARE.has(surface)) return -1;
+  const spoken = upper ? surface.toLowerCase() : surface;
+  if (j < n && c === 0x2e) {
+    // A period after the word (most often the item's last): a word unless the letters go on
+    // ("e.g."), it is a listed abbreviation ("etc.", "Dr.") or a capital initial ("J. Smith").
+    const after = codeAt(text, j + 1);
+    if ((after >= 0x41 && after <= 0x5a) || (after >= 0x61 && after <= 0x7a)) return -1;
+    if ((j - i === 1 && upper) || ABBREVIATIONS.has(`${spoken}.`)) return -1;
+  } else if (j - i <= MAX_BARE_LENGTH && BARE.has(surface)) return -1;
   st.tokens.push({
     surface,
     start: i + st.offset,
     end: j + st.offset,
     kind: 'word',
-    words: [upper ? surface.toLowerCase() : surface],
+    words: [spoken],
     variant: null,
     breakAfter: false,
   });
