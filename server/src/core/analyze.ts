@@ -236,8 +236,27 @@ export function analyzeItem(
   };
 }
 
-/** Ranks items 1..n by difficulty within a rung (ties share the lower rank, in line order). */
-function rankItems(items: ItemAnalysis[]): void {
+/**
+ * Ranks items 1..n by difficulty within a rung (ties share the lower rank, in line order): an
+ * item's rank is one more than the number of items easier than it, found in the rung's
+ * difficulties sorted once (the same sorted list gives the median, minimum and maximum).
+ */
+export function rankSorted(items: ItemAnalysis[], sorted: Float64Array): void {
+  for (const it of items) {
+    const d = it.difficulty;
+    let lo = 0;
+    let hi = sorted.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (sorted[mid] < d) lo = mid + 1;
+      else hi = mid;
+    }
+    it.rank = lo + 1;
+  }
+}
+
+/** The general ranking, for a rung with a difficulty that is not a number (no order to search). */
+export function rankItems(items: ItemAnalysis[]): void {
   const sorted = [...items].sort((a, b) => a.difficulty - b.difficulty || a.node.line - b.node.line);
   let rank = 0;
   let last = NaN;
@@ -300,16 +319,20 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
   });
   const inherited = node.sets.length ? node.sets : scriptSets;
   for (const it of rungItems) it.sets = it.node.sets.length ? it.node.sets : inherited;
-  rankItems(rungItems);
   const ds = rungItems.map((i) => i.difficulty);
+  const sorted = Float64Array.from(ds).sort();
+  const n = sorted.length;
+  const ordered = n === 0 || !Number.isNaN(sorted[n - 1]);
+  if (ordered) rankSorted(rungItems, sorted);
+  else rankItems(rungItems);
   return {
     node,
     index,
     paces,
     items: rungItems,
-    median: median(ds),
-    min: ds.reduce((m, d) => Math.min(m, d), ds.length ? Infinity : 0),
-    max: ds.reduce((m, d) => Math.max(m, d), ds.length ? -Infinity : 0),
+    median: ordered ? (n === 0 ? 0 : n % 2 ? sorted[n >> 1] : (sorted[(n >> 1) - 1] + sorted[n >> 1]) / 2) : median(ds),
+    min: ordered ? (n ? sorted[0] : 0) : ds.reduce((m, d) => Math.min(m, d), n ? Infinity : 0),
+    max: ordered ? (n ? sorted[n - 1] : 0) : ds.reduce((m, d) => Math.max(m, d), n ? -Infinity : 0),
     totalSeconds: paces.map((_, pi) => rungItems.reduce((sum, it) => sum + it.timings[pi].seconds, 0)),
   };
 }
