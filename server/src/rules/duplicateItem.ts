@@ -3,49 +3,13 @@ import type { ItemAnalysis } from '../core/types';
 import type { Rule } from './types';
 import { itemRange, rungLabel } from './shared';
 import { excerpt } from '../core/excerpt';
+import { keyHash, spokenKey } from './itemKey';
 
-/**
- * Two items are the same when their spoken words match, ignoring case, punctuation and spacing:
- * the key is the text in lower case with every run of other characters one space. Worked out
- * afresh on every run: for the usual plain item that is one scan and one lower-casing, cheaper
- * than remembering keys by item or text across runs (filling a cache of 10,000 keys on a fresh
- * analysis costs more than the keys themselves).
- */
-export function spokenKey(text: string): string {
-  return plainSpokenKey(text) ?? generalSpokenKey(text);
-}
-
-export function generalSpokenKey(text: string): string {
-  return text
-    .toLowerCase()
-    .replace(/[’‘ʼ]/g, "'")
-    .replace(/[^\p{L}\p{N}'()]+/gu, ' ')
-    .trim();
-}
-
-/** ASCII letters, digits, ' ( and ): what the general key keeps of ASCII text. */
-function kept(c: number): boolean {
-  return (c >= 0x61 && c <= 0x7a) || (c >= 0x41 && c <= 0x5a) || (c >= 0x30 && c <= 0x39) || c === 0x27 || c === 0x28 || c === 0x29;
-}
-
-/**
- * The key of the usual item without a regular expression: ASCII words separated by single spaces,
- * with any punctuation only at the end ("My sister bought the bread."). Its key is its lower-case
- * text up to the last kept character. Anything else (null) takes the general key;
- * tests/rules/duplicateKey.property.test.ts checks the two agree on arbitrary text.
- */
-function plainSpokenKey(text: string): string | null {
-  const n = text.length;
-  let end = 0;
-  for (let i = 0; i < n; i++) {
-    const c = text.charCodeAt(i);
-    if (c >= 0x80) return null;
-    if (!kept(c)) continue;
-    // Between two kept characters only one space may stand; nothing may stand before the first.
-    if (i !== end && (end === 0 || i !== end + 1 || text.charCodeAt(end) !== 0x20)) return null;
-    end = i + 1;
-  }
-  return text.slice(0, end).toLowerCase();
+/** The first earlier item with the same key as `text`, among the first items whose numbers met. */
+function sameKey(firsts: ItemAnalysis | ItemAnalysis[], text: string): ItemAnalysis | undefined {
+  const key = spokenKey(text);
+  if (!Array.isArray(firsts)) return spokenKey(firsts.node.text) === key ? firsts : undefined;
+  return firsts.find((f) => spokenKey(f.node.text) === key);
 }
 
 export const duplicateItem: Rule = {
@@ -63,13 +27,17 @@ export const duplicateItem: Rule = {
     'item). When it is, allow it with a `// rungs: allow duplicate-item` line above it.',
   ].join(' '),
   check(ctx, report) {
-    const seen = new Map<string, ItemAnalysis>();
+    // First items by key number: one item, or a list once different keys share a number.
+    const seen = new Map<number, ItemAnalysis | ItemAnalysis[]>();
     for (const it of ctx.analysis.items) {
-      const key = spokenKey(it.node.text);
-      if (!key) continue;
-      const first = seen.get(key);
+      const h = keyHash(it.node.text);
+      if (h < 0) continue;
+      const firsts = seen.get(h);
+      const first = firsts === undefined ? undefined : sameKey(firsts, it.node.text);
       if (!first) {
-        seen.set(key, it);
+        if (firsts === undefined) seen.set(h, it);
+        else if (Array.isArray(firsts)) firsts.push(it);
+        else seen.set(h, [firsts, it]);
         continue;
       }
       const firstRung = ctx.analysis.rungs[first.rung];

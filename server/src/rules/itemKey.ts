@@ -1,0 +1,84 @@
+// The key duplicate-item compares items by, and a quick path for the usual plain item. Kept apart
+// from the rule so the rule file stays its metadata and check.
+
+/**
+ * Two items are the same when their spoken words match, ignoring case, punctuation and spacing:
+ * the key is the text in lower case with every run of other characters one space. Worked out
+ * afresh on every run: for the usual plain item that is one scan and one lower-casing, cheaper
+ * than remembering keys by item or text across runs (filling a cache of 10,000 keys on a fresh
+ * analysis costs more than the keys themselves).
+ */
+export function spokenKey(text: string): string {
+  return plainSpokenKey(text) ?? generalSpokenKey(text);
+}
+
+export function generalSpokenKey(text: string): string {
+  return text
+    .toLowerCase()
+    .replace(/[’‘ʼ]/g, "'")
+    .replace(/[^\p{L}\p{N}'()]+/gu, ' ')
+    .trim();
+}
+
+/** ASCII letters, digits, ' ( and ): what the general key keeps of ASCII text. */
+function kept(c: number): boolean {
+  return (c >= 0x61 && c <= 0x7a) || (c >= 0x41 && c <= 0x5a) || (c >= 0x30 && c <= 0x39) || c === 0x27 || c === 0x28 || c === 0x29;
+}
+
+/**
+ * The key of the usual item without a regular expression: ASCII words separated by single spaces,
+ * with any punctuation only at the end ("My sister bought the bread."). Its key is its lower-case
+ * text up to the last kept character, whose length this returns; -1 for anything else, which
+ * takes the general key. tests/rules/duplicateKey.property.test.ts checks the two agree.
+ */
+function plainKeyEnd(text: string): number {
+  const n = text.length;
+  let end = 0;
+  for (let i = 0; i < n; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 0x80) return -1;
+    if (!kept(c)) continue;
+    // Between two kept characters only one space may stand; nothing may stand before the first.
+    if (i !== end && (end === 0 || i !== end + 1 || text.charCodeAt(end) !== 0x20)) return -1;
+    end = i + 1;
+  }
+  return end;
+}
+
+function plainSpokenKey(text: string): string | null {
+  const end = plainKeyEnd(text);
+  return end < 0 ? null : text.slice(0, end).toLowerCase();
+}
+
+/**
+ * A small number equal keys share (FNV-1a over the key's characters), or -1 for an empty key.
+ * For a plain item it is found without building the key, so a script of 10,000 different items
+ * builds no key at all; items whose numbers meet are compared by their keys.
+ */
+export function keyHash(text: string): number {
+  // One pass over a plain item: the key's characters are its kept characters, lower-cased, with
+  // the single space of each gap between them (the same checks as plainKeyEnd).
+  let h = 0x811c9dc5;
+  let end = 0;
+  const n = text.length;
+  for (let i = 0; i < n; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 0x80) return generalKeyHash(text);
+    if (!kept(c)) continue;
+    if (i !== end) {
+      if (end === 0 || i !== end + 1 || text.charCodeAt(end) !== 0x20) return generalKeyHash(text);
+      h = Math.imul(h ^ 0x20, 0x01000193);
+    }
+    h = Math.imul(h ^ (c >= 0x41 && c <= 0x5a ? c + 0x20 : c), 0x01000193);
+    end = i + 1;
+  }
+  return end === 0 ? -1 : h & 0x3fffffff;
+}
+
+function generalKeyHash(text: string): number {
+  const key = generalSpokenKey(text);
+  if (key === '') return -1;
+  let h = 0x811c9dc5;
+  for (let i = 0; i < key.length; i++) h = Math.imul(h ^ key.charCodeAt(i), 0x01000193);
+  return h & 0x3fffffff;
+}
