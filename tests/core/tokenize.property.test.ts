@@ -7,6 +7,7 @@
 // stimulus scripts use).
 import { fc, test } from '@fast-check/vitest';
 import { expect } from 'vitest';
+import { plainItemWords } from '../../server/src/core/plainWords';
 import { tokenize, tokenizeWith } from '../../server/src/core/tokenize';
 
 const FRAGMENTS = [
@@ -27,4 +28,23 @@ test.prop([anyText, fc.nat(200)], { numRuns: 3000 })('the plain-word fast path a
 
 test.prop([fragmentText])('tokenize is the fast path', (text) => {
   expect(tokenize(text, 3)).toEqual(tokenizeWith(text, 3, true));
+});
+
+// A plain item's words (read without tokens by the analysis) are exactly its tokens: one word
+// token per plain word, its lower case, no variant mark, the same offsets.
+test.prop([anyText], { numRuns: 3000 })('a plain item reads as the tokens say', (text) => {
+  const plain = plainItemWords(text);
+  if (plain === null) return;
+  const tokens = tokenizeWith(text, 0, false);
+  expect(plain.map((w) => [w.end - w.surface.length, w.end, w.surface, [w.spoken], null, 'word'])).toEqual(
+    tokens.map((t) => [t.start, t.end, t.surface, t.words, t.variant, t.kind]),
+  );
+});
+
+test('the usual item is plain, and items with numbers, marks or abbreviations are not', () => {
+  // Computed by reading the tokenizer's rules: these take the general path.
+  expect(plainItemWords('My sister bought the bread.')?.map((w) => w.spoken)).toEqual(['my', 'sister', 'bought', 'the', 'bread']);
+  for (const text of ['at 3:30', 'with Dr. Patel', "don't", 'read(2)', 'cats & dogs', 'well-read', 'caf\u00e9', 'Mr Smith', 'J. Smith']) {
+    expect(plainItemWords(text)).toBeNull();
+  }
 });

@@ -1,15 +1,15 @@
 // The analysis core: text and options in, plain data out. No files, no protocol, no process:
 // the CLI, the language server and the tests all call `analyze` the same way.
-import { isEstimated } from './pronounce';
 import { finding, type Finding } from './findings';
 import { composite, difficultyComponents, median } from './difficulty';
-import { LOW_FREQUENCY_ZIPF } from './frequency';
 import { applySettings, defaultOptions } from './options';
 import { scoringKey } from './settings';
 import { timeAt } from './pace';
 import { parseScript, splitLabels } from './parse';
 import { Pronouncer, type WordScore } from './pronounce';
 import { tokenize } from './tokenize';
+import { plainItemWords } from './plainWords';
+import { ItemTotals } from './itemTotals';
 import type {
   Analysis,
   AnalysisOptions,
@@ -23,7 +23,6 @@ import type {
   WordAnalysis,
   WordData,
 } from './types';
-import { addWcmParts, emptyWcmParts } from './wcm';
 import { pushAll } from './arrays';
 
 export interface AnalyzeInput {
@@ -151,31 +150,33 @@ export class TimingTable {
   }
 }
 
-export function analyzeItem(
-  node: ItemNode,
-  rung: number,
-  paces: Pace[],
-  options: AnalysisOptions,
-  pronouncer: Pronouncer,
-  findings: Finding[],
-  timings: TimingTable = new TimingTable(paces, options),
-  placed: PlacedWords = new PlacedWords(),
-): ItemAnalysis {
+/**
+ * The words of a plain item (plainWords.ts: ASCII words and skipped punctuation only), scored
+ * without building tokens; null for any other item. Each plain word is one spoken word, its
+ * lower case, with no variant mark: what the tokens give (a property test checks they agree).
+ */
+function plainItemScores(node: ItemNode, pronouncer: Pronouncer, placed: PlacedWords, totals: ItemTotals): WordAnalysis[] | null {
+  const plain = plainItemWords(node.text);
+  if (plain === null) return null;
+  const words: WordAnalysis[] = new Array(plain.length);
+  const offset = node.textStart;
+  for (let k = 0; k < plain.length; k++) {
+    const p = plain[k];
+    const s = pronouncer.score(p.spoken, null);
+    words[k] = placed.get(p.surface, p.end - p.surface.length + offset, p.end + offset, p.spoken, s);
+    totals.add(s);
+  }
+  return words;
+}
+
+/** The words of any item, read from its tokens (numbers, abbreviations, variant marks...). */
+function tokenScores(node: ItemNode, pronouncer: Pronouncer, placed: PlacedWords, totals: ItemTotals, findings: Finding[]): WordAnalysis[] {
   const tokens = tokenize(node.text, node.textStart);
   // Sized exactly: an array grown by push keeps room for 17 words, and every item keeps its array.
   let total = 0;
   for (const t of tokens) total += t.words.length;
   const words: WordAnalysis[] = new Array(total);
   let w = 0;
-  const parts = emptyWcmParts();
-  let syllables = 0;
-  let phonemes = 0;
-  let wcm = 0;
-  let zipfSum = 0;
-  let zipfMin = Infinity;
-  let low = 0;
-  let estimated = 0;
-  let counted = 0;
   for (const t of tokens) {
     const last = t.words.length - 1;
     for (let wi = 0; wi <= last; wi++) {
@@ -188,32 +189,27 @@ export function analyzeItem(
         findings.push(finding({ line: node.line, character: t.start, endLine: node.line, endCharacter: t.end }, { kind: 'variant-mark-not-listed', explanation: s.variantError }));
       }
       words[w++] = placed.get(t.surface, t.start, t.end, spoken, s);
-      syllables += s.syllables;
-      phonemes += s.phonemes;
-      wcm += s.wcm.total;
-      addWcmParts(parts, s.wcm.parts);
-      if (isEstimated(s)) estimated++;
-      // A word the script spells out itself (an override, typically a name) and that the
-      // subtitle corpus never saw says nothing about how familiar it is to the client, so it is
-      // left out of the frequency figures; an item of nothing else keeps it (see below).
-      if (s.source === 'override' && s.count === 0) continue;
-      counted++;
-      zipfSum += s.zipf;
-      if (s.zipf < zipfMin) zipfMin = s.zipf;
-      if (s.zipf < LOW_FREQUENCY_ZIPF) low++;
+      totals.add(s);
     }
   }
+  return words;
+}
+
+export function analyzeItem(
+  node: ItemNode,
+  rung: number,
+  paces: Pace[],
+  options: AnalysisOptions,
+  pronouncer: Pronouncer,
+  findings: Finding[],
+  timings: TimingTable = new TimingTable(paces, options),
+  placed: PlacedWords = new PlacedWords(),
+): ItemAnalysis {
+  const totals = new ItemTotals();
+  const words = plainItemScores(node, pronouncer, placed, totals) ?? tokenScores(node, pronouncer, placed, totals, findings);
   const wordCount = words.length;
-  if (counted === 0 && wordCount > 0) {
-    for (const w of words) {
-      zipfSum += w.zipf;
-      if (w.zipf < zipfMin) zipfMin = w.zipf;
-      if (w.zipf < LOW_FREQUENCY_ZIPF) low++;
-    }
-    counted = wordCount;
-  }
-  const zipfMean = counted ? zipfSum / counted : 0;
-  if (!counted) zipfMin = 0;
+  const { syllables, phonemes, wcm } = totals;
+  const { zipfMean, zipfMin, low } = totals.frequency(words);
   const components = difficultyComponents({ syllables, words: wordCount, wcm, zipfMean, zipfMin });
   return {
     node,
@@ -223,11 +219,11 @@ export function analyzeItem(
     syllables,
     phonemes,
     wcm,
-    wcmParts: parts,
+    wcmParts: totals.parts,
     zipfMean,
     zipfMin,
     lowFrequencyWords: low,
-    estimatedWords: estimated,
+    estimatedWords: totals.estimated,
     difficulty: composite(components, options.weights),
     components,
     rank: 0,

@@ -4,6 +4,7 @@
 // Patterns are compiled once at load and used sticky, so tokenising never compiles a regex.
 
 import { ABBREVIATIONS, CURRENCIES, LEADING_ELISIONS, type Abbreviation, type Currency } from './abbreviations';
+import { BARE, MAX_BARE_LENGTH, plainWord } from './plainWords';
 import { amountWords, cardinal, DIGIT_WORDS, isYear, moneyWords, ordinal, pluralise, yearWords } from './numberWords';
 
 export interface Token {
@@ -49,19 +50,6 @@ const SOFT_HYPHEN = /\u00ad/g;
 const CURLY_APOSTROPHES = /[\u2018\u2019\u02bc\u2032]/g;
 const COMMAS = /,/g;
 
-// The longest abbreviation recognised without its period ("prof", "blvd"); longer words skip the lookup.
-const MAX_BARE_LENGTH = 4;
-
-// Undotted abbreviations keyed by how they may be written ("Mr", "MR"; "vs", "Vs", "VS"), so a
-// word needs one lookup of its own spelling and no lower-casing.
-const BARE = new Map<string, Abbreviation>();
-for (const [written, entry] of ABBREVIATIONS) {
-  if (entry.bare === undefined) continue;
-  const lower = written.slice(0, -1);
-  const forms = [lower[0].toUpperCase() + lower.slice(1), lower.toUpperCase()];
-  if (entry.bare === 'any') forms.push(lower);
-  for (const form of forms) BARE.set(form, entry);
-}
 const BARE_FIRST = new Set([...BARE.keys()].map((form) => form.charCodeAt(0)));
 
 const BREAKS = new Set(
@@ -440,48 +428,20 @@ function scanOther(st: State, i: number, c: number): number {
   return i + (pair ? 2 : 1);
 }
 
-/**
- * The common case of `scanWord` without its general machinery: a run of ASCII letters that ends
- * where nothing can join it to more (not a letter, mark, apostrophe, hyphen or variant mark, nor a
- * period that makes it an abbreviation or an initial) and is not an undotted abbreviation. Such a run is one word whose spoken form is its
- * lower case, exactly what `scanWord` makes of it (tests/core/tokenize.property.test.ts checks
- * the two agree on arbitrary text). Returns the end, or -1 to leave the word to `scanWord`.
- */
+/** A plain word at i (plainWords.ts) as its token; returns the end, or -1 to leave it to `scanWord`. */
 function scanPlainWord(st: State, i: number): number {
-  const { text } = st;
-  const n = text.length;
-  let j = i;
-  let upper = false;
-  let c = 0;
-  for (; j < n; j++) {
-    c = text.charCodeAt(j);
-    if (c >= 0x61 && c <= 0x7a) continue;
-    if (c >= 0x41 && c <= 0x5a) {
-      upper = true;
-      continue;
-    }
-    break;
-  }
-  if (j < n && (c >= 0x80 || c === 0x27 || c === 0x2d || c === 0x28)) return -1;
-  const surface = text.slice(i, j);
-  const spoken = upper ? surface.toLowerCase() : surface;
-  if (j < n && c === 0x2e) {
-    // A period after the word (most often the item's last): a word unless the letters go on
-    // ("e.g."), it is a listed abbreviation ("etc.", "Dr.") or a capital initial ("J. Smith").
-    const after = codeAt(text, j + 1);
-    if ((after >= 0x41 && after <= 0x5a) || (after >= 0x61 && after <= 0x7a)) return -1;
-    if ((j - i === 1 && upper) || ABBREVIATIONS.has(`${spoken}.`)) return -1;
-  } else if (j - i <= MAX_BARE_LENGTH && BARE.has(surface)) return -1;
+  const word = plainWord(st.text, i);
+  if (word === null) return -1;
   st.tokens.push({
-    surface,
+    surface: word.surface,
     start: i + st.offset,
-    end: j + st.offset,
+    end: word.end + st.offset,
     kind: 'word',
-    words: [spoken],
+    words: [word.spoken],
     variant: null,
     breakAfter: false,
   });
-  return j;
+  return word.end;
 }
 
 /**
