@@ -61,6 +61,7 @@ if (only.includes('analysis')) {
     floor.push(floorRun([big]).lookupMs);
   }
   const fl = median(floor);
+  if (process.env.BENCH_VERBOSE) console.log(`${analysis.map(f1).join(' ')} | ${linting.map(f1).join(' ')}`);
   console.log(`analysis ${f1(median(analysis))} ms = ${(median(analysis) / fl).toFixed(2)}x, lint ${f1(median(linting))} ms = ${(median(linting) / fl).toFixed(2)}x, floor loop ${f1(fl)} ms`);
 }
 if (only.includes('multi')) {
