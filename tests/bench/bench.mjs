@@ -5,7 +5,7 @@
 // percentiles and ratios, and with `--json FILE` writes the figures. It asserts nothing: targets
 // are for people to read, and a shared machine is noisy, so read the ratios, not the milliseconds.
 import { spawnSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { availableParallelism, cpus, tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -13,6 +13,7 @@ import { fileURLToPath } from 'node:url';
 import { benchBalance } from './balance.mjs';
 import { generateScript } from './generate.mjs';
 import { measureLsp } from './lsp.mjs';
+import { median, processRuns, timeAnalysis, writeLibrary } from './runs.mjs';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const require = createRequire(import.meta.url);
@@ -28,31 +29,8 @@ const tiny = join(dir, 'tiny.rungs');
 const text = generateScript(ITEMS);
 writeFileSync(big, text);
 writeFileSync(tiny, 'Good morning.\n');
-// A library of 200 scripts of 100 items each, for `rungs lint` over many files.
-const libDir = join(dir, 'library');
-mkdirSync(libDir);
-const libFiles = [];
-for (let i = 0; i < 200; i++) {
-  const f = join(libDir, `script-${String(i).padStart(3, '0')}.rungs`);
-  writeFileSync(f, generateScript(100, 1000 + i));
-  libFiles.push(f);
-}
-
-const median = (xs) => {
-  const s = [...xs].sort((a, b) => a - b);
-  return s.length % 2 ? s[s.length >> 1] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
-};
-const wall = (args) => {
-  const t = performance.now();
-  const r = spawnSync(process.execPath, args, { cwd: root, encoding: 'utf8', maxBuffer: 1 << 28 });
-  const ms = performance.now() - t;
-  if (r.status !== 0 && r.status !== 1) throw new Error(`${args.join(' ')} failed: ${r.stderr}`);
-  return { ms, out: r.stdout };
-};
-const floorRun = (files) => {
-  const r = wall([join(root, 'tests/bench/floor.mjs'), ...files]);
-  return { ...JSON.parse(r.out), ms: r.ms };
-};
+const { libDir, libFiles } = writeLibrary(dir);
+const { wall, floorRun } = processRuns(root);
 
 // 1. Start-up: a whole `rungs score` process on a one-line script vs a process that only loads
 //    the packages. Both include Node's own start, so the ratio compares like with like.
@@ -73,24 +51,7 @@ for (let i = 0; i < RUNS; i++) {
 // 2. Analysis and lint of the generated script in-process, after the tables are loaded, vs the
 //    floor's lookups of every word of the same script (in its own process, after its load).
 const { analyze, lint, loadWordTable } = require(join(root, 'dist', 'bench-core.js'));
-const analysis = [];
-const linting = [];
-const floorLookups = [];
-let items = 0;
-let words = 0;
-for (let i = 0; i < RUNS; i++) {
-  // A fresh table each run, so word caches start cold as in a new process.
-  const table = loadWordTable(join(root, 'dist', 'data'));
-  const t = performance.now();
-  const a = analyze({ text, data: table });
-  analysis.push(performance.now() - t);
-  const tl = performance.now();
-  lint(a, text);
-  linting.push(performance.now() - tl);
-  items = a.items.length;
-  words = a.items.reduce((n, it) => n + it.wordCount, 0);
-  floorLookups.push(floorRun([big]).lookupMs);
-}
+const { analysis, linting, floorLookups, items, words } = timeAnalysis({ analyze, lint, loadWordTable }, join(root, 'dist', 'data'), text, big, RUNS, floorRun);
 
 // 3. `rungs lint` over 200 files of 100 items (whole process) vs the floor's load plus twice its
 //    lookup loop over the same words.
