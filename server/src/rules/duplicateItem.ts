@@ -3,7 +3,7 @@ import type { ItemAnalysis } from '../core/types';
 import type { Rule } from './types';
 import { itemRange, rungLabel } from './shared';
 import { excerpt } from '../core/excerpt';
-import { keyHash, spokenKey } from './itemKey';
+import { rungKeyHashes, spokenKey } from './itemKey';
 
 /** The first earlier item with the same key as `text`, among the first items whose numbers met. */
 function sameKey(firsts: ItemAnalysis | ItemAnalysis[], text: string): ItemAnalysis | undefined {
@@ -29,36 +29,41 @@ export const duplicateItem: Rule = {
   check(ctx, report) {
     // First items by key number: one item, or a list once different keys share a number.
     const seen = new Map<number, ItemAnalysis | ItemAnalysis[]>();
-    for (const it of ctx.analysis.items) {
-      const h = keyHash(it.node.text);
-      if (h < 0) continue;
-      const firsts = seen.get(h);
-      const first = firsts === undefined ? undefined : sameKey(firsts, it.node.text);
-      if (!first) {
-        if (firsts === undefined) seen.set(h, it);
-        else if (Array.isArray(firsts)) firsts.push(it);
-        else seen.set(h, [firsts, it]);
-        continue;
+    // Rung by rung, which is the order of the script's items.
+    for (const r of ctx.analysis.rungs) {
+      const hashes = rungKeyHashes(r);
+      for (let k = 0; k < hashes.length; k++) {
+        const it = r.items[k];
+        const h = hashes[k];
+        if (h < 0) continue;
+        const firsts = seen.get(h);
+        const first = firsts === undefined ? undefined : sameKey(firsts, it.node.text);
+        if (!first) {
+          if (firsts === undefined) seen.set(h, it);
+          else if (Array.isArray(firsts)) firsts.push(it);
+          else seen.set(h, [firsts, it]);
+          continue;
+        }
+        const firstRung = ctx.analysis.rungs[first.rung];
+        const line = it.node.line;
+        const last = line + 1 >= ctx.lines.length;
+        report({
+          ...itemRange(it),
+          message: `"${excerpt(it.node.text)}" repeats line ${first.node.line + 1} in ${rungLabel(firstRung)}`,
+          related: [{ ...itemRange(first), message: `first written here, in ${rungLabel(firstRung)}` }],
+          unnecessary: true,
+          fix: {
+            title: `Remove the repeated "${excerpt(it.node.text)}"`,
+            // Removing an item (with its note, id and sets) is a person's choice, one repeat at a time.
+            batch: false,
+            edits: [
+              last && line > 0
+                ? { line: line - 1, character: ctx.lines[line - 1].length, endLine: line, endCharacter: ctx.lines[line].length, newText: '' }
+                : { line, character: 0, endLine: line + 1, endCharacter: 0, newText: '' },
+            ],
+          },
+        });
       }
-      const firstRung = ctx.analysis.rungs[first.rung];
-      const line = it.node.line;
-      const last = line + 1 >= ctx.lines.length;
-      report({
-        ...itemRange(it),
-        message: `"${excerpt(it.node.text)}" repeats line ${first.node.line + 1} in ${rungLabel(firstRung)}`,
-        related: [{ ...itemRange(first), message: `first written here, in ${rungLabel(firstRung)}` }],
-        unnecessary: true,
-        fix: {
-          title: `Remove the repeated "${excerpt(it.node.text)}"`,
-          // Removing an item (with its note, id and sets) is a person's choice, one repeat at a time.
-          batch: false,
-          edits: [
-            last && line > 0
-              ? { line: line - 1, character: ctx.lines[line - 1].length, endLine: line, endCharacter: ctx.lines[line].length, newText: '' }
-              : { line, character: 0, endLine: line + 1, endCharacter: 0, newText: '' },
-          ],
-        },
-      });
     }
   },
 };

@@ -1,12 +1,11 @@
 // The key duplicate-item compares items by, and a quick path for the usual plain item. Kept apart
 // from the rule so the rule file stays its metadata and check.
+import type { RungAnalysis } from '../core/types';
 
 /**
  * Two items are the same when their spoken words match, ignoring case, punctuation and spacing:
- * the key is the text in lower case with every run of other characters one space. Worked out
- * afresh on every run: for the usual plain item that is one scan and one lower-casing, cheaper
- * than remembering keys by item or text across runs (filling a cache of 10,000 keys on a fresh
- * analysis costs more than the keys themselves).
+ * the key is the text in lower case with every run of other characters one space. The rule
+ * compares key numbers (keyHash) and builds keys only when two numbers meet.
  */
 export function spokenKey(text: string): string {
   return plainSpokenKey(text) ?? generalSpokenKey(text);
@@ -81,4 +80,22 @@ function generalKeyHash(text: string): number {
   let h = 0x811c9dc5;
   for (let i = 0; i < key.length; i++) h = Math.imul(h ^ key.charCodeAt(i), 0x01000193);
   return h & 0x3fffffff;
+}
+
+/**
+ * The key numbers of a rung's items, kept with the rung's analysis: the language server hands
+ * back the same analysis for every rung an edit did not touch, so their numbers are not worked
+ * out again on each keystroke (one entry per rung, where a cache per item would cost a fresh
+ * analysis more than the numbers).
+ */
+const byRung = new WeakMap<RungAnalysis, Int32Array>();
+
+export function rungKeyHashes(r: RungAnalysis): Int32Array {
+  let hs = byRung.get(r);
+  if (hs === undefined) {
+    hs = new Int32Array(r.items.length);
+    for (let k = 0; k < hs.length; k++) hs[k] = keyHash(r.items[k].node.text);
+    byRung.set(r, hs);
+  }
+  return hs;
 }
