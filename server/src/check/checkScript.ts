@@ -5,7 +5,7 @@
 import type { AnalyzeOutput, ItemCache } from '../core/analyze';
 import { boundText } from '../core/limits';
 import { splitLines } from '../core/parse';
-import { analyzeSegments, type SegmentState } from '../core/segments';
+import { analyzeSegments, segmentLines, type SegmentState } from '../core/segments';
 import type { AnalysisOptions, Problem, WordData } from '../core/types';
 import { resolveScriptContext, type ConfigFs } from '../config/resolve';
 import { compareProblems, lint, renderFindings } from '../rules/index';
@@ -56,6 +56,11 @@ export interface CheckResult {
   readonly problems: Problem[];
   /** The same problems, linted with lines the caller has already split (the server's snapshot). */
   problemsWith(lines: string[]): Problem[];
+  /**
+   * The text's lines (splitLines), worked out when first read; an incremental analysis joins the
+   * lines of the rungs an edit did not touch with those it split again.
+   */
+  readonly lines: string[];
   /** Problems in config and lexicon files (and the editor-settings layer, by its name). */
   fileProblems: FileProblem[];
   /** Every file the resolver read or looked for (config files and lexicons, found or missing). */
@@ -99,9 +104,12 @@ export function checkScript(input: CheckInput): CheckResult {
     text: input.text,
     analysis,
     get problems() {
-      return problemsWith(splitLines(input.text));
+      return problemsWith(this.lines);
     },
     problemsWith,
+    get lines() {
+      return cut ? splitLines(input.text) : segmentLines(segments);
+    },
     fileProblems: ctx.findings.map(({ file, finding }) => ({ file, problem: renderFindings([finding])[0] })),
     dependencies: [...seen],
     lint: ctx.lint,

@@ -6,7 +6,7 @@
 // analysed whole. Either way the result equals `analyze` of the same text
 // (tests/core/incremental.property.test.ts checks this over thousands of random edits).
 import { analyze, analyzeRung, type AnalyzeInput, type AnalyzeOutput, type RungContext } from './analyze';
-import { parseScript, RUNG_KEYS, splitLabels } from './parse';
+import { parseScript, RUNG_KEYS, splitLabels, splitLines } from './parse';
 import { pushAll } from './arrays';
 import type { Finding } from './findings';
 import type { CommentLine, ItemAnalysis, RungAnalysis, RungNode, Setting } from './types';
@@ -16,6 +16,8 @@ interface Segment {
   /** 0-based line of the segment's first line. */
   line: number;
   text: string;
+  /** The segment's lines (splitLines), worked out when first asked for and kept while its text is. */
+  lines?: string[];
 }
 
 /** What the next incremental analysis of the same document needs from this one. */
@@ -25,6 +27,34 @@ export interface SegmentState {
   output: AnalyzeOutput;
   /** Rungs parsed and scored again by this analysis; null when the whole script was. */
   redone: number[] | null;
+  /** The text's lines, joined from the segments' (segmentLines). */
+  lines?: string[];
+}
+
+/**
+ * A copy of a part of the text that does not keep the whole text alive. A slice of a string may
+ * point into it, so a rung kept across edits would hold on to the text of the version it was read
+ * from; a copy holds only its own characters.
+ */
+export function detach(part: string): string {
+  return part.length ? (' ' + part).slice(1) : '';
+}
+
+/**
+ * The text's lines (as splitLines gives them), from the segments' own: a segment an edit did not
+ * touch keeps its lines, so an edit splits the rungs it changed and joins the arrays.
+ */
+export function segmentLines(state: SegmentState): string[] {
+  if (state.lines) return state.lines;
+  const out: string[] = [];
+  const last = state.segments.length - 1;
+  state.segments.forEach((s, k) => {
+    const own = (s.lines ??= splitLines(detach(s.text)));
+    // Every segment but the last ends with its last line's break: leave out the empty line after it.
+    const n = k < last ? own.length - 1 : own.length;
+    for (let i = 0; i < n; i++) out.push(own[i]);
+  });
+  return (state.lines = out);
 }
 
 /** Segments: [head, rung 1, rung 2, ...]; a rung header is a line whose text starts with `==`. */
@@ -139,7 +169,11 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
   if (segments.length !== before.length || segments.length < 2 || segments[0].text !== before[0].text) return null;
   if (!scriptWideInHead(old, before[1].line)) return null;
   const changed: number[] = [];
-  for (let k = 1; k < segments.length; k++) if (segments[k].text !== before[k].text) changed.push(k);
+  for (let k = 1; k < segments.length; k++) {
+    if (segments[k].text !== before[k].text) changed.push(k);
+    else segments[k].lines = before[k].lines;
+  }
+  segments[0].lines = before[0].lines;
   if (!changed.length) return old;
   // A rung segment maps to rung k - 1, or k when the head holds an implicit rung of items.
   const offset = old.rungs.length - (before.length - 1);
@@ -148,7 +182,9 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
   // Parse each changed rung alone; anything script-wide in it sends the edit down the full path.
   const parsed = new Map<number, ReturnType<typeof parseScript>>();
   for (const k of changed) {
-    const p = parseScript(segments[k].text);
+    // Parsed from a copy: the rung's nodes (kept while later edits leave the rung alone) must not
+    // hold this version of the whole text.
+    const p = parseScript(detach(segments[k].text));
     if (p.header.length || p.overrides.length || p.rungs.length !== 1 || p.rungs[0].implicit) return null;
     if (p.rungs[0].settings.some((s) => !RUNG_KEYS.has(s.key))) return null;
     parsed.set(k, p);

@@ -50,6 +50,7 @@ function makeSnapshot(
   version: number,
   text: string,
   analysis: AnalyzeOutput,
+  split: () => string[],
   problems: (lines: string[]) => Problem[],
   settings: RungsSettings,
   lint: LintSettings,
@@ -66,11 +67,11 @@ function makeSnapshot(
     version,
     text,
     get lines() {
-      return (lines ??= splitLines(text));
+      return (lines ??= split());
     },
     analysis,
     get problems() {
-      return (linted ??= problems((lines ??= splitLines(text))));
+      return (linted ??= problems((lines ??= split())));
     },
     settings,
     lint,
@@ -216,14 +217,14 @@ export class AnalysisStore {
       this.logConfigProblems(
         checked.fileProblems.filter((c) => !state.fileProblems.includes(c)).map((c) => `${c.file}: ${c.problem.message}`),
       );
-      return makeSnapshot(doc.uri, doc.version, text, checked.analysis, (lines) => this.lintSafely(doc.uri, () => checked.problemsWith(lines)), settings, checked.lint, performance.now() - t0);
+      return makeSnapshot(doc.uri, doc.version, text, checked.analysis, () => checked.lines, (lines) => this.lintSafely(doc.uri, () => checked.problemsWith(lines)), settings, checked.lint, performance.now() - t0);
     } catch (err) {
       // A bad document (or a bug) becomes a diagnostic, never a crash of the server.
       this.hooks.error(`analysis of ${doc.uri} failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
       state.cache = undefined;
       state.fileProblems = [];
       const empty = analyze({ text: '', data: this.data });
-      return makeSnapshot(doc.uri, doc.version, text, empty, () => [analysisFailed(err)], settings, { severities: {} }, performance.now() - t0);
+      return makeSnapshot(doc.uri, doc.version, text, empty, () => splitLines(text), () => [analysisFailed(err)], settings, { severities: {} }, performance.now() - t0);
     }
   }
 

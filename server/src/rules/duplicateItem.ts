@@ -1,6 +1,6 @@
 // duplicate-item: the same sentence written twice in one script.
-import type { ItemAnalysis } from '../core/types';
-import type { Rule } from './types';
+import type { ItemAnalysis, ItemNode, TextEdit } from '../core/types';
+import type { Report, Rule, RuleContext } from './types';
 import { itemRange, rungLabel } from './shared';
 import { excerpt } from '../core/excerpt';
 import { rungKeyHashes, spokenKey } from './itemKey';
@@ -44,26 +44,46 @@ export const duplicateItem: Rule = {
           else seen.set(h, [firsts, it]);
           continue;
         }
-        const firstRung = ctx.analysis.rungs[first.rung];
-        const line = it.node.line;
-        const last = line + 1 >= ctx.lines.length;
-        report({
-          ...itemRange(it),
-          message: `"${excerpt(it.node.text)}" repeats line ${first.node.line + 1} in ${rungLabel(firstRung)}`,
-          related: [{ ...itemRange(first), message: `first written here, in ${rungLabel(firstRung)}` }],
-          unnecessary: true,
-          fix: {
-            title: `Remove the repeated "${excerpt(it.node.text)}"`,
-            // Removing an item (with its note, id and sets) is a person's choice, one repeat at a time.
-            batch: false,
-            edits: [
-              last && line > 0
-                ? { line: line - 1, character: ctx.lines[line - 1].length, endLine: line, endCharacter: ctx.lines[line].length, newText: '' }
-                : { line, character: 0, endLine: line + 1, endCharacter: 0, newText: '' },
-            ],
-          },
-        });
+        report(repeatReport(ctx, it, first));
       }
     }
   },
 };
+
+type RepeatReport = Parameters<Report>[0];
+
+/**
+ * The report on a repeat, kept with the repeated item's parse while what it says holds (the same
+ * first item, rung label and removal edit): lint() then hands on the same problem object, and the
+ * language server sends the diagnostic it converted before.
+ */
+const reports = new WeakMap<ItemNode, { first: ItemNode; label: string; edit: TextEdit; report: RepeatReport }>();
+
+function repeatReport(ctx: RuleContext, it: ItemAnalysis, first: ItemAnalysis): RepeatReport {
+  const label = rungLabel(ctx.analysis.rungs[first.rung]);
+  const line = it.node.line;
+  const last = line + 1 >= ctx.lines.length;
+  const edit: TextEdit =
+    last && line > 0
+      ? { line: line - 1, character: ctx.lines[line - 1].length, endLine: line, endCharacter: ctx.lines[line].length, newText: '' }
+      : { line, character: 0, endLine: line + 1, endCharacter: 0, newText: '' };
+  const hit = reports.get(it.node);
+  const e = hit?.edit;
+  if (hit && hit.first === first.node && hit.label === label && e!.line === edit.line && e!.character === edit.character && e!.endLine === edit.endLine && e!.endCharacter === edit.endCharacter) {
+    return hit.report;
+  }
+  const report: RepeatReport = {
+    ...itemRange(it),
+    message: `"${excerpt(it.node.text)}" repeats line ${first.node.line + 1} in ${label}`,
+    related: [{ ...itemRange(first), message: `first written here, in ${label}` }],
+    unnecessary: true,
+    fix: {
+      title: `Remove the repeated "${excerpt(it.node.text)}"`,
+      // Removing an item (with its note, id and sets) is a person's choice, one repeat at a time.
+      batch: false,
+      edits: [edit],
+    },
+  };
+  reports.set(it.node, { first: first.node, label, edit, report });
+  return report;
+}

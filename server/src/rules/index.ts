@@ -27,7 +27,7 @@ import { smallSet } from './smallSet';
 import { stepBackwards } from './stepBackwards';
 import { stepTooBig } from './stepTooBig';
 import { thinRung } from './thinRung';
-import type { LintSettings, Rule, RuleContext } from './types';
+import type { LintSettings, Report, Rule, RuleContext } from './types';
 import { eolOf } from './shared';
 import { unevenSteps } from './unevenSteps';
 import { unknownKey } from './unknownKey';
@@ -143,8 +143,59 @@ function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis): Problem[] {
 }
 
 /**
+ * One rung's reports from every rung-local rule, sorted, kept with the rung's analysis while the
+ * rules' reports on it are the same lists: an edit sorts the problems of the rungs it touched.
+ */
+const sortedByRung = new WeakMap<RungAnalysis, { parts: Problem[][]; sorted: Problem[] }>();
+
+function sortedRungReports(r: RungAnalysis, parts: Problem[][]): Problem[] {
+  const hit = sortedByRung.get(r);
+  if (hit && hit.parts.length === parts.length && hit.parts.every((p, i) => p === parts[i])) return hit.sorted;
+  const sorted: Problem[] = [];
+  for (const p of parts) pushAll(sorted, p);
+  sorted.sort(compareProblems);
+  sortedByRung.set(r, { parts, sorted });
+  return sorted;
+}
+
+function isSorted(ps: Problem[]): boolean {
+  for (let i = 1; i < ps.length; i++) if (compareProblems(ps[i - 1], ps[i]) > 0) return false;
+  return true;
+}
+
+/** Two sorted lists as one; on a tie the first list's problem goes first. */
+function mergeSorted(a: Problem[], b: Problem[]): Problem[] {
+  if (!b.length) return a;
+  if (!a.length) return b;
+  const out: Problem[] = new Array(a.length + b.length);
+  let i = 0;
+  let j = 0;
+  let k = 0;
+  while (i < a.length && j < b.length) out[k++] = compareProblems(b[j], a[i]) < 0 ? b[j++] : a[i++];
+  while (i < a.length) out[k++] = a[i++];
+  while (j < b.length) out[k++] = b[j++];
+  return out;
+}
+
+/**
+ * The problem a rule's report becomes, the same object for the same report: a rule that keeps
+ * its reports between analyses (duplicate-item) then yields problems the server converted before.
+ */
+const wrapped = new WeakMap<object, Problem>();
+
+function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
+  const hit = wrapped.get(p);
+  if (hit && hit.rule === rule.id) return hit;
+  const out = { ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity };
+  wrapped.set(p, out);
+  return out;
+}
+
+/**
  * All problems of an analysed script: the core's own (syntax, settings, phones) and every rule's,
- * with ignore directives and severity overrides applied, sorted by position.
+ * with ignore directives and severity overrides applied, sorted by position. Rung-local rules'
+ * problems come sorted per rung (kept with each rung's analysis) and are merged with the rest,
+ * so an edit sorts only what it changed.
  */
 export function lint(
   analysis: Analysis,
@@ -153,30 +204,53 @@ export function lint(
   /** The text's lines when the caller has them already (the language server's snapshot). */
   lines: string[] = splitLines(text),
 ): Problem[] {
-  const problems: Problem[] = [];
+  const global: Problem[] = [];
+  // Per rung, the reports of each rung-local rule that ran cleanly.
+  const rungParts: Problem[][][] = analysis.rungs.map(() => []);
   // A copy: failures caught below are added for internal-error, which runs last.
   const ctx: RuleContext = { analysis, lines, text, settings, findings: [...analysis.findings], ruleIds: RULE_IDS };
   for (const rule of RULES) {
     // The registry boundary: a rule that throws, or reports outside the script, becomes one
     // internal-error problem and the other rules still run.
-    const mine: Problem[] = [];
     try {
-      if (rule.checkRung) for (const r of analysis.rungs) pushAll(mine, rungReports(ctx, rule, r));
-      else rule.check(ctx, (p) => mine.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
+      if (rule.checkRung) {
+        const mine = analysis.rungs.map((r) => rungReports(ctx, rule, r));
+        for (const part of mine) {
+          const outside = part.find((p) => !inside(lines, p));
+          if (outside) throw outsideError(outside);
+        }
+        mine.forEach((part, k) => part.length && rungParts[k].push(part));
+        continue;
+      }
+      const mine: Problem[] = [];
+      rule.check(ctx, (p) => mine.push(wrap(rule, p)));
       const outside = mine.find((p) => !inside(lines, p));
-      if (outside) throw new Error(`reported a position outside the script (line ${outside.line + 1}, column ${outside.character + 1})`);
-      pushAll(problems, mine);
+      if (outside) throw outsideError(outside);
+      pushAll(global, mine);
     } catch (err) {
       ctx.findings.push(internalFailure(rule.id, err));
     }
   }
+  let local: Problem[] = [];
+  analysis.rungs.forEach((r, k) => pushAll(local, sortedRungReports(r, rungParts[k])));
+  // Rung-local rules report inside their rung, so the rungs' lists follow each other in order;
+  // a rule that reports elsewhere only costs a full sort.
+  if (!isSorted(local)) local = local.sort(compareProblems);
+  const all = mergeSorted(local, global.sort(compareProblems));
   const directives = readDirectives(analysis.script.comments, lines, RULE_IDS, badDirective.id);
   const out: Problem[] = [];
-  for (const p of problems.filter((q) => !isAllowed(directives, q))) {
+  const overrides = Object.keys(settings.severities).length > 0;
+  const silenced = directives.file.size > 0 || directives.lines.size > 0;
+  for (const p of all) {
+    if (silenced && isAllowed(directives, p)) continue;
     if (p.fix === undefined) delete p.fix;
-    const o = settings.severities[p.rule];
+    const o = overrides ? settings.severities[p.rule] : undefined;
     if (o === 'off') continue;
     out.push(o ? { ...p, severity: o } : p);
   }
-  return out.sort(compareProblems);
+  return out;
+}
+
+function outsideError(p: Problem): Error {
+  return new Error(`reported a position outside the script (line ${p.line + 1}, column ${p.character + 1})`);
 }

@@ -125,16 +125,26 @@ export function rungStatsByIndex(analysis: Analysis, settings: LintSettings): Ma
   return new Map(rungStats({ analysis, settings }).map((st) => [st.rung.index, st]));
 }
 
+const statsByRung = new WeakMap<RungAnalysis, Map<LadderMetric, RungStat>>();
+
+/**
+ * One rung's summary on a metric, kept with the rung's analysis like its values: an edit sorts
+ * the values of the rungs it touched for their medians, not those of every rung.
+ */
+export function rungStat(rung: RungAnalysis, metric: LadderMetric): RungStat {
+  let m = statsByRung.get(rung);
+  if (!m) statsByRung.set(rung, (m = new Map()));
+  let st = m.get(metric);
+  if (!st) {
+    const values = rungValues(rung, metric);
+    m.set(metric, (st = { rung, values, median: median(values), min: minOf(values), max: maxOf(values) }));
+  }
+  return st;
+}
+
 export function rungStats(ctx: Pick<RuleContext, 'analysis' | 'settings'>): RungStat[] {
   const metric = ladderMetric(ctx);
-  return memo(ctx, `stats:${metric}`, () =>
-    ctx.analysis.rungs
-      .filter((r) => r.items.length > 0)
-      .map((rung) => {
-        const values = rungValues(rung, metric);
-        return { rung, values, median: median(values), min: minOf(values), max: maxOf(values) };
-      }),
-  );
+  return memo(ctx, `stats:${metric}`, () => ctx.analysis.rungs.filter((r) => r.items.length > 0).map((rung) => rungStat(rung, metric)));
 }
 
 /** `rung 3 "Back to short"`: 1-based, with the name, as every message writes it. */
