@@ -7,7 +7,7 @@
 // Lakens 2017, Social Psychological and Personality Science 8(4)); Hedges' g stands beside it.
 import { averageSd, hedgesG, mannWhitney, summarize, tostWelch, welch, type MwuMethod, type Summary, type TostResult } from './stats';
 import { DEFAULT_SET_OPTIONS, type SetOptions } from './setOptions';
-import type { Analysis, ItemAnalysis, SetScope } from './types';
+import type { Analysis, ItemAnalysis, RungAnalysis, SetScope } from './types';
 
 /** One row of the metric table: how a per-item number is read and shown. */
 export interface SetMetric {
@@ -167,24 +167,50 @@ export function setGroups(analysis: Analysis, scope: SetScope): { rung: number |
   return analysis.rungs.map((r) => ({ rung: r.index, items: r.items }));
 }
 
-/** Labels in order of first appearance. */
-export function setLabels(analysis: Analysis, labelsOf: LabelsOf = (i) => i.sets): string[] {
+const ownLabels: LabelsOf = (i) => i.sets;
+
+/** Labels in order of first appearance (the items' own labels unless `labelsOf` says otherwise). */
+export function setLabels(analysis: Analysis, labelsOf?: LabelsOf): string[] {
   const seen: string[] = [];
-  for (const it of analysis.items) for (const l of labelsOf(it)) if (!seen.includes(l)) seen.push(l);
+  if (labelsOf) {
+    for (const it of analysis.items) for (const l of labelsOf(it)) if (!seen.includes(l)) seen.push(l);
+    return seen;
+  }
+  // The items' own labels, gathered per rung and kept with the rung's analysis (the set rules ask
+  // on every edit; an edit reads only the rungs it touched).
+  for (const r of analysis.rungs) for (const l of rungSetLabels(r)) if (!seen.includes(l)) seen.push(l);
   return seen;
+}
+
+const labelsByRung = new WeakMap<RungAnalysis, string[]>();
+
+function rungSetLabels(r: RungAnalysis): string[] {
+  let out = labelsByRung.get(r);
+  if (!out) {
+    out = [];
+    let last: string[] | undefined;
+    for (const it of r.items) {
+      // Items of a rung mostly share one inherited list: read each list once in a row.
+      if (it.sets === last) continue;
+      last = it.sets;
+      for (const l of it.sets) if (!out.includes(l)) out.push(l);
+    }
+    labelsByRung.set(r, out);
+  }
+  return out;
 }
 
 /**
  * Compares every pair of set labels on every metric. Options default to the script's own
  * (`@set-bound`, `@set-min-items`, `@set-scope`). This is the function reports render from.
  */
-export function compareSets(analysis: Analysis, options: Partial<SetOptions> = {}, labelsOf: LabelsOf = (i) => i.sets): SetComparison {
+export function compareSets(analysis: Analysis, options: Partial<SetOptions> = {}, labelsOf: LabelsOf = ownLabels): SetComparison {
   const o: SetOptions = {
     setBound: options.setBound ?? analysis.options.setBound ?? DEFAULT_SET_OPTIONS.setBound,
     setMinItems: options.setMinItems ?? analysis.options.setMinItems ?? DEFAULT_SET_OPTIONS.setMinItems,
     setScope: options.setScope ?? analysis.options.setScope ?? DEFAULT_SET_OPTIONS.setScope,
   };
-  const labels = setLabels(analysis, labelsOf);
+  const labels = setLabels(analysis, labelsOf === ownLabels ? undefined : labelsOf);
   const pairs: SetPair[] = [];
   const small: SmallSet[] = [];
   if (labels.length < 2) return { scope: o.setScope, bound: o.setBound, minItems: o.setMinItems, labels, pairs, small };

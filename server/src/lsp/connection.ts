@@ -4,18 +4,29 @@
 import {
   createConnection,
   ProposedFeatures,
-  StreamMessageReader,
   StreamMessageWriter,
   type Connection,
+  type MessageReader,
 } from 'vscode-languageserver/node';
 import type { WordData } from '../core/types';
 import { loadWordTable } from '../data/wordTable';
 import { transportNamed } from '../node/nodeFs';
+import { messageEncoder } from './diagnostics';
 
 export function openConnection(argv: readonly string[]): Connection {
-  const connection = transportNamed(argv)
-    ? createConnection(ProposedFeatures.all)
-    : createConnection(ProposedFeatures.all, new StreamMessageReader(process.stdin), new StreamMessageWriter(process.stdout));
+  // Over standard input and output (named or by default) the writer sends published diagnostics
+  // as JSON it has written before (lsp/diagnostics.ts). Standard input is handed over as a stream,
+  // so the server still exits when it closes.
+  const stdio = argv.includes('--stdio') || !transportNamed(argv);
+  const connection = stdio
+    ? createConnection(
+        ProposedFeatures.all,
+        // The library reads a stream as well as a reader (and only then exits on its end); its
+        // types name the two forms apart.
+        process.stdin as unknown as MessageReader,
+        new StreamMessageWriter(process.stdout, { charset: 'utf-8', contentTypeEncoder: messageEncoder }),
+      )
+    : createConnection(ProposedFeatures.all);
   // Anything that still calls console.* must not write into the protocol stream.
   console.log = (...a: unknown[]) => connection.console.log(a.map(String).join(' '));
   console.info = (...a: unknown[]) => connection.console.info(a.map(String).join(' '));

@@ -6,6 +6,7 @@ import { DidChangeWatchedFilesNotification, type ClientCapabilities, type Connec
 import type { TextDocument } from 'vscode-languageserver-textdocument';
 import { describeError } from './connection';
 import { toLspDiagnostic } from './convert';
+import { diagnosticsOf } from './diagnostics';
 import type { AnalysisStore } from './documents';
 import type { RecordsDocuments } from './recordsDocuments';
 import { fileWatchers, isConfigFile } from './watch';
@@ -44,7 +45,7 @@ export class Publisher {
       }
       const s = this.store.get(doc);
       this.published.set(uri, s.version);
-      void this.connection.sendDiagnostics({ uri, version: s.version, diagnostics: s.problems.map((p) => toLspDiagnostic(p, uri)) });
+      void this.connection.sendDiagnostics({ uri, version: s.version, diagnostics: diagnosticsOf(s.problems, uri) });
       if (andFiles) this.publishFiles();
       this.records?.refresh();
     } catch (err) {

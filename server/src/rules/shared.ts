@@ -149,8 +149,13 @@ export function rungStats(ctx: Pick<RuleContext, 'analysis' | 'settings'>): Rung
 
 /** `rung 3 "Back to short"`: 1-based, with the name, as every message writes it. */
 export function rungLabel(r: RungAnalysis): string {
-  return `rung ${r.index + 1} "${excerpt(r.node.name)}"`;
+  let label = labels.get(r);
+  if (label === undefined) labels.set(r, (label = `rung ${r.index + 1} "${excerpt(r.node.name)}"`));
+  return label;
 }
+
+/** Labels kept with each rung's analysis (an index and a name that never change on it). */
+const labels = new WeakMap<RungAnalysis, string>();
 
 /** The rung header line (or the first item of an implicit rung), for reports and related info. */
 export function rungRange(ctx: RuleContext, r: RungAnalysis): Range {
