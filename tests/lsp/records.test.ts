@@ -23,6 +23,12 @@ const RECORDS = [
 const recordsPath = join(root, 'clinic.rates.csv');
 writeFileSync(recordsPath, RECORDS);
 const recordsUri = fileUri(recordsPath);
+// A second records file that stays closed: the rung hover reads it from disk once, and again only
+// after a watched-file event for it.
+const otherPath = join(root, 'other.rates.csv');
+const otherRows = (seconds: number) =>
+  ['date,client,script,rung,condition,words,seconds', '2026-03-10,C-0999,,,unassisted,10,10', `2026-03-10,C-0999,a.rungs,Short,paced,15,${seconds}`, ''].join('\n');
+writeFileSync(otherPath, otherRows(10));
 const scriptUri = fileUri(join(root, 'a.rungs'));
 
 let c: LspTestClient;
@@ -77,6 +83,19 @@ describe('a records file in the language server', () => {
     expect(t).toContain('**Latest paced/unassisted ratio** (rate records):');
     expect(t).toContain('- C-0417 · 2026-03-09: 1.4 (meets 1.2)');
     expect(await hoverText(scriptUri, 4, 4)).not.toContain('Latest paced/unassisted ratio');
+  });
+
+  it("answers a rung hover from memory, and reads a records file on disk again after a watched-file event", async () => {
+    // computed: 15 words / 10 s = 1.5 words/s paced over 10 / 10 = 1.0 unassisted: ratio 1.5.
+    expect(await hoverText(scriptUri, 1, 4)).toContain('- C-0999 · 2026-03-10: 1.5 (meets 1.2)');
+    // computed: 15 words / 12.5 s = 1.2 words/s over 1.0: ratio 1.2.
+    writeFileSync(otherPath, otherRows(12.5));
+    // No event yet: the hover answers from what it read before, so it has not read the file again.
+    expect(await hoverText(scriptUri, 1, 4)).toContain('- C-0999 · 2026-03-10: 1.5 (meets 1.2)');
+    await c.connection.sendNotification('workspace/didChangeWatchedFiles', { changes: [{ uri: fileUri(otherPath), type: 2 }] });
+    const t = await hoverText(scriptUri, 1, 4);
+    expect(t).toContain('- C-0999 · 2026-03-10: 1.2 (meets 1.2)');
+    expect(t).toContain('- C-0417 · 2026-03-09: 1.4 (meets 1.2)');
   });
 
   it('reads a script from its open document: renaming a rung there is seen in the records', async () => {

@@ -61,10 +61,12 @@ describe('settings', () => {
 });
 
 describe('file watchers', () => {
-  it('config files by name; each lexicon by its folder and name, or by name when relative patterns are unsupported', () => {
+  it('config files by name, records files and scripts by pattern; each lexicon by its folder and name, or by name when relative patterns are unsupported', () => {
     const config = { globPattern: '**/{.rungs.json,.rungs.yaml,.rungs.yml}' };
-    expect(fileWatchers(['/w/Ü x/names.txt'], true)).toEqual([config, { globPattern: { baseUri: 'file:///w/%C3%9C%20x', pattern: 'names.txt' } }]);
-    expect(fileWatchers(['/w/names[1].txt'], false)).toEqual([config, { globPattern: '**/names[[]1[]].txt' }]);
+    // Records files and scripts: rung hovers keep the records' latest ratios until a change is reported.
+    const records = { globPattern: '**/*.{rungs,rates.csv,rates.tsv}' };
+    expect(fileWatchers(['/w/Ü x/names.txt'], true)).toEqual([config, records, { globPattern: { baseUri: 'file:///w/%C3%9C%20x', pattern: 'names.txt' } }]);
+    expect(fileWatchers(['/w/names[1].txt'], false)).toEqual([config, records, { globPattern: '**/names[[]1[]].txt' }]);
   });
 });
 

@@ -8,7 +8,7 @@
 // gap; in echo mode the model is followed by a response window for the client. All times are in
 // seconds from the start of the plan.
 import { formatNumber, makePace } from './pace';
-import type { Analysis, ItemAnalysis, Pace, TimingOptions } from './types';
+import type { Analysis, ItemAnalysis, Pace, RungAnalysis, TimingOptions } from './types';
 
 export type DeliveryMode = 'unison' | 'echo';
 
@@ -185,21 +185,48 @@ export interface SessionLengths {
   script: { pace: Pace; seconds: number }[];
 }
 
+/**
+ * A rung's plan length at a pace, kept with the rung's analysis by mode, timing settings and pace:
+ * what a rung's plan reads is its own items and those, so the code lens and hovers plan a rung
+ * once, and an edit plans again only the rungs it touched.
+ */
+const secondsByRung = new WeakMap<RungAnalysis, Map<string, number>>();
+
+function rungSeconds(analysis: Analysis, r: RungAnalysis, pace: Pace, mode: DeliveryMode): number {
+  let m = secondsByRung.get(r);
+  if (!m) secondsByRung.set(r, (m = new Map()));
+  const key = `${mode}|${pace.value}|${pace.unit}|${JSON.stringify(analysis.options.timing)}`;
+  let seconds = m.get(key);
+  if (seconds === undefined) m.set(key, (seconds = planSession(analysis, { rung: r.index, pace, mode }).seconds));
+  return seconds;
+}
+
 /** One rung's session length with gaps at each of its paces. */
 export function rungLength(analysis: Analysis, index: number, mode: DeliveryMode = 'unison'): RungLength {
   const r = analysis.rungs[index];
-  return {
-    index,
-    name: r.node.name,
-    line: r.node.line,
-    paces: r.paces.map((pace) => ({ pace, seconds: planSession(analysis, { rung: index, pace, mode }).seconds })),
-  };
+  return { index, name: r.node.name, line: r.node.line, paces: r.paces.map((pace) => ({ pace, seconds: rungSeconds(analysis, r, pace, mode) })) };
+}
+
+/**
+ * The whole script's plan length at one pace: the rungs with items one after another, a gap
+ * between each two (planSession's sum, taken rung by rung from the rungs' kept lengths).
+ */
+function scriptSeconds(analysis: Analysis, pace: Pace, mode: DeliveryMode): number {
+  let total = 0;
+  let any = false;
+  for (const r of analysis.rungs) {
+    if (!r.items.length) continue;
+    if (any) total += analysis.options.timing.gap;
+    total += rungSeconds(analysis, r, pace, mode);
+    any = true;
+  }
+  return total;
 }
 
 /** Session lengths per rung (at each of its paces) and for the whole script (at each script pace). */
 export function sessionLengths(analysis: Analysis, mode: DeliveryMode = 'unison'): SessionLengths {
   const rungs = analysis.rungs.map((r) => rungLength(analysis, r.index, mode));
-  const script = analysis.options.paces.map((pace) => ({ pace, seconds: planSession(analysis, { pace, mode }).seconds }));
+  const script = analysis.options.paces.map((pace) => ({ pace, seconds: scriptSeconds(analysis, pace, mode) }));
   return { mode, rungs, script };
 }
 

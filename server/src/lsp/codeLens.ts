@@ -11,7 +11,16 @@ import { describeLengths, rungLength } from '../core/timing';
 
 export { SORT_RUNG_COMMAND };
 
+/** The lenses of a snapshot: an editor asks again on every scroll and focus, for the same version. */
+const bySnapshot = new WeakMap<Snapshot, CodeLens[]>();
+
 export function codeLenses(s: Snapshot): CodeLens[] {
+  let lenses = bySnapshot.get(s);
+  if (!lenses) bySnapshot.set(s, (lenses = makeLenses(s)));
+  return lenses;
+}
+
+function makeLenses(s: Snapshot): CodeLens[] {
   const lenses: CodeLens[] = [];
   // The summary shows the metric the ladder rules judge (config `ladder.metric`).
   const metric = ladderMetric({ settings: s.lint });

@@ -23,9 +23,8 @@ export function isRecordsPath(path: string | null): boolean {
   return path !== null && isRecordsFile(path);
 }
 
-function readText(path: string, open: OpenText): string | null {
-  const t = open(path);
-  if (t !== undefined) return t;
+/** A file's text from disk, or null when it is missing or cannot be read. */
+export function readFileText(path: string): string | null {
   try {
     return nodeFs.exists(path) && !nodeFs.isDirectory(path) ? nodeFs.readFile(path) : null;
   } catch {
@@ -33,16 +32,24 @@ function readText(path: string, open: OpenText): string | null {
   }
 }
 
+function readText(path: string, open: OpenText): string | null {
+  const t = open(path);
+  return t !== undefined ? t : readFileText(path);
+}
+
 /** Editor settings as the resolver's lowest layer above the defaults (config files win). */
 export type EditorLayer = ResolveOptions['editor'];
 
+/** Reads a file's text (null when missing); by default open documents, then the disk. */
+export type TextReader = (path: string) => string | null;
+
 /** Scripts relative to a records file: open documents win over the copy on disk. */
-export function lookupFor(recordsPath: string, open: OpenText, editor?: EditorLayer): ScriptLookup {
+export function lookupFor(recordsPath: string, open: OpenText, editor?: EditorLayer, read: TextReader = (p) => readText(p, open)): ScriptLookup {
   const cache = new Map<string, ScriptFacts | null>();
   return (written) => {
     const full = resolve(dirname(recordsPath), written);
     if (!cache.has(full)) {
-      const text = readText(full, open);
+      const text = read(full);
       cache.set(full, text === null ? null : scriptFacts(text, resolveScriptContext(full, nodeFs, { editor }).options));
     }
     return cache.get(full)!;
@@ -55,9 +62,16 @@ export function today(now = new Date()): string {
 }
 
 /** Progress of one records file, with its settings from the editor and config files beside it. */
-export function recordsProgress(path: string, text: string, open: OpenText, data?: WordData, editor?: EditorLayer): { result: ProgressResult; mark: number } {
+export function recordsProgress(
+  path: string,
+  text: string,
+  open: OpenText,
+  data?: WordData,
+  editor?: EditorLayer,
+  read?: TextReader,
+): { result: ProgressResult; mark: number } {
   const options = resolveScriptContext(path, nodeFs, { editor }).options.records;
-  return { result: readProgress({ text, scripts: lookupFor(path, open, editor), options, today: today(), data }), mark: options.benefitMark };
+  return { result: readProgress({ text, scripts: lookupFor(path, open, editor, read), options, today: today(), data }), mark: options.benefitMark };
 }
 
 function baselineText(r: RateRecord): string {
@@ -149,21 +163,37 @@ export function findRecordsFiles(folders: string[], cap = 200): string[] {
   return out;
 }
 
+/** The latest paced row of each client, by script (pathKey) and rung index. */
+export type LatestRatios = Map<string, Map<number, Map<string, { r: RateRecord; mark: number }>>>;
+
+/** A records file's latest paced row per client, script and rung: what a rung hover shows of it. */
+export function latestRatios(file: string, result: ProgressResult, mark: number): LatestRatios {
+  const out: LatestRatios = new Map();
+  for (const r of result.records) {
+    if (r.condition !== 'paced' || !r.script || r.rungIndex === null || r.rungIndex === undefined) continue;
+    const script = pathKey(resolve(dirname(file), r.script));
+    let byRung = out.get(script);
+    if (!byRung) out.set(script, (byRung = new Map()));
+    let byClient = byRung.get(r.rungIndex);
+    if (!byClient) byRung.set(r.rungIndex, (byClient = new Map()));
+    const prev = byClient.get(r.client);
+    if (!prev || prev.r.date <= r.date) byClient.set(r.client, { r, mark });
+  }
+  return out;
+}
+
 /**
  * Markdown lines for a script's rung hover: the latest ratio of each client whose records (in the
- * workspace, or open) name this script and rung. Empty when no records name it.
+ * workspace, or open) name this script and rung, over the records files in order. Empty when no
+ * records name it.
  */
-export function rungRecordsNote(scriptPath: string, rungIndex: number, recordsFiles: string[], open: OpenText, editor?: EditorLayer): string[] {
+export function rungRecordsNote(scriptPath: string, rungIndex: number, files: LatestRatios[]): string[] {
   const latest = new Map<string, { r: RateRecord; mark: number }>();
-  for (const file of recordsFiles) {
-    const text = readText(file, open);
-    if (text === null) continue;
-    const { result, mark } = recordsProgress(file, text, open, undefined, editor);
-    for (const r of result.records) {
-      if (r.condition !== 'paced' || !r.script || r.rungIndex !== rungIndex) continue;
-      if (pathKey(resolve(dirname(file), r.script)) !== pathKey(scriptPath)) continue;
-      const prev = latest.get(r.client);
-      if (!prev || prev.r.date <= r.date) latest.set(r.client, { r, mark });
+  const key = pathKey(scriptPath);
+  for (const f of files) {
+    for (const [client, hit] of f.get(key)?.get(rungIndex) ?? []) {
+      const prev = latest.get(client);
+      if (!prev || prev.r.date <= hit.r.date) latest.set(client, hit);
     }
   }
   if (!latest.size) return [];
@@ -174,5 +204,3 @@ export function rungRecordsNote(scriptPath: string, rungIndex: number, recordsFi
   }
   return lines;
 }
-
-

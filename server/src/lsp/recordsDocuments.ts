@@ -11,10 +11,13 @@ import type { WordData } from '../core/types';
 import { uriToPath } from '../node/nodeFs';
 import { toLspDiagnostic } from './convert';
 import { DidAnalyzeNotification } from './ladder';
-import { findRecordsFiles, isRecordsPath, recordsProgress, rungRecordsNote, type EditorLayer } from './records';
+import { findRecordsFiles, isRecordsPath, readFileText, recordsProgress, today, type EditorLayer } from './records';
+import { RecordsIndex, type RecordsFiles } from './recordsIndex';
 
 export class RecordsDocuments {
   private readonly cache = new Map<string, { version: number; settings: string; result: ProgressResult; mark: number }>();
+  /** What rung hovers show of the workspace's records, kept in memory. */
+  readonly index: RecordsIndex;
 
   constructor(
     private readonly connection: Connection,
@@ -24,7 +27,10 @@ export class RecordsDocuments {
     private readonly published: Map<string, number>,
     /** A document's editor settings (rungs.*), layered below config files as for scripts. */
     private readonly editorFor: (uri: string, path: string | null) => EditorLayer,
-  ) {}
+    files: RecordsFiles = { read: readFileText, find: (folders) => findRecordsFiles(folders) },
+  ) {
+    this.index = new RecordsIndex(files, this.openText, () => today());
+  }
 
   isRecords(uri: string): boolean {
     return this.documents.get(uri)?.languageId === 'rungs-records' || isRecordsPath(uriToPath(uri));
@@ -69,11 +75,14 @@ export class RecordsDocuments {
     this.cache.delete(uri);
   }
 
-  /** A rung header's hover also shows the latest ratio of each client whose records name it. */
+  /**
+   * A rung header's hover also shows the latest ratio of each client whose records name it,
+   * answered from the index (lsp/recordsIndex.ts): nothing is read again until it changed.
+   */
   addRungNote(h: Hover | null, scriptUri: string, rungIndex: number | undefined, workspaceFolders: string[]): Hover | null {
     const path = uriToPath(scriptUri);
     if (!h || rungIndex === undefined || !path || typeof h.contents !== 'object' || !('kind' in h.contents) || h.contents.kind !== MarkupKind.Markdown) return h;
-    const note = rungRecordsNote(path, rungIndex, findRecordsFiles(workspaceFolders.length ? workspaceFolders : [dirname(path)]), this.openText, this.editorFor(scriptUri, path));
+    const note = this.index.note(path, rungIndex, workspaceFolders.length ? workspaceFolders : [dirname(path)], this.editorFor(scriptUri, path));
     if (note.length) h.contents.value += `\n${note.join('\n')}`;
     return h;
   }

@@ -61,6 +61,7 @@ export function startServer(argv: readonly string[]): Connection {
   }
   async function recheckAll(): Promise<void> {
     store.invalidate();
+    records.index.reset();
     for (const doc of documents.all()) await refreshSettings(doc.uri);
     for (const doc of documents.all()) publisher.publish(doc.uri, false);
     publisher.publishFiles();
@@ -123,6 +124,7 @@ export function startServer(argv: readonly string[]): Connection {
       const { settings, warnings } = normalizeSettings(raw);
       for (const w of warnings) connection.console.warn(w);
       store.invalidate();
+      records.index.reset();
       for (const doc of documents.all()) store.setSettings(doc.uri, settings);
       for (const doc of documents.all()) publisher.publish(doc.uri, false);
       publisher.publishFiles();
@@ -134,6 +136,7 @@ export function startServer(argv: readonly string[]): Connection {
   // file changed, or a file an open script's config or settings resolved to (a lexicon).
   connection.onDidChangeWatchedFiles((p) => {
     const paths = uriPaths(p.changes.map((c) => c.uri));
+    records.index.changed(paths);
     if (paths.some((f) => isConfigFile(f) || store.dependsOn(f))) void recheckAll();
   });
 

@@ -12,6 +12,12 @@ import { uriToPath } from '../node/nodeFs';
  */
 export const CONFIG_GLOB = `**/{${CONFIG_FILE_NAMES.join(',')}}`;
 
+/**
+ * Records files and scripts are watched too: rung hovers show the latest ratios from the records
+ * on disk (and the scripts they name), kept in memory until a change is reported.
+ */
+export const RECORDS_AND_SCRIPTS_GLOB = '**/*.{rungs,rates.csv,rates.tsv}';
+
 export const isConfigFile = (path: string): boolean => CONFIG_FILE_NAMES.includes(basename(path));
 
 /** Glob metacharacters in a file name matched literally. */
@@ -28,7 +34,7 @@ export function fileWatchers(lexiconPaths: string[], relativePatterns: boolean):
       ? { globPattern: { baseUri: pathToFileURL(dirname(p)).href, pattern: globLiteral(basename(p)) } }
       : { globPattern: `**/${globLiteral(basename(p))}` },
   );
-  return [{ globPattern: CONFIG_GLOB }, ...lexicons];
+  return [{ globPattern: CONFIG_GLOB }, { globPattern: RECORDS_AND_SCRIPTS_GLOB }, ...lexicons];
 }
 
 /** File-system paths of file: URIs (others have none). */
