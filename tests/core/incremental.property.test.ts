@@ -1,19 +1,49 @@
 // Property: the incremental path (core/segments.ts, used by the language server) gives exactly
 // what a fresh `analyze` of the same text gives, after every edit of a long random sequence:
-// items, problems (the core's and every rule's), rung summaries and the parsed script. Edits
+// items, problems (the core's and every rule's), rung summaries and the parsed script, and what
+// the server keeps per rung or per problem: lines, ladder statistics, session lengths (code lens),
+// converted diagnostics and the published message. Edits
 // are typed text, deletions, line splits and joins, rung headers added and removed, settings and
 // pronunciations changed, and editor options changed. The reference is the CLI's own path.
 import { fc, test } from '@fast-check/vitest';
 import { expect, it } from 'vitest';
 import { analyze, type AnalyzeOutput } from '../../server/src/core/analyze';
 import { defaultOptions } from '../../server/src/core/options';
-import { analyzeSegments, segmentsOf, type SegmentState } from '../../server/src/core/segments';
+import { analyzeSegments, segmentLines, segmentsOf, type SegmentState } from '../../server/src/core/segments';
+import { splitLines } from '../../server/src/core/parse';
+import { planSession, sessionLengths } from '../../server/src/core/timing';
+import { diagnosticsOf, messageBytes } from '../../server/src/lsp/diagnostics';
+import { toLspDiagnostic } from '../../server/src/lsp/convert';
+import { rungStat } from '../../server/src/rules/shared';
+import { LADDER_METRICS } from '../../server/src/rules/types';
 import type { AnalysisOptions } from '../../server/src/core/types';
 import { lint, renderFindings } from '../../server/src/rules/index';
 import { words } from '../helpers/data';
 import { bigScript } from '../lsp/bigScript';
 
 const START = bigScript(60, 12);
+
+const URI = 'file:///w/a.rungs';
+
+/**
+ * What the language server builds on the analysis, kept per rung and converted once per problem:
+ * the lines, every rung's summary on every ladder metric, the session lengths the code lens and
+ * hovers show, the problems as LSP diagnostics and the bytes of their publish message. For the
+ * incremental path these come from what the previous analyses kept; the fresh one works them out.
+ */
+const served = (a: AnalyzeOutput, text: string, lines: string[]) => {
+  const problems = lint(a, text, undefined, lines);
+  const diagnostics = diagnosticsOf(problems, URI);
+  const message = { jsonrpc: '2.0', method: 'textDocument/publishDiagnostics', params: { uri: URI, version: 1, diagnostics } };
+  return JSON.stringify({
+    lines,
+    stats: LADDER_METRICS.map((m) => a.rungs.filter((r) => r.items.length).map((r) => rungStat(r, m)).map((st) => [st.rung.index, st.values, st.median, st.min, st.max])),
+    lengths: sessionLengths(a),
+    echo: sessionLengths(a, 'echo'),
+    diagnostics,
+    message: JSON.parse(messageBytes(message as never).toString('utf-8')),
+  });
+};
 
 /**
  * Everything a reader of the analysis sees: the parsed script, every item's scores, every rung's
@@ -91,6 +121,7 @@ test.prop([fc.array(editArb, { minLength: 40, maxLength: 60 })], { numRuns: 40 }
       const fresh = analyze({ text, data: words, options, reuse });
       reuse = fresh.pronouncer;
       expect(view(state.output, text)).toBe(view(fresh, text));
+      expect(served(state.output, text, segmentLines(state))).toBe(served(fresh, text, splitLines(text)));
     }
   },
   300_000,
@@ -124,3 +155,17 @@ test.prop([fc.string({ unit: fc.constantFrom('a', ' ', '=', '\n', '\r', '\t', '\
     expect(segs.slice(1).map((s) => s.line)).toEqual(headers);
   },
 );
+
+it('kept session lengths equal planning afresh, and kept diagnostics equal converting afresh', () => {
+  // A fresh analysis (nothing kept yet) checked against the functions the caches stand in for.
+  const a = analyze({ text: START, data: words });
+  const lengths = sessionLengths(a);
+  for (const r of a.rungs) {
+    // computed: a rung's length is its own plan's (planSession with that rung and pace).
+    expect(lengths.rungs[r.index].paces.map((p) => p.seconds)).toEqual(r.paces.map((pace) => planSession(a, { rung: r.index, pace }).seconds));
+  }
+  // computed: the whole script's length is the plan of every rung at that pace, summed rung by rung.
+  for (const [k, pace] of a.options.paces.entries()) expect(lengths.script[k].seconds).toBeCloseTo(planSession(a, { pace }).seconds, 9);
+  const problems = lint(a, START);
+  expect(JSON.stringify(diagnosticsOf(problems, URI))).toBe(JSON.stringify(problems.map((p) => toLspDiagnostic(p, URI))));
+});
