@@ -2,8 +2,7 @@
 // command. The edit itself is the unsorted-rung rule's (rules/unsortedRung.ts): item lines move
 // byte-identical with the comments directly above them, every other line keeps its place.
 import type { RungAnalysis, TextEdit } from '../core/types';
-import { lineBreaks } from '../core/parse';
-import { sortRungEdit } from '../rules/unsortedRung';
+import { rungRegion, sortRegion } from '../rules/sortRegion';
 import type { Snapshot } from './documents';
 
 const needsSort = new WeakMap<RungAnalysis, boolean>();
@@ -21,9 +20,11 @@ export function rungNeedsSort(s: Snapshot, rung: RungAnalysis): boolean {
 /** The edit that sorts a rung, or null when it is already in order (or has fewer than two items). */
 export function sortRung(s: Snapshot, rung: RungAnalysis): TextEdit | null {
   const dir = s.analysis.options.direction === 'falling' ? -1 : 1;
-  const e = sortRungEdit({ analysis: s.analysis, lines: s.lines, text: s.text }, rung, dir);
+  // The rung's own lines, so asking whether a rung needs sorting reads that rung, not the script.
+  const region = rungRegion({ analysis: s.analysis, lines: s.lines, text: s.text }, rung);
+  const e = sortRegion(region, rung, dir);
   if (!e) return null;
-  const breaks = lineBreaks(s.text);
-  const current = s.lines.slice(e.line, e.endLine + 1).map((l, i, a) => (i < a.length - 1 ? l + breaks[e.line + i] : l)).join('');
-  return current === e.newText ? null : e;
+  const parts: string[] = [];
+  for (let l = e.line; l <= e.endLine; l++) parts.push(region.lines[l - region.first], l < e.endLine ? region.breaks[l - region.first] : '');
+  return parts.join('') === e.newText ? null : e;
 }
