@@ -9,27 +9,35 @@ import { diff, diffMarked, ESTIMATED_MARK, estimatedWords, md, secs } from './di
 export function inlayHints(s: Snapshot, range: Range): InlayHint[] {
   if (!s.settings.inlayHints.enabled) return [];
   const hints: InlayHint[] = [];
-  for (const rung of s.analysis.rungs) {
+  // Items are in line order: find the first one in the range, then read only the range.
+  const items = s.analysis.items;
+  let lo = 0;
+  let hi = items.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (items[mid].node.line < range.start.line) lo = mid + 1;
+    else hi = mid;
+  }
+  for (let k = lo; k < items.length && items[k].node.line <= range.end.line; k++) {
+    const item = items[k];
+    const rung = s.analysis.rungs[item.rung];
     const pace = rung.paces[0];
-    for (const item of rung.items) {
-      const line = item.node.line;
-      if (line < range.start.line || line > range.end.line) continue;
-      const t = item.timings[0];
-      const raw = s.lines[line] ?? '';
-      const n = item.estimatedWords;
-      const estimated = item.words.filter((w) => isEstimated(w)).map((w) => md(w.spoken));
-      const note = n ? ` ${ESTIMATED_MARK} ${estimatedWords(n)} (${[...new Set(estimated)].join(', ')}), so the difficulty is approximate.` : '';
-      hints.push({
-        position: { line, character: raw.trimEnd().length },
-        label: `${secs(t.seconds)} @ ${pace.label} · D ${diffMarked(item.difficulty, n)}`,
-        kind: InlayHintKind.Type,
-        paddingLeft: true,
-        tooltip: {
-          kind: MarkupKind.Markdown,
-          value: `Projected ${secs(t.seconds)} at ${pace.label} (no pauses); difficulty ${diff(item.difficulty)}, rank ${item.rank} of ${rung.items.length} in "${md(rung.node.name)}".${note}`,
-        },
-      });
-    }
+    const line = item.node.line;
+    const t = item.timings[0];
+    const raw = s.lines[line] ?? '';
+    const n = item.estimatedWords;
+    const estimated = item.words.filter((w) => isEstimated(w)).map((w) => md(w.spoken));
+    const note = n ? ` ${ESTIMATED_MARK} ${estimatedWords(n)} (${[...new Set(estimated)].join(', ')}), so the difficulty is approximate.` : '';
+    hints.push({
+      position: { line, character: raw.trimEnd().length },
+      label: `${secs(t.seconds)} @ ${pace.label} · D ${diffMarked(item.difficulty, n)}`,
+      kind: InlayHintKind.Type,
+      paddingLeft: true,
+      tooltip: {
+        kind: MarkupKind.Markdown,
+        value: `Projected ${secs(t.seconds)} at ${pace.label} (no pauses); difficulty ${diff(item.difficulty)}, rank ${item.rank} of ${rung.items.length} in "${md(rung.node.name)}".${note}`,
+      },
+    });
   }
   return hints;
 }
