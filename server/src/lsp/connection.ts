@@ -32,6 +32,9 @@ export function openConnection(argv: readonly string[]): Connection {
   console.info = (...a: unknown[]) => connection.console.info(a.map(String).join(' '));
   console.warn = (...a: unknown[]) => connection.console.warn(a.map(String).join(' '));
   console.error = (...a: unknown[]) => connection.console.error(a.map(String).join(' '));
+  // The library patches these too when it opens standard I/O itself; here it is handed the streams.
+  console.debug = console.log;
+  console.trace = console.error;
   process.on('uncaughtException', (e) => connection.console.error(`uncaught: ${e.stack ?? e.message}`));
   process.on('unhandledRejection', (e) => connection.console.error(`unhandled rejection: ${String(e)}`));
   return connection;
