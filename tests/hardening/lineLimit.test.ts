@@ -42,6 +42,14 @@ describe('boundText', () => {
     ]);
   });
 
+  it('keeps a line cut to nothing between a CR and an LF break as a line of its own', () => {
+    // Found by the property below (counterexample ["\r😀\né", 1, 4]): the pair cannot be split,
+    // so the line keeps nothing, and its LF must not join the CR before it into one CRLF break.
+    const r = boundText('\r😀\né', 1, 100);
+    expect(splitLines(r.text)).toEqual(['', '', 'é']);
+    expect(r.findings.map((f) => [f.kind, f.line])).toEqual([['line-over-limit', 1]]);
+  });
+
   it('does not split a surrogate pair', () => {
     // "ab😀": the emoji is two UTF-16 code units at 2 and 3 (computed); a cut at 3 keeps "ab".
     expect(boundText('ab😀cd', 3, 100).text).toBe('ab');

@@ -60,8 +60,9 @@ function utf8Length(text: string, from: number, to: number): number {
 export function boundText(text: string, maxLine = MAX_LINE_CHARS, maxBytes = MAX_SCRIPT_BYTES): BoundedText {
   if (withinBounds(text, maxLine, maxBytes)) return { text, findings: [] };
   const findings: Finding[] = [];
-  // The spans left out, in order; the text is rebuilt only when there is one.
-  const dropped: [number, number][] = [];
+  // The spans left out (with what stands in their place), in order; the text is rebuilt only when
+  // there is one.
+  const dropped: [number, number, string][] = [];
   const countBytes = maxBytes < text.length * 3;
   let bytes = 0;
   let line = 0;
@@ -77,12 +78,16 @@ export function boundText(text: string, maxLine = MAX_LINE_CHARS, maxBytes = MAX
     if (countBytes) bytes += utf8Length(text, start, start + kept) + brk;
     if (bytes > maxBytes) {
       findings.push(finding({ line, character: 0, endLine: line, endCharacter: length }, { kind: 'script-over-limit', limit: maxBytes, checkedLines: line }));
-      dropped.push([start, text.length]);
+      dropped.push([start, text.length, '']);
       break;
     }
     if (kept < length) {
       findings.push(finding({ line, character: kept, endLine: line, endCharacter: length }, { kind: 'line-over-limit', limit: maxLine, length }));
-      dropped.push([start + kept, end]);
+      // A line cut to nothing between a lone CR break and its own LF break would join the two into
+      // one CRLF break and lose a line; its LF is then analysed as a CR (the analysed text is
+      // never written back, and a line break of either kind ends the line at the same place).
+      const joins = kept === 0 && brk === 1 && text.charCodeAt(end) === 10 && start > 0 && text.charCodeAt(start - 1) === 13;
+      dropped.push(joins ? [start, end + 1, '\r'] : [start + kept, end, '']);
     }
     if (brk === 0) break;
     start = end + brk;
@@ -91,8 +96,8 @@ export function boundText(text: string, maxLine = MAX_LINE_CHARS, maxBytes = MAX
   if (!dropped.length) return { text, findings };
   const parts: string[] = [];
   let at = 0;
-  for (const [from, to] of dropped) {
-    parts.push(text.slice(at, from));
+  for (const [from, to, instead] of dropped) {
+    parts.push(text.slice(at, from), instead);
     at = to;
   }
   parts.push(text.slice(at));
