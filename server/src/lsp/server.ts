@@ -10,6 +10,7 @@ import {
   type Connection,
   type InitializeResult,
 } from 'vscode-languageserver/node';
+import { setFlagsFromString } from 'node:v8';
 import { VERSION } from '../version';
 import { FIX_ALL_KIND } from './codeActions';
 import { SORT_RUNG_COMMAND } from './codeLens';
@@ -32,6 +33,11 @@ export { PUBLISH_DELAY_MS } from './publisher';
  * The caller passes them: the CLI edge (`rungs lsp`) or the bundle's entry (lsp/main.ts).
  */
 export function startServer(argv: readonly string[]): Connection {
+  // The server lives as long as the editor and makes short-lived garbage on every keystroke: its
+  // young generation is kept at the runtime's initial size rather than left to grow to tens of
+  // megabytes. Measured with the benchmark's 10,000-item script (README "Speed"): about 30-40 MB
+  // less resident memory, edit latency unchanged within noise, a little more collector time.
+  setFlagsFromString('--semi-space-growth-factor=1');
   const connection = openConnection(argv);
   // Changes are clamped to the document before they are applied (lsp/safeTextDocument.ts).
   const documents = new TextDocuments(SafeTextDocument);
