@@ -96,6 +96,7 @@ export function checkScript(input: CheckInput): CheckResult {
   const cut = bounded.findings.length > 0;
   const analysis = cut ? { ...segments.output, findings: [...segments.output.findings, ...bounded.findings] } : segments.output;
   let problems: Problem[] | undefined;
+  let cutLines: string[] | undefined;
   // Positions in the analysed part lie in the original lines too. With a part cut off no fix is
   // offered: a fix built from the part (a sorted rung, say) could drop what lies past the bound.
   const problemsWith = (lines: string[]) =>
@@ -104,11 +105,11 @@ export function checkScript(input: CheckInput): CheckResult {
     text: input.text,
     analysis,
     get problems() {
-      return problemsWith(this.lines);
+      return problems ?? problemsWith(this.lines);
     },
     problemsWith,
     get lines() {
-      return cut ? splitLines(input.text) : segmentLines(segments);
+      return cut ? (cutLines ??= splitLines(input.text)) : segmentLines(segments);
     },
     fileProblems: ctx.findings.map(({ file, finding }) => ({ file, problem: renderFindings([finding])[0] })),
     dependencies: [...seen],

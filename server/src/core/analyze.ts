@@ -1,7 +1,7 @@
 // The analysis core: text and options in, plain data out. No files, no protocol, no process:
 // the CLI, the language server and the tests all call `analyze` the same way.
 import { finding, type Finding } from './findings';
-import { composite, difficultyComponents, median } from './difficulty';
+import { composite, difficultyComponents, medianOfSorted } from './difficulty';
 import { applySettings, defaultOptions } from './options';
 import { scoringKey } from './settings';
 import { timeAt } from './pace';
@@ -326,7 +326,8 @@ export function analyzeRung(node: RungNode, index: number, shared: RungContext, 
     index,
     paces,
     items: rungItems,
-    median: ordered ? (n === 0 ? 0 : n % 2 ? sorted[n >> 1] : (sorted[(n >> 1) - 1] + sorted[n >> 1]) / 2) : median(ds),
+    // A typed array sorts a NaN last, as `median` would: the same median either way.
+    median: medianOfSorted(sorted),
     min: ordered ? (n ? sorted[0] : 0) : ds.reduce((m, d) => Math.min(m, d), n ? Infinity : 0),
     max: ordered ? (n ? sorted[n - 1] : 0) : ds.reduce((m, d) => Math.max(m, d), n ? -Infinity : 0),
     totalSeconds: paces.map((_, pi) => rungItems.reduce((sum, it) => sum + it.timings[pi].seconds, 0)),

@@ -52,7 +52,12 @@ export function median(values: ArrayLike<number>): number {
   if (values.length === 0) return 0;
   // A typed array sorts numerically without a comparator call per pair: several times faster on
   // the rung sizes of a large library.
-  const s = Float64Array.from(values).sort();
+  return medianOfSorted(Float64Array.from(values).sort());
+}
+
+/** Median of a list already sorted in ascending order (0 for an empty list). */
+export function medianOfSorted(s: ArrayLike<number>): number {
+  if (s.length === 0) return 0;
   const mid = s.length >> 1;
   return s.length % 2 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
 }

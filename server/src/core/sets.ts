@@ -170,9 +170,9 @@ export function setGroups(analysis: Analysis, scope: SetScope): { rung: number |
 const ownLabels: LabelsOf = (i) => i.sets;
 
 /** Labels in order of first appearance (the items' own labels unless `labelsOf` says otherwise). */
-export function setLabels(analysis: Analysis, labelsOf?: LabelsOf): string[] {
+export function setLabels(analysis: Analysis, labelsOf: LabelsOf = ownLabels): string[] {
   const seen: string[] = [];
-  if (labelsOf) {
+  if (labelsOf !== ownLabels) {
     for (const it of analysis.items) for (const l of labelsOf(it)) if (!seen.includes(l)) seen.push(l);
     return seen;
   }
@@ -210,7 +210,7 @@ export function compareSets(analysis: Analysis, options: Partial<SetOptions> = {
     setMinItems: options.setMinItems ?? analysis.options.setMinItems ?? DEFAULT_SET_OPTIONS.setMinItems,
     setScope: options.setScope ?? analysis.options.setScope ?? DEFAULT_SET_OPTIONS.setScope,
   };
-  const labels = setLabels(analysis, labelsOf === ownLabels ? undefined : labelsOf);
+  const labels = setLabels(analysis, labelsOf);
   const pairs: SetPair[] = [];
   const small: SmallSet[] = [];
   if (labels.length < 2) return { scope: o.setScope, bound: o.setBound, minItems: o.setMinItems, labels, pairs, small };

@@ -78,17 +78,18 @@ export class RecordsIndex {
       for (const k of this.progress.keys()) if (!found.has(k)) this.progress.delete(k);
     }
     const latest: LatestRatios[] = [];
+    const settings = `${this.today()}|${JSON.stringify(editor ?? null)}`;
     for (const file of this.files) {
-      const p = this.progressOf(file, editor);
+      const p = this.progressOf(file, editor, settings);
       if (p) latest.push(p.latest);
     }
     return rungRecordsNote(scriptPath, rungIndex, latest);
   }
 
-  private progressOf(file: string, editor: EditorLayer): Progress | null {
+  /** A records file's progress; `key` names the editor settings and the day it is read with. */
+  private progressOf(file: string, editor: EditorLayer, key: string): Progress | null {
     const text = this.text(file);
     if (text === null) return null;
-    const key = `${this.today()}|${JSON.stringify(editor ?? null)}`;
     const k = pathKey(file);
     const hit = this.progress.get(k);
     if (hit && hit.text === text && hit.key === key && [...hit.scripts].every(([p, t]) => this.text(p) === t)) return hit;
