@@ -145,7 +145,7 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, seed
   return {
     items: itemLines.length,
     openMs,
-    edit: { ...stat(editMs), cpuMs: editCpuMs },
+    edit: { ...stat(editMs), cpuMs: editCpuMs, times: editMs },
     hover: stat(hoverMs),
     inlay: stat(inlayMs),
     codeLens: stat(lensMs),

@@ -100,7 +100,8 @@ export class Publisher {
         // script is a cold start, not an edit, so it does not count).
         const t0 = performance.now();
         this.publish(uri);
-        this.publishDelay.record(performance.now() - t0);
+        const t1 = performance.now();
+        this.publishDelay.record(t1 - t0, t1);
       }, delay),
     );
   }

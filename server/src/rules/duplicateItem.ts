@@ -3,14 +3,7 @@ import type { ItemAnalysis, ItemNode, TextEdit } from '../core/types';
 import type { Report, Rule, RuleContext } from './types';
 import { itemRange, rungLabel } from './shared';
 import { excerpt } from '../core/excerpt';
-import { rungKeyHashes, spokenKey } from './itemKey';
-
-/** The first earlier item with the same key as `text`, among the first items whose numbers met. */
-function sameKey(firsts: ItemAnalysis | ItemAnalysis[], text: string): ItemAnalysis | undefined {
-  const key = spokenKey(text);
-  if (!Array.isArray(firsts)) return spokenKey(firsts.node.text) === key ? firsts : undefined;
-  return firsts.find((f) => spokenKey(f.node.text) === key);
-}
+import { repeatsOf } from './repeats';
 
 export const duplicateItem: Rule = {
   id: 'duplicate-item',
@@ -27,26 +20,7 @@ export const duplicateItem: Rule = {
     'item). When it is, allow it with a `// rungs: allow duplicate-item` line above it.',
   ].join(' '),
   check(ctx, report) {
-    // First items by key number: one item, or a list once different keys share a number.
-    const seen = new Map<number, ItemAnalysis | ItemAnalysis[]>();
-    // Rung by rung, which is the order of the script's items.
-    for (const r of ctx.analysis.rungs) {
-      const hashes = rungKeyHashes(r);
-      for (let k = 0; k < hashes.length; k++) {
-        const it = r.items[k];
-        const h = hashes[k];
-        if (h < 0) continue;
-        const firsts = seen.get(h);
-        const first = firsts === undefined ? undefined : sameKey(firsts, it.node.text);
-        if (!first) {
-          if (firsts === undefined) seen.set(h, it);
-          else if (Array.isArray(firsts)) firsts.push(it);
-          else seen.set(h, [firsts, it]);
-          continue;
-        }
-        report(repeatReport(ctx, it, first));
-      }
-    }
+    for (const { item, first } of repeatsOf(ctx.analysis.rungs)) report(repeatReport(ctx, item, first));
   },
 };
 
