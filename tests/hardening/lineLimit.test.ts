@@ -11,7 +11,7 @@ import { main } from '../../server/src/cli/main';
 import { nodeFs } from '../../server/src/cli/nodeIo';
 import { MAX_FILE_BYTES } from '../../server/src/node/boundedRead';
 import { splitLines } from '../../server/src/core/parse';
-import { boundText, MAX_LINE_CHARS, MAX_SCRIPT_BYTES } from '../../server/src/core/limits';
+import { boundText, MAX_LINE_CHARS, MAX_SCRIPT_BYTES, withinBounds } from '../../server/src/core/limits';
 import { words } from '../helpers/data';
 
 let dir: string;
@@ -28,6 +28,17 @@ async function run(argv: string[]) {
 }
 
 describe('boundText', () => {
+  // The quick check against the definition it stands for: no carriage return, at most a third of
+  // the byte bound in UTF-16 units, and every line (split at \n) at most maxLine long.
+  fcIt.prop(
+    [fc.array(fc.oneof(fc.constantFrom('', 'a', 'ab', 'abcd', 'abcdefgh', 'xyz\u00e9'), fc.string({ maxLength: 12 })), { maxLength: 30 }), fc.integer({ min: 0, max: 9 }), fc.integer({ min: 0, max: 400 })],
+    { numRuns: 2000 },
+  )('the quick check agrees with its definition', (lines, maxLine, maxBytes) => {
+    const text = lines.join('\n');
+    const expected = !text.includes('\r') && maxBytes >= text.length * 3 && text.split('\n').every((l) => l.length <= maxLine);
+    expect(withinBounds(text, maxLine, maxBytes)).toBe(expected);
+  });
+
   it('returns the text itself when nothing is over a bound', () => {
     const t = 'a\r\nbb\rccc\n';
     expect(boundText(t, 3, 100)).toEqual({ text: t, findings: [] });

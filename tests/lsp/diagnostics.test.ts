@@ -1,10 +1,11 @@
 // Publishing converts each problem once and writes each diagnostic's JSON once
 // (server/src/lsp/diagnostics.ts). The bytes sent must be what the protocol library would send:
 // JSON.stringify of the message (ECMA-404 JSON, UTF-8), byte for byte.
+import { fc, it as fcIt } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
 import type { Problem } from '../../server/src/core/types';
 import { toLspDiagnostic } from '../../server/src/lsp/convert';
-import { diagnosticsOf, messageBytes } from '../../server/src/lsp/diagnostics';
+import { diagnosticsOf, messageBytes, sameEnds } from '../../server/src/lsp/diagnostics';
 
 const problem = (message: string, line = 2): Problem => ({
   line,
@@ -45,4 +46,31 @@ describe('published diagnostics', () => {
     const other = { jsonrpc: '2.0', id: 3, result: { contents: 'é' } };
     expect(messageBytes(other as never).equals(Buffer.from(JSON.stringify(other), 'utf-8'))).toBe(true);
   });
+
+  // One publish after another takes the problems at the start and end that the last publish had
+  // from it: whatever the lists, each publish must still be exactly its own conversion and JSON.
+  const POOL = Array.from({ length: 12 }, (_, i) => problem(i % 3 ? `problem ${i} “é” \u2028` : `p${i}`, i));
+  const list = fc.array(fc.nat({ max: POOL.length - 1 }), { maxLength: 14 }).map((ks) => ks.map((k) => POOL[k]));
+  fcIt.prop([fc.array(fc.tuple(list, fc.constantFrom('file:///w/a.rungs', 'file:///w/b.rungs')), { minLength: 1, maxLength: 12 })], { numRuns: 300 })(
+    'each of a run of publishes is its own conversion and JSON, byte for byte',
+    (publishes) => {
+      let version = 0;
+      for (const [problems, uri] of publishes) {
+        const ds = diagnosticsOf(problems, uri);
+        expect(ds).toEqual(problems.map((p) => toLspDiagnostic(p, uri)));
+        const msg = { jsonrpc: '2.0', method: 'textDocument/publishDiagnostics', params: { uri, version: ++version, diagnostics: ds } };
+        expect(messageBytes(msg as never).toString('utf-8')).toBe(JSON.stringify(msg));
+      }
+    },
+  );
+
+  it('finds the shared ends of two lists without letting them overlap', () => {
+    // computed by hand
+    expect(sameEnds([1, 2, 3, 4], [1, 2, 9, 4])).toEqual([2, 1]);
+    expect(sameEnds([1, 2, 1], [1, 2, 1])).toEqual([3, 0]);
+    expect(sameEnds([1, 1], [1, 1, 1])).toEqual([2, 0]);
+    expect(sameEnds([5, 1], [1])).toEqual([0, 1]);
+    expect(sameEnds([], [1])).toEqual([0, 0]);
+  });
 });
+

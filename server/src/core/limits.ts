@@ -29,17 +29,22 @@ function cutAt(text: string, at: number): number {
 
 /**
  * The common case answered quickly (the language server bounds the text on every keystroke): no
- * carriage return, too short to reach the byte bound, and no line longer than the line bound,
- * found with the native line search rather than a loop over every character.
+ * carriage return, too short to reach the byte bound, and no line longer than the line bound.
+ * Every line is short enough exactly when, from the start of each line, a line break stands
+ * within the next maxLine + 1 characters (or the text ends first), so the search jumps from a
+ * break to the last break of that window instead of visiting every line: a few dozen native
+ * searches for a 10,000-line script. Each character is searched at most twice.
  */
-function withinBounds(text: string, maxLine: number, maxBytes: number): boolean {
+export function withinBounds(text: string, maxLine: number, maxBytes: number): boolean {
   if (maxBytes < text.length * 3 || text.includes('\r')) return false;
-  for (let start = 0; ; ) {
-    const end = text.indexOf('\n', start);
-    if ((end < 0 ? text.length : end) - start > maxLine) return false;
-    if (end < 0) return true;
+  const n = text.length;
+  let start = 0;
+  while (n - start > maxLine) {
+    const end = text.lastIndexOf('\n', start + maxLine);
+    if (end < start) return false;
     start = end + 1;
   }
+  return true;
 }
 
 /** UTF-8 length of text[from, to), counting a lone surrogate as 3 bytes (as U+FFFD). */
