@@ -137,8 +137,29 @@ function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis): Problem[] {
   if (!out) {
     const found: Problem[] = [];
     rule.checkRung!(ctx, r, (p) => found.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
-    m.set(key, (out = found));
+    m.set(key, (out = sayAgain(`${key}|${r.index}`, found)));
   }
+  return out;
+}
+
+/**
+ * What each rung-local rule last found at each rung place, by what the problems say. A rung an
+ * edit touched is checked again and mostly says what it said before (the same outliers, the same
+ * estimated words); handing on the earlier problem objects lets the server send the diagnostics
+ * it converted and wrote before. Only rungs checked again pay for it.
+ */
+const saidAt = new Map<string, Map<string, Problem>>();
+
+function sayAgain(place: string, found: Problem[]): Problem[] {
+  const before = saidAt.get(place);
+  const now = new Map<string, Problem>();
+  const out = found.map((p) => {
+    const key = JSON.stringify(p);
+    const same = before?.get(key) ?? p;
+    now.set(key, same);
+    return same;
+  });
+  saidAt.set(place, now);
   return out;
 }
 
@@ -183,12 +204,31 @@ function mergeSorted(a: Problem[], b: Problem[]): Problem[] {
  */
 const wrapped = new WeakMap<object, Problem>();
 
+/**
+ * Problems of script-wide rules by what they say, from the last check and the one running: a
+ * ladder rule builds new reports on every check, but a step between two rungs an edit did not
+ * touch says the same as before, and handing on the same problem object lets the server send the
+ * diagnostic it converted and wrote before.
+ */
+let saidBefore = new Map<string, Problem>();
+let saidNow = new Map<string, Problem>();
+
+/** What each problem says (its JSON), worked out once per problem. */
+const saying = new WeakMap<Problem, string>();
+
 function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
   const hit = wrapped.get(p);
-  if (hit && hit.rule === rule.id) return hit;
+  if (hit && hit.rule === rule.id) {
+    saidNow.set(saying.get(hit)!, hit);
+    return hit;
+  }
   const out = { ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity };
-  wrapped.set(p, out);
-  return out;
+  const key = JSON.stringify(out);
+  const problem = saidNow.get(key) ?? saidBefore.get(key) ?? out;
+  saidNow.set(key, problem);
+  saying.set(problem, key);
+  wrapped.set(p, problem);
+  return problem;
 }
 
 /**
@@ -205,6 +245,8 @@ export function lint(
   lines: string[] = splitLines(text),
 ): Problem[] {
   const global: Problem[] = [];
+  saidBefore = saidNow;
+  saidNow = new Map();
   // Per rung, the reports of each rung-local rule that ran cleanly.
   const rungParts: Problem[][][] = analysis.rungs.map(() => []);
   // A copy: failures caught below are added for internal-error, which runs last.

@@ -1,0 +1,36 @@
+// After an edit inside one rung, lint hands on the same problem objects for everything that says
+// what it said before (server/src/rules/index.ts: script-wide rules by what they say, rung-local
+// rules by rung place), so the language server converts and writes only what changed. The
+// problems must still be exactly those of a fresh analysis of the edited text.
+import { describe, expect, it } from 'vitest';
+import { analyze } from '../../server/src/core/analyze';
+import { analyzeSegments } from '../../server/src/core/segments';
+import { lint } from '../../server/src/rules/index';
+import { words } from '../helpers/data';
+import { benchScript } from '../lsp/bigScript';
+
+describe('problems kept across an edit', () => {
+  it('are the same objects where they say the same, and equal a fresh analysis', async () => {
+    const text = await benchScript(2000);
+    const before = lint(analyzeSegments({ text, data: words }, undefined).output, text);
+    // Type a letter into an item of the third rung (a word the dictionary lacks, so new problems come too).
+    const lines = text.split('\n');
+    const at = lines.findIndex((l, i) => i > lines.indexOf('== Level 3') && /^[A-Z]/.test(l));
+    lines[at] = lines[at].replace(' ', ' zq');
+    const edited = lines.join('\n');
+    const state = analyzeSegments({ text, data: words }, undefined);
+    lint(state.output, text);
+    const after = lint(analyzeSegments({ text: edited, data: words }, state).output, edited);
+    expect(JSON.stringify(after)).toBe(JSON.stringify(lint(analyze({ text: edited, data: words }), edited)));
+
+    const earlier = new Map(before.map((p) => [JSON.stringify(p), p]));
+    const kept = after.filter((p) => earlier.get(JSON.stringify(p)) === p).length;
+    const sayingTheSame = after.filter((p) => earlier.has(JSON.stringify(p))).length;
+    // Every problem that says what an earlier one said is that earlier object, ladder rules' included.
+    expect(kept).toBe(sayingTheSame);
+    expect(after.some((p) => p.rule === 'rungs-overlap' || p.rule === 'step-backwards' || p.rule === 'uneven-steps')).toBe(true);
+    expect(sayingTheSame).toBeGreaterThan(after.length - 10);
+    // And the edit's own news is new: the typed word is reported.
+    expect(after.some((p) => p.line === at && p.rule === 'estimated-word' && !earlier.has(JSON.stringify(p)))).toBe(true);
+  });
+});
