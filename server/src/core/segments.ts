@@ -230,7 +230,7 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
     for (const c of oldComments[k]) comments.push(d === 0 ? c : { ...c, line: c.line + d });
   }
   const items: ItemAnalysis[] = [];
-  for (const r of rungs) for (const it of r.items) items.push(it);
+  for (const r of rungs) pushAll(items, r.items);
   // The cache keeps every item seen since the last full analysis; a long session of edits
   // starts a fresh one (the full path keeps only the items in use) before it grows large.
   if (entries.size > 2 * items.length + 1000) return null;

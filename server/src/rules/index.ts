@@ -205,30 +205,37 @@ function mergeSorted(a: Problem[], b: Problem[]): Problem[] {
 const wrapped = new WeakMap<object, Problem>();
 
 /**
- * Problems of script-wide rules by what they say, from the last check and the one running: a
- * ladder rule builds new reports on every check, but a step between two rungs an edit did not
- * touch says the same as before, and handing on the same problem object lets the server send the
- * diagnostic it converted and wrote before.
+ * Problems of script-wide rules by what they say. A ladder rule builds new reports on every
+ * check, but a step between two rungs an edit did not touch says the same as before, and handing
+ * on the same problem object lets the server send the diagnostic it converted and wrote before.
+ * Only reports not seen before are written out to be looked up; the table is cut back to the
+ * last check's problems once it holds twice as many.
  */
-let saidBefore = new Map<string, Problem>();
-let saidNow = new Map<string, Problem>();
-
-/** What each problem says (its JSON), worked out once per problem. */
+let said = new Map<string, Problem>();
+/** What each problem in `said` says. */
 const saying = new WeakMap<Problem, string>();
 
 function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
   const hit = wrapped.get(p);
-  if (hit && hit.rule === rule.id) {
-    saidNow.set(saying.get(hit)!, hit);
-    return hit;
-  }
+  if (hit && hit.rule === rule.id) return hit;
   const out = { ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity };
   const key = JSON.stringify(out);
-  const problem = saidNow.get(key) ?? saidBefore.get(key) ?? out;
-  saidNow.set(key, problem);
-  saying.set(problem, key);
+  let problem = said.get(key);
+  if (!problem) {
+    said.set(key, (problem = out));
+    saying.set(problem, key);
+  }
   wrapped.set(p, problem);
   return problem;
+}
+
+function forgetOldSayings(global: readonly Problem[]): void {
+  if (said.size <= 2 * global.length + 256) return;
+  said = new Map();
+  for (const p of global) {
+    const key = saying.get(p);
+    if (key !== undefined) said.set(key, p);
+  }
 }
 
 /**
@@ -245,8 +252,6 @@ export function lint(
   lines: string[] = splitLines(text),
 ): Problem[] {
   const global: Problem[] = [];
-  saidBefore = saidNow;
-  saidNow = new Map();
   // Per rung, the reports of each rung-local rule that ran cleanly.
   const rungParts: Problem[][][] = analysis.rungs.map(() => []);
   // A copy: failures caught below are added for internal-error, which runs last.
@@ -273,6 +278,7 @@ export function lint(
       ctx.findings.push(internalFailure(rule.id, err));
     }
   }
+  forgetOldSayings(global);
   let local: Problem[] = [];
   analysis.rungs.forEach((r, k) => pushAll(local, sortedRungReports(r, rungParts[k])));
   // Rung-local rules report inside their rung, so the rungs' lists follow each other in order;
