@@ -1,7 +1,7 @@
 // Item 1 of the hardening issue: inputs far larger than any real script must not overflow the call
 // stack (spreads of 100,000+ arguments do), and JSON output is produced in bounded pieces.
 import { describe, expect, it } from 'vitest';
-import { maxOf, minOf, pushAll } from '../../server/src/core/arrays';
+import { concatAll, maxOf, minOf, pushAll } from '../../server/src/core/arrays';
 import { parsePaces } from '../../server/src/core/pace';
 import { parseScript } from '../../server/src/core/parse';
 import { resolveScriptContext } from '../../server/src/config/resolve';
@@ -22,6 +22,17 @@ describe('large inputs', () => {
     expect(maxOf(big)).toBe(999);
     expect(minOf([], 0)).toBe(0);
     expect(pushAll([1], big).length).toBe(N + 1);
+  });
+
+  it('joins more lists than a call can take arguments, in order', () => {
+    // 300,000 lists of 0-2 numbers: chunks of lists, then the chunks.
+    const lists = Array.from({ length: 300_000 }, (_, i) => Array.from({ length: i % 3 }, (_, j) => i * 2 + j));
+    const joined = concatAll(lists);
+    const expected: number[] = [];
+    for (const l of lists) for (const x of l) expected.push(x);
+    expect(joined).toEqual(expected);
+    expect(concatAll([])).toEqual([]);
+    expect(concatAll([[1], [], [2, 3]])).toEqual([1, 2, 3]);
   });
 
   it('reads a @paces line of 200,000 numbers', () => {

@@ -8,6 +8,22 @@ export function pushAll<T>(target: T[], source: readonly T[]): T[] {
   return target;
 }
 
+/** Lists passed to one `concat` call: well below where a call's arguments overflow the stack. */
+const CONCAT_CHUNK = 4096;
+
+/**
+ * The lists one after another in a new array, allocated once at its full length (pushing grows
+ * the array step by step, copying it each time): an edit of a 10,000-item script joins its rungs'
+ * item lists this way. Any number of lists: past CONCAT_CHUNK they are joined in chunks, then
+ * the chunks.
+ */
+export function concatAll<T>(lists: readonly (readonly T[])[]): T[] {
+  if (lists.length <= CONCAT_CHUNK) return ([] as T[]).concat(...(lists as T[][]));
+  const chunks: T[][] = [];
+  for (let i = 0; i < lists.length; i += CONCAT_CHUNK) chunks.push(([] as T[]).concat(...(lists.slice(i, i + CONCAT_CHUNK) as T[][])));
+  return concatAll(chunks);
+}
+
 /** Smallest value, or `empty` when there is none. */
 export function minOf(values: readonly number[], empty = Infinity): number {
   let m = values.length ? Infinity : empty;

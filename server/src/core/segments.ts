@@ -7,7 +7,7 @@
 // (tests/core/incremental.property.test.ts checks this over thousands of random edits).
 import { analyze, analyzeRung, type AnalyzeInput, type AnalyzeOutput, type RungContext } from './analyze';
 import { parseScript, RUNG_KEYS, splitLabels, splitLines } from './parse';
-import { pushAll } from './arrays';
+import { concatAll, pushAll } from './arrays';
 import type { Finding } from './findings';
 import type { CommentLine, ItemAnalysis, RungAnalysis, RungNode, Setting } from './types';
 
@@ -18,6 +18,12 @@ interface Segment {
   text: string;
   /** The segment's lines (splitLines), worked out when first asked for and kept while its text is. */
   lines?: string[];
+  /**
+   * Its part of the whole text's lines: its lines without the empty one after its last line
+   * break, for every segment but the last (kept like `lines`; a segment stays last or not while
+   * the script keeps its number of rungs, which the incremental path requires).
+   */
+  body?: string[];
 }
 
 /** What the next incremental analysis of the same document needs from this one. */
@@ -46,15 +52,13 @@ export function detach(part: string): string {
  */
 export function segmentLines(state: SegmentState): string[] {
   if (state.lines) return state.lines;
-  const out: string[] = [];
   const last = state.segments.length - 1;
-  state.segments.forEach((s, k) => {
+  // Every segment but the last ends with its last line's break: leave out the empty line after it.
+  const parts = state.segments.map((s, k) => {
     const own = (s.lines ??= splitLines(detach(s.text)));
-    // Every segment but the last ends with its last line's break: leave out the empty line after it.
-    const n = k < last ? own.length - 1 : own.length;
-    for (let i = 0; i < n; i++) out.push(own[i]);
+    return (s.body ??= k < last ? own.slice(0, -1) : own);
   });
-  return (state.lines = out);
+  return (state.lines = concatAll(parts));
 }
 
 /** Segments: [head, rung 1, rung 2, ...]; a rung header is a line whose text starts with `==`. */
@@ -98,6 +102,12 @@ export function segmentsOf(text: string): Segment[] {
   }
   out.push({ line: segLine, text: text.slice(segStart) });
   return out;
+}
+
+/** A segment whose text an edit left alone keeps the lines worked out before. */
+function keepLines(now: Segment, before: Segment): void {
+  now.lines = before.lines;
+  now.body = before.body;
 }
 
 function inputKey(input: AnalyzeInput): string {
@@ -171,9 +181,9 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
   const changed: number[] = [];
   for (let k = 1; k < segments.length; k++) {
     if (segments[k].text !== before[k].text) changed.push(k);
-    else segments[k].lines = before[k].lines;
+    else keepLines(segments[k], before[k]);
   }
-  segments[0].lines = before[0].lines;
+  keepLines(segments[0], before[0]);
   if (!changed.length) return old;
   // A rung segment maps to rung k - 1, or k when the head holds an implicit rung of items.
   const offset = old.rungs.length - (before.length - 1);
@@ -229,8 +239,7 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
     for (const f of oldParse[k]) parseFindings.push(d === 0 ? f : shiftFinding(f, d));
     for (const c of oldComments[k]) comments.push(d === 0 ? c : { ...c, line: c.line + d });
   }
-  const items: ItemAnalysis[] = [];
-  for (const r of rungs) pushAll(items, r.items);
+  const items = concatAll(rungs.map((r) => r.items));
   // The cache keeps every item seen since the last full analysis; a long session of edits
   // starts a fresh one (the full path keeps only the items in use) before it grows large.
   if (entries.size > 2 * items.length + 1000) return null;
