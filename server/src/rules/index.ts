@@ -29,6 +29,7 @@ import { stepTooBig } from './stepTooBig';
 import { thinRung } from './thinRung';
 import type { LintSettings, Report, Rule, RuleContext } from './types';
 import { eolOf } from './shared';
+import { Sayings } from './sayings';
 import { unevenSteps } from './unevenSteps';
 import { unknownKey } from './unknownKey';
 import { unknownPhone } from './unknownPhone';
@@ -148,15 +149,15 @@ function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis): Problem[] {
  * estimated words); handing on the earlier problem objects lets the server send the diagnostics
  * it converted and wrote before. Only rungs checked again pay for it.
  */
-const saidAt = new Map<string, Map<string, Problem>>();
+const saidAt = new Map<string, Sayings>();
 
 function sayAgain(place: string, found: Problem[]): Problem[] {
   const before = saidAt.get(place);
-  const now = new Map<string, Problem>();
+  const now = new Sayings();
   const out = found.map((p) => {
-    const key = JSON.stringify(p);
-    const same = before?.get(key) ?? p;
-    now.set(key, same);
+    const json = JSON.stringify(p);
+    const same = before?.find(json) ?? p;
+    now.add(json, same);
     return same;
   });
   saidAt.set(place, now);
@@ -211,31 +212,23 @@ const wrapped = new WeakMap<object, Problem>();
  * Only reports not seen before are written out to be looked up; the table is cut back to the
  * last check's problems once it holds twice as many.
  */
-let said = new Map<string, Problem>();
-/** What each problem in `said` says. */
-const saying = new WeakMap<Problem, string>();
+let said = new Sayings();
 
 function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
   const hit = wrapped.get(p);
   if (hit && hit.rule === rule.id) return hit;
   const out = { ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity };
-  const key = JSON.stringify(out);
-  let problem = said.get(key);
-  if (!problem) {
-    said.set(key, (problem = out));
-    saying.set(problem, key);
-  }
+  const json = JSON.stringify(out);
+  let problem = said.find(json);
+  if (!problem) said.add(json, (problem = out));
   wrapped.set(p, problem);
   return problem;
 }
 
 function forgetOldSayings(global: readonly Problem[]): void {
   if (said.size <= 2 * global.length + 256) return;
-  said = new Map();
-  for (const p of global) {
-    const key = saying.get(p);
-    if (key !== undefined) said.set(key, p);
-  }
+  said = new Sayings();
+  for (const p of global) said.add(JSON.stringify(p), p);
 }
 
 /**

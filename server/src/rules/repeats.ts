@@ -52,6 +52,8 @@ export interface Repeat {
 interface Group {
   holders: readonly RungAnalysis[];
   repeats: Repeat[];
+  /** The last check that looked at it. */
+  check: number;
 }
 
 /**
@@ -67,6 +69,8 @@ class KeyIndex {
   readonly shared = new Set<number>();
   /** The repeats found among each number's items, with the rungs they were found in. */
   readonly groups = new Map<number, Group>();
+  /** Checks made with this index so far. */
+  checks = 0;
 
   moveTo(next: readonly RungAnalysis[]): void {
     const before = this.rungs;
@@ -161,22 +165,21 @@ function groupRepeats(h: number, holders: readonly RungAnalysis[]): Repeat[] {
 export function repeatsOf(rungs: readonly RungAnalysis[]): Repeat[] {
   const index = indexFor(rungs);
   const groups = index.groups;
+  const check = ++index.checks;
   const out: Repeat[] = [];
   let looked = 0;
   const look = (h: number, holders: readonly RungAnalysis[]): void => {
     looked++;
     let g = groups.get(h);
-    if (!g || !sameRungs(g.holders, holders)) groups.set(h, (g = { holders, repeats: groupRepeats(h, holders) }));
+    if (!g || !sameRungs(g.holders, holders)) groups.set(h, (g = { holders, repeats: groupRepeats(h, holders), check }));
+    g.check = check;
     for (const x of g.repeats) out.push(x);
   };
   // Numbers held by two or more rungs, then numbers held twice within one rung only.
   for (const h of index.shared) look(h, (index.where.get(h) as number[]).map((at) => rungs[at]));
   for (const r of rungs) for (const h of rungKeys(r).more.keys()) if (!index.shared.has(h)) look(h, [r]);
-  // Groups of numbers no longer held twice go once they outnumber the live ones.
-  if (groups.size > 2 * looked + 64) {
-    const live = new Set(index.shared);
-    for (const r of rungs) for (const h of rungKeys(r).more.keys()) live.add(h);
-    for (const h of groups.keys()) if (!live.has(h)) groups.delete(h);
-  }
+  // Groups of numbers no longer held twice go at once: they would keep the rungs they were found
+  // in, each with all its items, alive.
+  if (groups.size > looked) for (const [h, g] of groups) if (g.check !== index.checks) groups.delete(h);
   return out.sort((a, b) => a.item.node.line - b.item.node.line);
 }
