@@ -29,7 +29,7 @@ import { stepTooBig } from './stepTooBig';
 import { thinRung } from './thinRung';
 import type { LintSettings, Report, Rule, RuleContext } from './types';
 import { eolOf } from './shared';
-import { Sayings } from './sayings';
+import { lazyFix, Sayings } from './sayings';
 import { unevenSteps } from './unevenSteps';
 import { unknownKey } from './unknownKey';
 import { unknownPhone } from './unknownPhone';
@@ -155,6 +155,7 @@ function sayAgain(place: string, found: Problem[]): Problem[] {
   const before = saidAt.get(place);
   const now = new Sayings();
   const out = found.map((p) => {
+    if (lazyFix(p)) return p;
     const json = JSON.stringify(p);
     const same = before?.find(json) ?? p;
     now.add(json, same);
@@ -218,6 +219,10 @@ function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
   const hit = wrapped.get(p);
   if (hit && hit.rule === rule.id) return hit;
   const out = { ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity };
+  if (lazyFix(out)) {
+    wrapped.set(p, out);
+    return out;
+  }
   const json = JSON.stringify(out);
   let problem = said.find(json);
   if (!problem) said.add(json, (problem = out));
@@ -228,7 +233,7 @@ function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
 function forgetOldSayings(global: readonly Problem[]): void {
   if (said.size <= 2 * global.length + 256) return;
   said = new Sayings();
-  for (const p of global) said.add(JSON.stringify(p), p);
+  for (const p of global) if (!lazyFix(p)) said.add(JSON.stringify(p), p);
 }
 
 /**

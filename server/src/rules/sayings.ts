@@ -13,6 +13,14 @@ function fnv(text: string): number {
   return h >>> 0;
 }
 
+/**
+ * Whether a problem's fix works its edits out only when asked (unsorted-rung sorts the rung then):
+ * writing such a problem out to compare it would do that work on every check, so it is not kept.
+ */
+export function lazyFix(p: Problem): boolean {
+  return p.fix !== undefined && Object.getOwnPropertyDescriptor(p.fix, 'edits')?.get !== undefined;
+}
+
 export class Sayings {
   private readonly byNumber = new Map<number, Problem | Problem[]>();
   private count = 0;
