@@ -157,7 +157,7 @@ function sayAgain(place: string, found: Problem[]): Problem[] {
   const out = found.map((p) => {
     if (lazyFix(p)) return p;
     const json = JSON.stringify(p);
-    const same = before?.find(json) ?? p;
+    const same = before?.find(json, p) ?? p;
     now.add(json, same);
     return same;
   });
@@ -224,7 +224,7 @@ function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
     return out;
   }
   const json = JSON.stringify(out);
-  let problem = said.find(json);
+  let problem = said.find(json, out);
   if (!problem) said.add(json, (problem = out));
   wrapped.set(p, problem);
   return problem;

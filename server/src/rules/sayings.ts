@@ -21,6 +21,30 @@ export function lazyFix(p: Problem): boolean {
   return p.fix !== undefined && Object.getOwnPropertyDescriptor(p.fix, 'edits')?.get !== undefined;
 }
 
+/**
+ * Whether two values write the same JSON, compared without writing either out: the same
+ * primitives, arrays of the same values, and objects with the same keys in the same order holding
+ * the same values (a key holding undefined is left out, as JSON leaves it out).
+ */
+export function sameJson(a: unknown, b: unknown): boolean {
+  if (a === b) return true;
+  if (typeof a !== 'object' || typeof b !== 'object' || a === null || b === null) return false;
+  if (Array.isArray(a) !== Array.isArray(b)) return false;
+  if (Array.isArray(a)) {
+    const y = b as unknown[];
+    if (a.length !== y.length) return false;
+    for (let i = 0; i < a.length; i++) if (!sameJson(a[i] ?? null, y[i] ?? null)) return false;
+    return true;
+  }
+  const x = a as Record<string, unknown>;
+  const y = b as Record<string, unknown>;
+  const xs = Object.keys(x).filter((k) => x[k] !== undefined);
+  const ys = Object.keys(y).filter((k) => y[k] !== undefined);
+  if (xs.length !== ys.length) return false;
+  for (let i = 0; i < xs.length; i++) if (xs[i] !== ys[i] || !sameJson(x[xs[i]], y[ys[i]])) return false;
+  return true;
+}
+
 export class Sayings {
   private readonly byNumber = new Map<number, Problem | Problem[]>();
   private count = 0;
@@ -29,12 +53,12 @@ export class Sayings {
     return this.count;
   }
 
-  /** The problem kept with exactly this JSON, if any. */
-  find(json: string): Problem | undefined {
+  /** The problem kept that says what `p` says (whose JSON is `json`), if any. */
+  find(json: string, p: Problem): Problem | undefined {
     const at = this.byNumber.get(fnv(json));
     if (at === undefined) return undefined;
-    if (!Array.isArray(at)) return JSON.stringify(at) === json ? at : undefined;
-    return at.find((p) => JSON.stringify(p) === json);
+    if (!Array.isArray(at)) return sameJson(at, p) ? at : undefined;
+    return at.find((q) => sameJson(q, p));
   }
 
   /** Keeps `p` under its JSON `json` (the caller found none kept). */
