@@ -13,15 +13,15 @@ import { benchScript } from '../lsp/bigScript';
 describe('problems kept across an edit', () => {
   it('are the same objects where they say the same, and equal a fresh analysis', async () => {
     const text = await benchScript(2000);
-    const before = lint(analyzeSegments({ text, data: words }, undefined).output, text);
+    const before = lint(analyzeSegments({ text, data: words }, undefined).output, text, undefined, undefined, true);
     // Type a letter into an item of the third rung (a word the dictionary lacks, so new problems come too).
     const lines = text.split('\n');
     const at = lines.findIndex((l, i) => i > lines.indexOf('== Level 3') && /^[A-Z]/.test(l));
     lines[at] = lines[at].replace(' ', ' zq');
     const edited = lines.join('\n');
     const state = analyzeSegments({ text, data: words }, undefined);
-    lint(state.output, text);
-    const after = lint(analyzeSegments({ text: edited, data: words }, state).output, edited);
+    lint(state.output, text, undefined, undefined, true);
+    const after = lint(analyzeSegments({ text: edited, data: words }, state).output, edited, undefined, undefined, true);
     expect(JSON.stringify(after)).toBe(JSON.stringify(lint(analyze({ text: edited, data: words }), edited)));
 
     const earlier = new Map(before.map((p) => [JSON.stringify(p), p]));
@@ -43,11 +43,23 @@ describe('a fix worked out only when asked', () => {
     // An unsorted rung's fix sorts the rung when its edits are read; lint must not read them, so
     // the problem is a new object on every check.
     const text = '== One\nThe orthodontist recommended periodontal treatment.\nHi.\n';
-    const problems = lint(analyze({ text, data: words }), text);
+    const problems = lint(analyze({ text, data: words }), text, undefined, undefined, true);
     const unsorted = problems.find((p) => p.rule === 'unsorted-rung')!;
     expect(Object.getOwnPropertyDescriptor(unsorted.fix!, 'edits')?.get).toBeDefined();
-    const again = lint(analyze({ text, data: words }), text);
+    const again = lint(analyze({ text, data: words }), text, undefined, undefined, true);
     expect(again.find((p) => p.rule === 'unsorted-rung')).not.toBe(unsorted);
     expect(unsorted.fix!.edits.length).toBe(1);
   });
 });
+
+describe('a one-off check', () => {
+  it('hands on no earlier problem objects', () => {
+    // The CLI checks each script once: comparing with earlier problems would only cost it.
+    const text = '== One\nGood morning.\nGood morning.\n== Two\nHi.\n';
+    const a = lint(analyze({ text, data: words }), text);
+    const b = lint(analyze({ text, data: words }), text);
+    expect(JSON.stringify(b)).toBe(JSON.stringify(a));
+    expect(b.some((p, i) => p === a[i])).toBe(false);
+  });
+});
+

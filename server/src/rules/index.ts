@@ -130,7 +130,7 @@ export function renderFindings(findings: Finding[]): Problem[] {
  */
 const byRung = new WeakMap<RungAnalysis, Map<string, Problem[]>>();
 
-function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis): Problem[] {
+function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis, keep: boolean): Problem[] {
   let m = byRung.get(r);
   if (!m) byRung.set(r, (m = new Map()));
   const key = `${rule.id}|${eolOf(ctx)}|${JSON.stringify(ctx.settings.ladder ?? null)}`;
@@ -138,7 +138,7 @@ function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis): Problem[] {
   if (!out) {
     const found: Problem[] = [];
     rule.checkRung!(ctx, r, (p) => found.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
-    m.set(key, (out = sayAgain(`${key}|${r.index}`, found)));
+    m.set(key, (out = keep ? sayAgain(`${key}|${r.index}`, found) : found));
   }
   return out;
 }
@@ -215,11 +215,11 @@ const wrapped = new WeakMap<object, Problem>();
  */
 let said = new Sayings();
 
-function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
+function wrap(rule: Rule, p: Parameters<Report>[0], keep: boolean): Problem {
   const hit = wrapped.get(p);
   if (hit && hit.rule === rule.id) return hit;
   const out = { ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity };
-  if (lazyFix(out)) {
+  if (!keep || lazyFix(out)) {
     wrapped.set(p, out);
     return out;
   }
@@ -248,6 +248,11 @@ export function lint(
   settings: LintSettings = { severities: {} },
   /** The text's lines when the caller has them already (the language server's snapshot). */
   lines: string[] = splitLines(text),
+  /**
+   * Hand on earlier problem objects that say the same (the language server, which re-checks the
+   * same script after every edit); a one-off check (the CLI) would only pay for comparing them.
+   */
+  keep = false,
 ): Problem[] {
   const global: Problem[] = [];
   // Per rung, the reports of each rung-local rule that ran cleanly.
@@ -259,7 +264,7 @@ export function lint(
     // internal-error problem and the other rules still run.
     try {
       if (rule.checkRung) {
-        const mine = analysis.rungs.map((r) => rungReports(ctx, rule, r));
+        const mine = analysis.rungs.map((r) => rungReports(ctx, rule, r, keep));
         for (const part of mine) {
           const outside = part.find((p) => !inside(lines, p));
           if (outside) throw outsideError(outside);
@@ -268,7 +273,7 @@ export function lint(
         continue;
       }
       const mine: Problem[] = [];
-      rule.check(ctx, (p) => mine.push(wrap(rule, p)));
+      rule.check(ctx, (p) => mine.push(wrap(rule, p, keep)));
       const outside = mine.find((p) => !inside(lines, p));
       if (outside) throw outsideError(outside);
       pushAll(global, mine);
@@ -276,7 +281,7 @@ export function lint(
       ctx.findings.push(internalFailure(rule.id, err));
     }
   }
-  forgetOldSayings(global);
+  if (keep) forgetOldSayings(global);
   let local: Problem[] = [];
   analysis.rungs.forEach((r, k) => pushAll(local, sortedRungReports(r, rungParts[k])));
   // Rung-local rules report inside their rung, so the rungs' lists follow each other in order;
