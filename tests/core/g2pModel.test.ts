@@ -30,6 +30,22 @@ describe('reading a model file', () => {
     expect(parseModels(both).map((x) => x.header.direction)).toEqual(['forward', 'reverse']);
   });
 
+  it('reads a header that states its entries in one pass, and the same model as when they are counted', () => {
+    const stated = parseModels(file(header({ entries: 7 })));
+    expect(stated).toHaveLength(1);
+    for (const k of ['tok', 'logp', 'bow', 'backoff', 'next', 'firstChild'] as const) expect([...stated[0][k]]).toEqual([...m[k]]);
+    // Two stated models back to back, the second found where the first's entries end.
+    const both = new Uint8Array([...file(header({ entries: 7 })), ...file(header({ entries: 7, direction: 'reverse' }))]);
+    expect(parseModels(both).map((x) => [x.header.direction, x.tok.length])).toEqual([['forward', 7], ['reverse', 7]]);
+  });
+
+  it('refuses a stated count of entries the lines do not match', () => {
+    expect(() => parseModels(file(header({ entries: 8 })))).toThrow(/8 entries stated, 7 found/);
+    expect(() => parseModels(file(header({ entries: 6 })))).toThrow(/more than the 6 entries stated/);
+    expect(() => parseModels(file(header({ entries: -1 })))).toThrow(/entries is not a count/);
+    expect(() => parseModels(file(header({ entries: 'seven' })))).toThrow(/entries is not a count/);
+  });
+
   it('refuses a malformed file with the reason', () => {
     expect(() => parseModels(file(header({ format: 1 })))).toThrow(/format 1 is not supported/);
     expect(() => parseModels(file(header(), [...LINES.slice(0, 6), '1 x -50']))).toThrow(/line 8: not a number/);

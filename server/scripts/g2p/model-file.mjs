@@ -2,11 +2,12 @@
 //
 // Format (Brotli-compressed UTF-8 text, read by server/src/core/g2p/model.ts): two models one after the
 // other, the left-to-right one first, each
-//   a header line: JSON { format, method, direction, scale, params, checksum, graphones },
+//   a header line: JSON { format, method, direction, scale, params, checksum, graphones, entries },
 //   graphone i+1 = graphones[i] (0 is the word boundary), in the order of their keys (format 2),
 //   so the graphones of one letter have consecutive numbers
 //   then one line per n-gram, by order, then context, then token:
 //     <context step> <token> <log10 p x scale> [<log10 backoff x scale>]   (rounded)
+//   `entries` is the number of those lines, so a reader allocates once and reads in one pass.
 //   The context is the n-gram's line number among the entries (0-based; -1 for unigrams), written
 //   as the difference from the previous line's context so that the file compresses well. The
 //   backoff weight is present on n-grams that are the context of a longer one.
@@ -48,7 +49,7 @@ export function inputsChecksum(params) {
 /** Serialises entries from kneserNey() after a header line with the graphone inventory. */
 export function modelText(header, entries) {
   const index = new Map();
-  const lines = [JSON.stringify({ format: FORMAT, scale: SCALE, ...header })];
+  const lines = [JSON.stringify({ format: FORMAT, scale: SCALE, ...header, entries: entries.length })];
   let prevCtx = -1;
   entries.forEach((e, i) => {
     index.set(e.ids.join(' '), i);

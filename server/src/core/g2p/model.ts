@@ -32,6 +32,8 @@ export interface ModelHeader {
   params: Record<string, unknown>;
   checksum: string;
   graphones: string[];
+  /** How many n-gram lines follow the header (files written by the training script state it). */
+  entries?: number;
 }
 
 export interface G2pModel {
@@ -67,23 +69,23 @@ const BRACE = 123;
 /** Parses a model file's bytes (UTF-8): its models in order (each starts with a JSON header line). */
 export function parseModels(bytes: Uint8Array): G2pModel[] {
   const models: G2pModel[] = [];
-  let start = 0;
-  while (start < bytes.length) {
-    let end = start;
-    // The next model starts at a line that begins with '{'.
-    for (;;) {
-      end = bytes.indexOf(NEWLINE, end);
-      if (end < 0 || end + 1 >= bytes.length) {
-        end = bytes.length;
-        break;
-      }
-      end++;
-      if (bytes[end] === BRACE) break;
-    }
-    models.push(parseModel(bytes.subarray(start, end)));
+  for (let start = 0; start < bytes.length; ) {
+    const { model, end } = parseModelAt(bytes, start);
+    models.push(model);
     start = end;
   }
   return models;
+}
+
+/** Where the model starting at `start` ends: at the next line that begins with '{', or the end. */
+function modelEnd(bytes: Uint8Array, start: number): number {
+  let end = start;
+  for (;;) {
+    end = bytes.indexOf(NEWLINE, end);
+    if (end < 0 || end + 1 >= bytes.length) return bytes.length;
+    end++;
+    if (bytes[end] === BRACE) return end;
+  }
 }
 
 function readHeader(bytes: Uint8Array, end: number): ModelHeader {
@@ -113,13 +115,30 @@ function readGraphones(header: ModelHeader): Pick<G2pModel, 'graphones' | 'byLet
 
 /** Parses one model's bytes; throws on a malformed file (the caller reports it once). */
 export function parseModel(bytes: Uint8Array): G2pModel {
-  const firstBreak = bytes.indexOf(NEWLINE);
-  if (firstBreak < 0) throw new Error('pronunciation model has no header line');
-  const header = readHeader(bytes, firstBreak);
+  const { model, end } = parseModelAt(bytes, 0);
+  if (end !== bytes.length) throw new Error('pronunciation model has lines past its entries');
+  return model;
+}
+
+/**
+ * Parses the model whose header line starts at `start`, and says where it ends. A header that
+ * states its number of entries (every file the training script writes) is read in one pass;
+ * otherwise the entries are counted first.
+ */
+function parseModelAt(all: Uint8Array, start: number): { model: G2pModel; end: number } {
+  const headerEnd = all.indexOf(NEWLINE, start);
+  if (headerEnd < 0) throw new Error('pronunciation model has no header line');
+  const header = readHeader(all.subarray(start, headerEnd), headerEnd - start);
+  const stated = header.entries;
+  if (stated !== undefined && !(Number.isInteger(stated) && stated >= 0)) throw new Error('pronunciation model: entries is not a count');
+  const limit = stated === undefined ? modelEnd(all, start) : all.length;
+  const bytes = all.subarray(start, limit);
+  const firstBreak = headerEnd - start;
   const { graphones, byLetters, maxLetters } = readGraphones(header);
   const tokens = graphones.length;
   let n = 0;
-  for (let q = firstBreak + 1; q < bytes.length; q++) if (bytes[q] === NEWLINE) n++;
+  if (stated !== undefined) n = stated;
+  else for (let q = firstBreak + 1; q < bytes.length; q++) if (bytes[q] === NEWLINE) n++;
   const tok = new Uint16Array(n);
   const logp = new Int16Array(n);
   const bow = new Int16Array(n);
@@ -132,6 +151,7 @@ export function parseModel(bytes: Uint8Array): G2pModel {
   let ctx = -1;
   let filled = 0;
   for (let i = 0; i < n; i++) {
+    if (p >= bytes.length) throw new Error(`pronunciation model: ${n} entries stated, ${i} found`);
     let count = 0;
     // A hand-written scan of the integer fields: no string is made for any line.
     while (count < 4) {
@@ -175,7 +195,9 @@ export function parseModel(bytes: Uint8Array): G2pModel {
   if (n < tokens || tok[tokens - 1] !== tokens - 1) throw new Error('pronunciation model lacks unigrams');
   m.start = 0;
   if (firstChild[1] === firstChild[0] && n > tokens) throw new Error('pronunciation model has no word-start context');
-  return m;
+  // After the stated entries: the end of the file or the next model's header line.
+  if (p < bytes.length && bytes[p] !== BRACE) throw new Error(`pronunciation model: more than the ${n} entries stated`);
+  return { model: m, end: start + Math.min(p, bytes.length) };
 }
 
 /** Bytes of a model's n-gram arrays (what it keeps in memory beyond its small graphone list). */
