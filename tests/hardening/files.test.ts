@@ -103,6 +103,17 @@ describe('what a config may read', () => {
     expect(MAX_FILE_BYTES).toBe(32 * 1024 * 1024);
   });
 
+  it('reads a file that states no size to its end, growing the buffer, and still bounds it', () => {
+    // /proc files state a size of 0 (Linux); this process's memory map runs to tens of kilobytes,
+    // several times the first buffer, and every line must come through whole and in order.
+    if (process.platform !== 'linux') return;
+    const smaps = readBytesBounded('/proc/self/smaps').toString('latin1');
+    expect(smaps.length).toBeGreaterThan(3 * 4096);
+    expect(smaps.endsWith('\n')).toBe(true);
+    for (const line of smaps.slice(0, -1).split('\n')) expect(line).toMatch(/^([0-9a-f]+-[0-9a-f]+ |[A-Za-z_]+:)/);
+    expect(() => readBytesBounded('/proc/self/smaps', 10_000)).toThrow('larger than 10000 bytes');
+  });
+
   it('quotes at most a short, escaped excerpt of what a file holds', () => {
     // A lexicon line whose "phones" are a long secret with a terminal escape in it.
     writeFileSync(join(dir, '.rungs.json'), JSON.stringify({ lexicon: 'names.lexicon' }));

@@ -30,19 +30,26 @@ export function readBytesBounded(path: string, limit = MAX_FILE_BYTES): Buffer {
   // the open descriptor then checks the very file that will be read.
   const fd = openSync(path, constants.O_RDONLY | (constants.O_NONBLOCK ?? 0));
   try {
-    if (!fstatSync(fd).isFile()) throw new ReadRefused('not a regular file');
+    const stat = fstatSync(fd);
+    if (!stat.isFile()) throw new ReadRefused('not a regular file');
     // Sizes can lie (files in /proc report 0), so read until the end or one byte past the bound.
-    const chunks: Buffer[] = [];
+    // The stated size sizes the buffer (one byte more, to see the end in the same buffer), so a
+    // library of small scripts is read without a large buffer per file; a file longer than it
+    // said grows the buffer.
+    let buf = Buffer.allocUnsafe(Math.min(limit + 1, stat.size > 0 ? stat.size + 1 : 1 << 12));
     let total = 0;
     for (;;) {
-      const buf = Buffer.allocUnsafe(Math.min(1 << 20, limit + 1 - total));
-      const n = readSync(fd, buf, 0, buf.length, null);
+      if (total === buf.length) {
+        const bigger = Buffer.allocUnsafe(Math.min(limit + 1, 2 * buf.length));
+        buf.copy(bigger, 0, 0, total);
+        buf = bigger;
+      }
+      const n = readSync(fd, buf, total, buf.length - total, null);
       if (n === 0) break;
-      chunks.push(buf.subarray(0, n));
       total += n;
       if (total > limit) throw new ReadRefused(`larger than ${formatBytes(limit)}`, true);
     }
-    return Buffer.concat(chunks, total);
+    return buf.subarray(0, total);
   } finally {
     closeSync(fd);
   }
