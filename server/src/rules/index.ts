@@ -130,7 +130,7 @@ export function renderFindings(findings: Finding[]): Problem[] {
  */
 const byRung = new WeakMap<RungAnalysis, Map<string, Problem[]>>();
 
-function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis, keep: boolean): Problem[] {
+function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis, kept: Kept | undefined): Problem[] {
   let m = byRung.get(r);
   if (!m) byRung.set(r, (m = new Map()));
   const key = `${rule.id}|${eolOf(ctx)}|${JSON.stringify(ctx.settings.ladder ?? null)}`;
@@ -138,30 +138,48 @@ function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis, keep: boolea
   if (!out) {
     const found: Problem[] = [];
     rule.checkRung!(ctx, r, (p) => found.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
-    m.set(key, (out = keep ? sayAgain(`${key}|${r.index}`, found) : found));
+    m.set(key, (out = kept ? sayAgain(kept, `${key}|${r.index}`, found) : found));
   }
   return out;
 }
 
 /**
- * What each rung-local rule last found at each rung place, by what the problems say. A rung an
- * edit touched is checked again and mostly says what it said before (the same outliers, the same
- * estimated words); handing on the earlier problem objects lets the server send the diagnostics
- * it converted and wrote before. Only rungs checked again pay for it.
+ * What the language server keeps of one document's problems between checks, so that a check
+ * hands on the problem objects it made before wherever they say the same (the server converts and
+ * writes each problem object once): the script-wide rules' problems by what they say, and what
+ * each rung-local rule last found at each rung place. Kept with the document's item cache, so it
+ * goes when the document does.
  */
-const saidAt = new Map<string, Sayings>();
+interface Kept {
+  said: Sayings;
+  at: Map<string, Problem[]>;
+}
 
-function sayAgain(place: string, found: Problem[]): Problem[] {
-  const before = saidAt.get(place);
-  const now = new Sayings();
-  const out = found.map((p) => {
-    if (lazyFix(p)) return p;
-    const json = JSON.stringify(p);
-    const same = before?.find(json, p) ?? p;
-    now.add(json, same);
-    return same;
-  });
-  saidAt.set(place, now);
+const keptByDocument = new WeakMap<object, Kept>();
+
+function keptFor(analysis: Analysis): Kept | undefined {
+  const owner = (analysis as { itemCache?: { entries?: object } }).itemCache?.entries;
+  if (!owner) return undefined;
+  let k = keptByDocument.get(owner);
+  if (!k) keptByDocument.set(owner, (k = { said: new Sayings(), at: new Map() }));
+  return k;
+}
+
+/**
+ * A rung checked again mostly says what it said before (the same outliers, the same estimated
+ * words): its problems are matched with what the rule last found at that place. Only rungs
+ * checked again pay for it, and only then are the earlier problems written out to compare.
+ */
+function sayAgain(kept: Kept, place: string, found: Problem[]): Problem[] {
+  const before = kept.at.get(place);
+  let out = found;
+  if (before?.length && found.length) {
+    const table = new Sayings();
+    for (const p of before) if (!lazyFix(p)) table.add(JSON.stringify(p), p);
+    out = found.map((p) => (lazyFix(p) ? p : table.find(JSON.stringify(p), p) ?? p));
+  }
+  if (out.length) kept.at.set(place, out);
+  else kept.at.delete(place);
   return out;
 }
 
@@ -207,33 +225,30 @@ function mergeSorted(a: Problem[], b: Problem[]): Problem[] {
 const wrapped = new WeakMap<object, Problem>();
 
 /**
- * Problems of script-wide rules by what they say. A ladder rule builds new reports on every
- * check, but a step between two rungs an edit did not touch says the same as before, and handing
- * on the same problem object lets the server send the diagnostic it converted and wrote before.
- * Only reports not seen before are written out to be looked up; the table is cut back to the
- * last check's problems once it holds twice as many.
+ * A script-wide rule's report as a problem. A ladder rule builds new reports on every check, but a
+ * step between two rungs an edit did not touch says the same as before: with `kept`, a report not
+ * seen before is looked up by what it says. The table is cut back to the last check's problems
+ * once it holds twice as many.
  */
-let said = new Sayings();
-
-function wrap(rule: Rule, p: Parameters<Report>[0], keep: boolean): Problem {
+function wrap(rule: Rule, p: Parameters<Report>[0], kept: Kept | undefined): Problem {
   const hit = wrapped.get(p);
   if (hit && hit.rule === rule.id) return hit;
   const out = { ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity };
-  if (!keep || lazyFix(out)) {
+  if (!kept || lazyFix(out)) {
     wrapped.set(p, out);
     return out;
   }
   const json = JSON.stringify(out);
-  let problem = said.find(json, out);
-  if (!problem) said.add(json, (problem = out));
+  let problem = kept.said.find(json, out);
+  if (!problem) kept.said.add(json, (problem = out));
   wrapped.set(p, problem);
   return problem;
 }
 
-function forgetOldSayings(global: readonly Problem[]): void {
-  if (said.size <= 2 * global.length + 256) return;
-  said = new Sayings();
-  for (const p of global) if (!lazyFix(p)) said.add(JSON.stringify(p), p);
+function forgetOldSayings(kept: Kept, global: readonly Problem[]): void {
+  if (kept.said.size <= 2 * global.length + 256) return;
+  kept.said = new Sayings();
+  for (const p of global) if (!lazyFix(p)) kept.said.add(JSON.stringify(p), p);
 }
 
 /**
@@ -255,6 +270,7 @@ export function lint(
   keep = false,
 ): Problem[] {
   const global: Problem[] = [];
+  const kept = keep ? keptFor(analysis) : undefined;
   // Per rung, the reports of each rung-local rule that ran cleanly.
   const rungParts: Problem[][][] = analysis.rungs.map(() => []);
   // A copy: failures caught below are added for internal-error, which runs last.
@@ -264,7 +280,7 @@ export function lint(
     // internal-error problem and the other rules still run.
     try {
       if (rule.checkRung) {
-        const mine = analysis.rungs.map((r) => rungReports(ctx, rule, r, keep));
+        const mine = analysis.rungs.map((r) => rungReports(ctx, rule, r, kept));
         for (const part of mine) {
           const outside = part.find((p) => !inside(lines, p));
           if (outside) throw outsideError(outside);
@@ -273,7 +289,7 @@ export function lint(
         continue;
       }
       const mine: Problem[] = [];
-      rule.check(ctx, (p) => mine.push(wrap(rule, p, keep)));
+      rule.check(ctx, (p) => mine.push(wrap(rule, p, kept)));
       const outside = mine.find((p) => !inside(lines, p));
       if (outside) throw outsideError(outside);
       pushAll(global, mine);
@@ -281,7 +297,7 @@ export function lint(
       ctx.findings.push(internalFailure(rule.id, err));
     }
   }
-  if (keep) forgetOldSayings(global);
+  if (kept) forgetOldSayings(kept, global);
   let local: Problem[] = [];
   analysis.rungs.forEach((r, k) => pushAll(local, sortedRungReports(r, rungParts[k])));
   // Rung-local rules report inside their rung, so the rungs' lists follow each other in order;
