@@ -2,8 +2,7 @@
 // what a fresh `analyze` of the same text gives, after every edit of a long random sequence:
 // items, problems (the core's and every rule's), rung summaries and the parsed script, and what
 // the server keeps per rung or per problem: lines, ladder statistics, session lengths (code lens),
-// converted diagnostics and the published message (the incremental side linted as the server
-// lints, handing on earlier problem objects that say the same). Edits
+// converted diagnostics and the published message. Edits
 // are typed text, deletions, line splits and joins, rung headers added and removed, settings and
 // pronunciations changed, and editor options changed. The reference is the CLI's own path.
 import { fc, test } from '@fast-check/vitest';
@@ -32,8 +31,8 @@ const URI = 'file:///w/a.rungs';
  * hovers show, the problems as LSP diagnostics and the bytes of their publish message. For the
  * incremental path these come from what the previous analyses kept; the fresh one works them out.
  */
-const served = (a: AnalyzeOutput, text: string, lines: string[], keep = false) => {
-  const problems = lint(a, text, undefined, lines, keep);
+const served = (a: AnalyzeOutput, text: string, lines: string[]) => {
+  const problems = lint(a, text, undefined, lines);
   const diagnostics = diagnosticsOf(problems, URI);
   const message = { jsonrpc: '2.0', method: 'textDocument/publishDiagnostics', params: { uri: URI, version: 1, diagnostics } };
   return JSON.stringify({
@@ -122,7 +121,7 @@ test.prop([fc.array(editArb, { minLength: 40, maxLength: 60 })], { numRuns: 40 }
       const fresh = analyze({ text, data: words, options, reuse });
       reuse = fresh.pronouncer;
       expect(view(state.output, text)).toBe(view(fresh, text));
-      expect(served(state.output, text, segmentLines(state), true)).toBe(served(fresh, text, splitLines(text)));
+      expect(served(state.output, text, segmentLines(state))).toBe(served(fresh, text, splitLines(text)));
     }
   },
   300_000,

@@ -5,7 +5,7 @@ import { fc, it as fcIt } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
 import type { Problem } from '../../server/src/core/types';
 import { toLspDiagnostic } from '../../server/src/lsp/convert';
-import { diagnosticsOf, messageBytes, sameEnds } from '../../server/src/lsp/diagnostics';
+import { diagnosticsOf, messageBytes } from '../../server/src/lsp/diagnostics';
 
 const problem = (message: string, line = 2): Problem => ({
   line,
@@ -47,8 +47,8 @@ describe('published diagnostics', () => {
     expect(messageBytes(other as never).equals(Buffer.from(JSON.stringify(other), 'utf-8'))).toBe(true);
   });
 
-  // One publish after another takes the problems at the start and end that the last publish had
-  // from it: whatever the lists, each publish must still be exactly its own conversion and JSON.
+  // One publish after another reuses what earlier publishes converted and wrote: whatever the
+  // lists, each publish must still be exactly its own conversion and JSON.
   const POOL = Array.from({ length: 12 }, (_, i) => problem(i % 3 ? `problem ${i} “é” \u2028` : `p${i}`, i));
   const list = fc.array(fc.nat({ max: POOL.length - 1 }), { maxLength: 14 }).map((ks) => ks.map((k) => POOL[k]));
   fcIt.prop([fc.array(fc.tuple(list, fc.constantFrom('file:///w/a.rungs', 'file:///w/b.rungs')), { minLength: 1, maxLength: 12 })], { numRuns: 300 })(
@@ -63,14 +63,5 @@ describe('published diagnostics', () => {
       }
     },
   );
-
-  it('finds the shared ends of two lists without letting them overlap', () => {
-    // computed by hand
-    expect(sameEnds([1, 2, 3, 4], [1, 2, 9, 4])).toEqual([2, 1]);
-    expect(sameEnds([1, 2, 1], [1, 2, 1])).toEqual([3, 0]);
-    expect(sameEnds([1, 1], [1, 1, 1])).toEqual([2, 0]);
-    expect(sameEnds([5, 1], [1])).toEqual([0, 1]);
-    expect(sameEnds([], [1])).toEqual([0, 0]);
-  });
 });
 

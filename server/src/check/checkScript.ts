@@ -44,8 +44,6 @@ export interface CheckInput {
   cache?: CheckCache;
   /** Adjusts the resolved options before the script's header applies (e.g. `rungs sets --by`). */
   adjust?: (o: AnalysisOptions) => AnalysisOptions;
-  /** Hand on earlier problem objects that say the same (the language server: see lint()). */
-  keepProblems?: boolean;
 }
 
 export interface CheckResult {
@@ -102,9 +100,7 @@ export function checkScript(input: CheckInput): CheckResult {
   // Positions in the analysed part lie in the original lines too. With a part cut off no fix is
   // offered: a fix built from the part (a sorted rung, say) could drop what lies past the bound.
   const problemsWith = (lines: string[]) =>
-    (problems ??= cut
-      ? lint(analysis, bounded.text, ctx.lint, lines).map(({ fix: _fix, ...p }) => p)
-      : lint(analysis, input.text, ctx.lint, lines, input.keepProblems));
+    (problems ??= cut ? lint(analysis, bounded.text, ctx.lint, lines).map(({ fix: _fix, ...p }) => p) : lint(analysis, input.text, ctx.lint, lines));
   return {
     text: input.text,
     analysis,

@@ -208,7 +208,6 @@ export class AnalysisStore {
         data: this.data,
         editor,
         cache: state.cache,
-        keepProblems: true,
       });
       state.dependencies = new Map(checked.dependencies.map((p) => [pathKey(p), p]));
       state.cache = checked.cache;

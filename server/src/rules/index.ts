@@ -29,7 +29,6 @@ import { stepTooBig } from './stepTooBig';
 import { thinRung } from './thinRung';
 import type { LintSettings, Report, Rule, RuleContext } from './types';
 import { eolOf } from './shared';
-import { lazyFix, Sayings } from './sayings';
 import { unevenSteps } from './unevenSteps';
 import { unknownKey } from './unknownKey';
 import { unknownPhone } from './unknownPhone';
@@ -130,7 +129,7 @@ export function renderFindings(findings: Finding[]): Problem[] {
  */
 const byRung = new WeakMap<RungAnalysis, Map<string, Problem[]>>();
 
-function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis, kept: Kept | undefined): Problem[] {
+function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis): Problem[] {
   let m = byRung.get(r);
   if (!m) byRung.set(r, (m = new Map()));
   const key = `${rule.id}|${eolOf(ctx)}|${JSON.stringify(ctx.settings.ladder ?? null)}`;
@@ -138,48 +137,8 @@ function rungReports(ctx: RuleContext, rule: Rule, r: RungAnalysis, kept: Kept |
   if (!out) {
     const found: Problem[] = [];
     rule.checkRung!(ctx, r, (p) => found.push({ ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity }));
-    m.set(key, (out = kept ? sayAgain(kept, `${key}|${r.index}`, found) : found));
+    m.set(key, (out = found));
   }
-  return out;
-}
-
-/**
- * What the language server keeps of one document's problems between checks, so that a check
- * hands on the problem objects it made before wherever they say the same (the server converts and
- * writes each problem object once): the script-wide rules' problems by what they say, and what
- * each rung-local rule last found at each rung place. Kept with the document's item cache, so it
- * goes when the document does.
- */
-interface Kept {
-  said: Sayings;
-  at: Map<string, Problem[]>;
-}
-
-const keptByDocument = new WeakMap<object, Kept>();
-
-function keptFor(analysis: Analysis): Kept | undefined {
-  const owner = (analysis as { itemCache?: { entries?: object } }).itemCache?.entries;
-  if (!owner) return undefined;
-  let k = keptByDocument.get(owner);
-  if (!k) keptByDocument.set(owner, (k = { said: new Sayings(), at: new Map() }));
-  return k;
-}
-
-/**
- * A rung checked again mostly says what it said before (the same outliers, the same estimated
- * words): its problems are matched with what the rule last found at that place. Only rungs
- * checked again pay for it, and only then are the earlier problems written out to compare.
- */
-function sayAgain(kept: Kept, place: string, found: Problem[]): Problem[] {
-  const before = kept.at.get(place);
-  let out = found;
-  if (before?.length && found.length) {
-    const table = new Sayings();
-    for (const p of before) if (!lazyFix(p)) table.add(JSON.stringify(p), p);
-    out = found.map((p) => (lazyFix(p) ? p : table.find(JSON.stringify(p), p) ?? p));
-  }
-  if (out.length) kept.at.set(place, out);
-  else kept.at.delete(place);
   return out;
 }
 
@@ -224,31 +183,12 @@ function mergeSorted(a: Problem[], b: Problem[]): Problem[] {
  */
 const wrapped = new WeakMap<object, Problem>();
 
-/**
- * A script-wide rule's report as a problem. A ladder rule builds new reports on every check, but a
- * step between two rungs an edit did not touch says the same as before: with `kept`, a report not
- * seen before is looked up by what it says. The table is cut back to the last check's problems
- * once it holds twice as many.
- */
-function wrap(rule: Rule, p: Parameters<Report>[0], kept: Kept | undefined): Problem {
+function wrap(rule: Rule, p: Parameters<Report>[0]): Problem {
   const hit = wrapped.get(p);
   if (hit && hit.rule === rule.id) return hit;
   const out = { ...p, rule: rule.id, severity: p.severity ?? rule.defaultSeverity };
-  if (!kept || lazyFix(out)) {
-    wrapped.set(p, out);
-    return out;
-  }
-  const json = JSON.stringify(out);
-  let problem = kept.said.find(json, out);
-  if (!problem) kept.said.add(json, (problem = out));
-  wrapped.set(p, problem);
-  return problem;
-}
-
-function forgetOldSayings(kept: Kept, global: readonly Problem[]): void {
-  if (kept.said.size <= 2 * global.length + 256) return;
-  kept.said = new Sayings();
-  for (const p of global) if (!lazyFix(p)) kept.said.add(JSON.stringify(p), p);
+  wrapped.set(p, out);
+  return out;
 }
 
 /**
@@ -263,14 +203,8 @@ export function lint(
   settings: LintSettings = { severities: {} },
   /** The text's lines when the caller has them already (the language server's snapshot). */
   lines: string[] = splitLines(text),
-  /**
-   * Hand on earlier problem objects that say the same (the language server, which re-checks the
-   * same script after every edit); a one-off check (the CLI) would only pay for comparing them.
-   */
-  keep = false,
 ): Problem[] {
   const global: Problem[] = [];
-  const kept = keep ? keptFor(analysis) : undefined;
   // Per rung, the reports of each rung-local rule that ran cleanly.
   const rungParts: Problem[][][] = analysis.rungs.map(() => []);
   // A copy: failures caught below are added for internal-error, which runs last.
@@ -280,7 +214,7 @@ export function lint(
     // internal-error problem and the other rules still run.
     try {
       if (rule.checkRung) {
-        const mine = analysis.rungs.map((r) => rungReports(ctx, rule, r, kept));
+        const mine = analysis.rungs.map((r) => rungReports(ctx, rule, r));
         for (const part of mine) {
           const outside = part.find((p) => !inside(lines, p));
           if (outside) throw outsideError(outside);
@@ -289,7 +223,7 @@ export function lint(
         continue;
       }
       const mine: Problem[] = [];
-      rule.check(ctx, (p) => mine.push(wrap(rule, p, kept)));
+      rule.check(ctx, (p) => mine.push(wrap(rule, p)));
       const outside = mine.find((p) => !inside(lines, p));
       if (outside) throw outsideError(outside);
       pushAll(global, mine);
@@ -297,7 +231,6 @@ export function lint(
       ctx.findings.push(internalFailure(rule.id, err));
     }
   }
-  if (kept) forgetOldSayings(kept, global);
   let local: Problem[] = [];
   analysis.rungs.forEach((r, k) => pushAll(local, sortedRungReports(r, rungParts[k])));
   // Rung-local rules report inside their rung, so the rungs' lists follow each other in order;
