@@ -4,7 +4,9 @@ import { describe, expect, it } from 'vitest';
 import { defaultOptions } from '../../server/src/core/options';
 import { makePace } from '../../server/src/core/pace';
 import { describeRungLength, formatLength, planSession, sessionLengths } from '../../server/src/core/timing';
-import { analyzeText } from '../helpers/data';
+import { readFileSync } from 'node:fs';
+import { analyzeSegments } from '../../server/src/core/segments';
+import { analyzeText, words } from '../helpers/data';
 import { renderFindings } from '../../server/src/rules/index';
 
 describe('word slots inside an item', () => {
@@ -123,5 +125,36 @@ describe('timing settings', () => {
     expect(p.map((x) => [x.line, x.character])).toEqual([[0, 10], [1, 12]]);
     expect(p[0].message).toMatch(/@item-gap takes a time in seconds/);
     expect(a.options.timing.gap).toBe(2);
+  });
+});
+
+describe('session lengths kept per rung and per item', () => {
+  // The code lens and hovers read rung lengths from sessionLengths, which sums each item's kept
+  // length instead of planning the rung; planSession is the definition, and the two must agree
+  // to the last bit, in both modes, with phrase pauses and non-default timing, before and after
+  // an edit that re-analyses one rung (its other items keep their words and their kept lengths).
+  const scripts = ['family-visits-draft.rungs', 'kitchen-sets.rungs', 'morning-routine.rungs'].map((f) =>
+    readFileSync(new URL(`../../sample-scripts/${f}`, import.meta.url), 'utf8'),
+  );
+  const extra = '@paces 1.5 wps, 3 sps\n@item-gap 0.7 s\n@phrase-pause 0.3 s\n@echo-window 1.5\n@word-slots equal\n== One\nWell, yes: come in, sit down.\nHi.\nGood morning, Dr. Okafor.\n== Two\nRead it (twice), then stop.\n';
+
+  it('equal planSession for every rung, pace and mode, before and after an edit', () => {
+    // The settings of the last script are all read (no problems), so the timing is not the default.
+    expect(renderFindings(analyzeText(extra).findings).filter((p) => p.severity !== 'info')).toEqual([]);
+    expect(analyzeText(extra).options.timing).toMatchObject({ gap: 0.7, phrasePause: 0.3, slots: 'equal' });
+    for (const text of [...scripts, extra]) {
+      const state = analyzeSegments({ text, data: words }, undefined);
+      const edited = text.replace(/\n([A-Z][^\n|]*)/, '\n$1 again');
+      const after = analyzeSegments({ text: edited, data: words }, state);
+      for (const a of [state.output, after.output]) {
+        for (const mode of ['unison', 'echo'] as const) {
+          const lengths = sessionLengths(a, mode);
+          for (const r of a.rungs) {
+            const planned = r.paces.map((pace) => (r.items.length ? planSession(a, { rung: r.index, pace, mode }).seconds : 0));
+            expect(lengths.rungs[r.index].paces.map((p) => p.seconds)).toEqual(planned);
+          }
+        }
+      }
+    }
   });
 });

@@ -195,10 +195,38 @@ const secondsByRung = new WeakMap<RungAnalysis, Map<string, number>>();
 function rungSeconds(analysis: Analysis, r: RungAnalysis, pace: Pace, mode: DeliveryMode): number {
   let m = secondsByRung.get(r);
   if (!m) secondsByRung.set(r, (m = new Map()));
-  const key = `${mode}|${pace.value}|${pace.unit}|${JSON.stringify(analysis.options.timing)}`;
+  const timing = analysis.options.timing;
+  const paceKey = `${pace.value}|${pace.unit}|${JSON.stringify(timing)}`;
+  const key = `${mode}|${paceKey}`;
   let seconds = m.get(key);
-  if (seconds === undefined) m.set(key, (seconds = planSession(analysis, { rung: r.index, pace, mode }).seconds));
+  if (seconds === undefined) {
+    // planSession's sum for one rung (the same additions in the same order, so the same number;
+    // tests/core/timing.test.ts holds the two equal), with each item's length kept with its words.
+    let at = 0;
+    r.items.forEach((it, k) => {
+      if (k > 0) at += timing.gap;
+      const s = itemSeconds(it, pace, timing, paceKey);
+      at += s;
+      if (mode === 'echo') at = at + s * timing.echoWindow;
+    });
+    m.set(key, (seconds = at));
+  }
   return seconds;
+}
+
+/**
+ * An item's model length at a pace (planItemWords), kept with its words: a rung an edit touched is
+ * analysed again, but its other items keep their words (the item cache), so working out the
+ * rung's length again plans only the edited item rather than all of the rung's items.
+ */
+const secondsByWords = new WeakMap<object, Map<string, number>>();
+
+function itemSeconds(it: ItemAnalysis, pace: Pace, timing: TimingOptions, paceKey: string): number {
+  let m = secondsByWords.get(it.words);
+  if (!m) secondsByWords.set(it.words, (m = new Map()));
+  let s = m.get(paceKey);
+  if (s === undefined) m.set(paceKey, (s = planItemWords(it, pace, timing).seconds));
+  return s;
 }
 
 /** One rung's session length with gaps at each of its paces. */

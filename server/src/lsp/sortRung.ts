@@ -13,8 +13,32 @@ const needsSort = new WeakMap<RungAnalysis, boolean>();
  */
 export function rungNeedsSort(s: Snapshot, rung: RungAnalysis): boolean {
   let v = needsSort.get(rung);
-  if (v === undefined) needsSort.set(rung, (v = sortRung(s, rung) !== null));
+  if (v === undefined) {
+    const dir = s.analysis.options.direction === 'falling' ? -1 : 1;
+    const order = itemOrder(rung, dir);
+    needsSort.set(rung, (v = order === 'unknown' ? sortRung(s, rung) !== null : order === 'out of order'));
+  }
   return v;
+}
+
+/**
+ * Whether a rung's items already stand in difficulty order, read from the difficulties alone:
+ * the sort (sortRegion) orders blocks by difficulty, ties by place, so items in order stay where
+ * they are, and an item harder than the one after it (in the sort's direction) moves, and with it
+ * a line that differs (a different difficulty means a different item). 'unknown' when a
+ * difficulty is not a number, which the sort's comparison does not order: then the edit is
+ * worked out and compared with the text. A new version of a rung of 500 items is answered in a
+ * pass over its items instead of by building its sorted text (7-14 ms per version before).
+ */
+export function itemOrder(rung: RungAnalysis, dir: 1 | -1): 'in order' | 'out of order' | 'unknown' {
+  const items = rung.items;
+  let out: 'in order' | 'out of order' = 'in order';
+  for (let k = 0; k < items.length; k++) {
+    const d = items[k].difficulty;
+    if (Number.isNaN(d)) return 'unknown';
+    if (k && (items[k - 1].difficulty - d) * dir > 0) out = 'out of order';
+  }
+  return items.length < 2 ? 'in order' : out;
 }
 
 /** The edit that sorts a rung, or null when it is already in order (or has fewer than two items). */
