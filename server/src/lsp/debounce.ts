@@ -11,7 +11,8 @@
 
 /**
  * The shortest wait: the protocol library handles queued messages one per turn of the event
- * loop, so keystrokes sent in one write still all land before the re-check.
+ * loop, and a millisecond is enough for the keystrokes of one write to land before the re-check
+ * (one that lands after it only costs another re-check; the result is always of the last text).
  */
 export const MIN_DELAY_MS = 1;
 
