@@ -86,9 +86,11 @@ async function timed(fn) {
 /**
  * Opens a generated script of `items` items and measures. `edits` random one-line edits (insert or
  * delete a character inside an item, seeded) each wait for that version's diagnostics before the
- * next, so every figure is the full cost of one keystroke as the editor sees it.
+ * next, so every figure is the full cost of one keystroke as the editor sees it. Then `reads`
+ * rounds of read requests on the last version, and `afterEdits` more edits, each followed by one
+ * code lens and one inlay hint request on the new version.
  */
-export async function measureLsp(root, dir, text, { edits = 40, reads = 60, seed = 7 } = {}) {
+export async function measureLsp(root, dir, text, { edits = 40, reads = 60, afterEdits = 20, seed = 7 } = {}) {
   const c = new Client(root);
   await c.initialize(root);
   const uri = pathToFileURL(join(dir, `lsp-${text.length}.rungs`)).href;
@@ -104,7 +106,8 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, seed
   const pickLine = () => itemLines[Math.floor(rand() * itemLines.length)];
   const editMs = [];
   const cpuBefore = cpuMs(c.proc.pid);
-  for (let i = 0; i < edits; i++) {
+  // One random one-line edit, sent, until that version's diagnostics arrive.
+  const edit = async (i) => {
     const line = pickLine();
     const bar = lines[line].indexOf('|');
     const end = bar >= 0 ? bar - 1 : lines[line].length - 1;
@@ -117,13 +120,10 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, seed
     lines[line] = insert ? lines[line].slice(0, ch) + 'e' + lines[line].slice(ch) : lines[line].slice(0, ch) + lines[line].slice(ch + 1);
     version++;
     const v = version;
-    editMs.push(
-      await timed(async () => {
-        await c.conn.sendNotification('textDocument/didChange', { textDocument: { uri, version: v }, contentChanges: [change] });
-        await c.diagnostics(uri, v);
-      }),
-    );
-  }
+    await c.conn.sendNotification('textDocument/didChange', { textDocument: { uri, version: v }, contentChanges: [change] });
+    await c.diagnostics(uri, v);
+  };
+  for (let i = 0; i < edits; i++) editMs.push(await timed(() => edit(i)));
   const editCpuMs = (cpuMs(c.proc.pid) - cpuBefore) / Math.max(1, edits);
   const td = { uri };
   const hoverMs = [];
@@ -140,6 +140,18 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, seed
     completionMs.push(await timed(() => c.conn.sendRequest('textDocument/completion', { textDocument: td, position: { line: 2, character: 1 } })));
   }
   const rss = rssMb(c.proc.pid);
+  // What an editor asks for after each keystroke, once per new version: the code lens and the
+  // visible range's inlay hints (the reads above repeat requests on one version, which the
+  // server answers from what it worked out for that version).
+  const lensAfterEditMs = [];
+  const inlayAfterEditMs = [];
+  for (let i = 0; i < afterEdits; i++) {
+    await edit(edits + i);
+    lensAfterEditMs.push(await timed(() => c.conn.sendRequest('textDocument/codeLens', { textDocument: td })));
+    const line = pickLine();
+    const range = { start: { line: Math.max(0, line - 25), character: 0 }, end: { line: line + 25, character: 0 } };
+    inlayAfterEditMs.push(await timed(() => c.conn.sendRequest('textDocument/inlayHint', { textDocument: td, range })));
+  }
   await c.close();
   const stat = (xs) => ({ p50: percentile(xs, 50), p95: percentile(xs, 95) });
   return {
@@ -150,6 +162,7 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, seed
     inlay: stat(inlayMs),
     codeLens: stat(lensMs),
     completion: stat(completionMs),
+    afterEdit: { codeLens: stat(lensAfterEditMs), inlay: stat(inlayAfterEditMs) },
     rssMb: Math.max(rss, rssAfterOpen),
   };
 }
