@@ -13,7 +13,7 @@ import { fileURLToPath } from 'node:url';
 import { benchBalance } from './balance.mjs';
 import { generateScript } from './generate.mjs';
 import { measureLsp } from './lsp.mjs';
-import { median, processRuns, timeAnalysis, writeLibrary } from './runs.mjs';
+import { median, processRuns, timeAnalysis, timeLibraryLint, writeLibrary } from './runs.mjs';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const require = createRequire(import.meta.url);
@@ -55,12 +55,7 @@ const { analysis, linting, floorLookups, items, words } = timeAnalysis({ analyze
 
 // 3. `rungs lint` over 200 files of 100 items (whole process) vs the floor's load plus twice its
 //    lookup loop over the same words.
-const multiLint = [];
-const multiFloorLoop = [];
-for (let i = 0; i < Math.max(3, Math.ceil(RUNS / 2)); i++) {
-  multiLint.push(wall([join(root, 'server/bin/rungs.js'), 'lint', '--format', 'json', libDir]).ms);
-  multiFloorLoop.push(floorRun(libFiles).lookupMs);
-}
+const { lint: multiLint, floorLoop: multiFloorLoop } = timeLibraryLint(root, { wall, floorRun }, libDir, libFiles, Math.max(3, Math.ceil(RUNS / 2)));
 
 // 4. The language server over JSON-RPC, at three sizes.
 const lsp = {};

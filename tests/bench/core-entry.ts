@@ -14,3 +14,7 @@ export { decode } from '../../server/src/core/g2p/decode';
 export { letterToSound } from '../../server/src/core/lts/letterToSound';
 export { score as scorePronunciations } from './pronounceEval';
 export { PSEUDOWORDS } from './pseudowords';
+// The language server's edit path without the protocol (tests/bench/editPath.mjs).
+export { AnalysisStore } from '../../server/src/lsp/documents';
+export { diagnosticsOf, messageBytes } from '../../server/src/lsp/diagnostics';
+export { TextDocument } from 'vscode-languageserver-textdocument';

@@ -50,3 +50,27 @@ export function generateScript(items, seed = 20261201) {
   }
   return `${lines.join('\n')}\n`;
 }
+
+/**
+ * The benchmark's edits of a generated script, seeded: `pickLine()` draws an item line, and
+ * `items` is how many item lines there are, and `edit(i)` makes the i-th edit (alternately typing a letter into an item and deleting one, so the
+ * script stays like the original) and returns it as an LSP content change.
+ */
+export function scriptEdits(text, seed = 7) {
+  const lines = text.split('\n');
+  const itemLines = lines.map((l, i) => (/^[A-Z]/.test(l) ? i : -1)).filter((i) => i >= 0);
+  const rand = mulberry32(seed);
+  const pickLine = () => itemLines[Math.floor(rand() * itemLines.length)];
+  const edit = (i) => {
+    const line = pickLine();
+    const bar = lines[line].indexOf('|');
+    const end = bar >= 0 ? bar - 1 : lines[line].length - 1;
+    const ch = 1 + Math.floor(rand() * Math.max(1, end - 1));
+    const insert = i % 2 === 0;
+    lines[line] = insert ? lines[line].slice(0, ch) + 'e' + lines[line].slice(ch) : lines[line].slice(0, ch) + lines[line].slice(ch + 1);
+    return insert
+      ? { range: { start: { line, character: ch }, end: { line, character: ch } }, text: 'e' }
+      : { range: { start: { line, character: ch }, end: { line, character: ch + 1 } }, text: '' };
+  };
+  return { items: itemLines.length, pickLine, edit };
+}

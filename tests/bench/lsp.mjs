@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { createProtocolConnection, StreamMessageReader, StreamMessageWriter } from 'vscode-languageserver-protocol/node';
-import { mulberry32 } from './generate.mjs';
+import { scriptEdits } from './generate.mjs';
 
 /** p-th percentile (0-100) by the nearest-rank method. */
 export function percentile(xs, p) {
@@ -94,30 +94,18 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, afte
   const c = new Client(root);
   await c.initialize(root);
   const uri = pathToFileURL(join(dir, `lsp-${text.length}.rungs`)).href;
-  const lines = text.split('\n');
   let version = 1;
   const openMs = await timed(async () => {
     await c.conn.sendNotification('textDocument/didOpen', { textDocument: { uri, languageId: 'rungs', version, text } });
     await c.diagnostics(uri, version);
   });
   const rssAfterOpen = rssMb(c.proc.pid);
-  const itemLines = lines.map((l, i) => (/^[A-Z]/.test(l) ? i : -1)).filter((i) => i >= 0);
-  const rand = mulberry32(seed);
-  const pickLine = () => itemLines[Math.floor(rand() * itemLines.length)];
+  const { items, pickLine, edit: nextEdit } = scriptEdits(text, seed);
   const editMs = [];
   const cpuBefore = cpuMs(c.proc.pid);
   // One random one-line edit, sent, until that version's diagnostics arrive.
   const edit = async (i) => {
-    const line = pickLine();
-    const bar = lines[line].indexOf('|');
-    const end = bar >= 0 ? bar - 1 : lines[line].length - 1;
-    const ch = 1 + Math.floor(rand() * Math.max(1, end - 1));
-    // Alternate typing a letter and deleting one, so the script stays like the original.
-    const insert = i % 2 === 0;
-    const change = insert
-      ? { range: { start: { line, character: ch }, end: { line, character: ch } }, text: 'e' }
-      : { range: { start: { line, character: ch }, end: { line, character: ch + 1 } }, text: '' };
-    lines[line] = insert ? lines[line].slice(0, ch) + 'e' + lines[line].slice(ch) : lines[line].slice(0, ch) + lines[line].slice(ch + 1);
+    const change = nextEdit(i);
     version++;
     const v = version;
     await c.conn.sendNotification('textDocument/didChange', { textDocument: { uri, version: v }, contentChanges: [change] });
@@ -155,7 +143,7 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, afte
   await c.close();
   const stat = (xs) => ({ p50: percentile(xs, 50), p95: percentile(xs, 95) });
   return {
-    items: itemLines.length,
+    items,
     openMs,
     edit: { ...stat(editMs), cpuMs: editCpuMs, times: editMs },
     hover: stat(hoverMs),

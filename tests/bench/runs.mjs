@@ -64,3 +64,18 @@ export function timeAnalysis(core, dataDir, text, file, runs, floorRun) {
   }
   return { analysis, linting, floorLookups, items, words };
 }
+
+/**
+ * `rungs lint` over the library (whole processes) and the floor's lookup loop over the same
+ * files, `rounds` times each: the multi-file lint figure is its median against the floor's load
+ * plus twice the loop's median.
+ */
+export function timeLibraryLint(root, { wall, floorRun }, libDir, libFiles, rounds) {
+  const lint = [];
+  const floorLoop = [];
+  for (let i = 0; i < rounds; i++) {
+    lint.push(wall([join(root, 'server/bin/rungs.js'), 'lint', '--format', 'json', libDir]).ms);
+    floorLoop.push(floorRun(libFiles).lookupMs);
+  }
+  return { lint, floorLoop };
+}

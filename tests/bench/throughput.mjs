@@ -7,7 +7,7 @@ import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { generateScript } from './generate.mjs';
-import { median, processRuns, timeAnalysis, writeLibrary } from './runs.mjs';
+import { median, processRuns, timeAnalysis, timeLibraryLint, writeLibrary } from './runs.mjs';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const require = createRequire(import.meta.url);
@@ -31,15 +31,9 @@ if (only.includes('analysis')) {
   console.log(`analysis ${f1(median(analysis))} ms = ${(median(analysis) / fl).toFixed(2)}x, lint ${f1(median(linting))} ms = ${(median(linting) / fl).toFixed(2)}x, floor loop ${f1(fl)} ms`);
 }
 if (only.includes('multi')) {
-  const lintMs = [];
-  const loop = [];
-  const load = [];
-  for (let i = 0; i < Math.max(3, Math.ceil(RUNS / 2)); i++) {
-    lintMs.push(wall([join(root, 'server/bin/rungs.js'), 'lint', '--format', 'json', libDir]).ms);
-    const f = floorRun(libFiles);
-    loop.push(f.lookupMs);
-    load.push(floorRun([]).ms);
-  }
+  const rounds = Math.max(3, Math.ceil(RUNS / 2));
+  const { lint: lintMs, floorLoop: loop } = timeLibraryLint(root, { wall, floorRun }, libDir, libFiles, rounds);
+  const load = Array.from({ length: rounds }, () => floorRun([]).ms);
   const floor = median(load) + 2 * median(loop);
   console.log(`rungs lint 200 files ${f1(median(lintMs))} ms = ${(median(lintMs) / floor).toFixed(2)}x of floor load ${f1(median(load))} + 2x loop ${f1(median(loop))} ms`);
 }

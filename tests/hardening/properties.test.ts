@@ -11,7 +11,7 @@ import { splitLines } from '../../server/src/core/parse';
 import type { Problem, TextEdit } from '../../server/src/core/types';
 import { applyFixes, batchFixes } from '../../server/src/rules/fixes';
 import { lint } from '../../server/src/rules/index';
-import { sortRungEdit } from '../../server/src/rules/unsortedRung';
+import { rungRegion, sortRegion } from '../../server/src/rules/sortRegion';
 import { formatScript as formatText, itemTexts } from '../../server/src/lsp/formatScript';
 import { words } from '../helpers/data';
 
@@ -116,7 +116,7 @@ describe('edits keep every byte they do not touch', () => {
     const lines = splitLines(text);
     for (const r of analysis.rungs) {
       const ctx = { analysis, lines, text, settings: { severities: {} } };
-      const e = sortRungEdit(ctx, r, 1);
+      const e = sortRegion(rungRegion(ctx, r), r, 1);
       if (!e) continue;
       const start = offsetOf(text, e.line, e.character);
       const end = offsetOf(text, e.endLine, e.endCharacter);
@@ -127,7 +127,7 @@ describe('edits keep every byte they do not touch', () => {
       const after = text.slice(0, start) + e.newText + text.slice(end);
       const again = check(after);
       const r2 = again.analysis.rungs[r.index];
-      const e2 = sortRungEdit({ analysis: again.analysis, lines: splitLines(after), text: after }, r2, 1);
+      const e2 = sortRegion(rungRegion({ analysis: again.analysis, lines: splitLines(after), text: after }, r2), r2, 1);
       if (e2) expect(after.slice(offsetOf(after, e2.line, e2.character), offsetOf(after, e2.endLine, e2.endCharacter))).toBe(e2.newText);
     }
   });

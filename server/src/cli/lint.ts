@@ -50,8 +50,8 @@ let lastPronouncer: CheckCache['pronouncer'];
 
 /**
  * A problem that no longer holds its script's analysis: a fix whose edits are worked out when
- * first read (sorting a rung) keeps the whole analysis alive until then, and a run over a library
- * would keep every script's analysis until the report is written.
+ * first read (sorting a rung) keeps that rung's analysis and lines alive until then, and a run
+ * over a library would keep them for every script until the report is written.
  */
 const detached = (p: Problem): Problem => (p.fix ? { ...p, fix: { ...p.fix } } : p);
 

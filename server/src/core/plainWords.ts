@@ -27,7 +27,7 @@ export interface PlainWord {
   spoken: string;
 }
 
-function isAsciiLetter(c: number): boolean {
+export function isAsciiLetter(c: number): boolean {
   return (c >= 0x61 && c <= 0x7a) || (c >= 0x41 && c <= 0x5a);
 }
 

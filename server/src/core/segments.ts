@@ -16,12 +16,11 @@ interface Segment {
   /** 0-based line of the segment's first line. */
   line: number;
   text: string;
-  /** The segment's lines (splitLines), worked out when first asked for and kept while its text is. */
-  lines?: string[];
   /**
-   * Its part of the whole text's lines: its lines without the empty one after its last line
-   * break, for every segment but the last (kept like `lines`; a segment stays last or not while
-   * the script keeps its number of rungs, which the incremental path requires).
+   * Its part of the whole text's lines (splitLines): without the empty line after its last line
+   * break, for every segment but the last. Worked out when first asked for and kept while its
+   * text is (a segment stays last or not while the script keeps its number of rungs, which the
+   * incremental path requires).
    */
   body?: string[];
 }
@@ -55,8 +54,9 @@ export function segmentLines(state: SegmentState): string[] {
   const last = state.segments.length - 1;
   // Every segment but the last ends with its last line's break: leave out the empty line after it.
   const parts = state.segments.map((s, k) => {
-    const own = (s.lines ??= splitLines(detach(s.text)));
-    return (s.body ??= k < last ? own.slice(0, -1) : own);
+    if (s.body) return s.body;
+    const own = splitLines(detach(s.text));
+    return (s.body = k < last ? own.slice(0, -1) : own);
   });
   return (state.lines = concatAll(parts));
 }
@@ -102,12 +102,6 @@ export function segmentsOf(text: string): Segment[] {
   }
   out.push({ line: segLine, text: text.slice(segStart) });
   return out;
-}
-
-/** A segment whose text an edit left alone keeps the lines worked out before. */
-function keepLines(now: Segment, before: Segment): void {
-  now.lines = before.lines;
-  now.body = before.body;
 }
 
 function inputKey(input: AnalyzeInput): string {
@@ -181,9 +175,10 @@ function reanalyse(input: AnalyzeInput, prev: SegmentState, segments: Segment[],
   const changed: number[] = [];
   for (let k = 1; k < segments.length; k++) {
     if (segments[k].text !== before[k].text) changed.push(k);
-    else keepLines(segments[k], before[k]);
+    // A segment the edit left alone keeps the lines worked out before.
+    else segments[k].body = before[k].body;
   }
-  keepLines(segments[0], before[0]);
+  segments[0].body = before[0].body;
   if (!changed.length) return old;
   // A rung segment maps to rung k - 1, or k when the head holds an implicit rung of items.
   const offset = old.rungs.length - (before.length - 1);

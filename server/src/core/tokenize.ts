@@ -4,7 +4,7 @@
 // Patterns are compiled once at load and used sticky, so tokenising never compiles a regex.
 
 import { ABBREVIATIONS, CURRENCIES, LEADING_ELISIONS, type Abbreviation, type Currency } from './abbreviations';
-import { BARE, MAX_BARE_LENGTH, plainWord } from './plainWords';
+import { BARE, isAsciiLetter, MAX_BARE_LENGTH, plainWord } from './plainWords';
 import { amountWords, cardinal, DIGIT_WORDS, isYear, moneyWords, ordinal, pluralise, yearWords } from './numberWords';
 
 export interface Token {
@@ -461,7 +461,7 @@ export function tokenizeWith(text: string, offset: number, fast: boolean): Token
     const c = text.charCodeAt(i);
     if (c <= 0x20) i++;
     else if (c >= 0x30 && c <= 0x39) i = scanNumber(st, i, i, false, null);
-    else if (fast && c < 0x80 && ((c >= 0x61 && c <= 0x7a) || (c >= 0x41 && c <= 0x5a))) {
+    else if (fast && isAsciiLetter(c)) {
       const end = scanPlainWord(st, i);
       i = end >= 0 ? end : scanWord(st, i);
     } else if (isLetterAt(text, i)) i = scanWord(st, i);

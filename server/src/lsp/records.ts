@@ -176,10 +176,15 @@ export function latestRatios(file: string, result: ProgressResult, mark: number)
     if (!byRung) out.set(script, (byRung = new Map()));
     let byClient = byRung.get(r.rungIndex);
     if (!byClient) byRung.set(r.rungIndex, (byClient = new Map()));
-    const prev = byClient.get(r.client);
-    if (!prev || prev.r.date <= r.date) byClient.set(r.client, { r, mark });
+    keepLatest(byClient, r.client, { r, mark });
   }
   return out;
+}
+
+/** Keeps a client's row when it is the latest seen (a later row of the same date wins). */
+function keepLatest(latest: Map<string, { r: RateRecord; mark: number }>, client: string, hit: { r: RateRecord; mark: number }): void {
+  const prev = latest.get(client);
+  if (!prev || prev.r.date <= hit.r.date) latest.set(client, hit);
 }
 
 /**
@@ -191,10 +196,7 @@ export function rungRecordsNote(scriptPath: string, rungIndex: number, files: La
   const latest = new Map<string, { r: RateRecord; mark: number }>();
   const key = pathKey(scriptPath);
   for (const f of files) {
-    for (const [client, hit] of f.get(key)?.get(rungIndex) ?? []) {
-      const prev = latest.get(client);
-      if (!prev || prev.r.date <= hit.r.date) latest.set(client, hit);
-    }
+    for (const [client, hit] of f.get(key)?.get(rungIndex) ?? []) keepLatest(latest, client, hit);
   }
   if (!latest.size) return [];
   const lines = ['', '**Latest paced/unassisted ratio** (rate records):'];

@@ -1,6 +1,6 @@
 // Sorting a rung by difficulty for the code action, the code lens and the `rungs.sortRung`
-// command. The edit itself is the unsorted-rung rule's (rules/unsortedRung.ts): item lines move
-// byte-identical with the comments directly above them, every other line keeps its place.
+// command. The edit is the one the unsorted-rung fix makes (rules/sortRegion.ts): item lines
+// move byte-identical with the comments directly above them, every other line keeps its place.
 import type { RungAnalysis, TextEdit } from '../core/types';
 import { rungRegion, sortRegion } from '../rules/sortRegion';
 import type { Snapshot } from './documents';

@@ -1,13 +1,8 @@
 // unsorted-rung: items inside a rung that do not run from easiest to hardest.
-import type { RungAnalysis, TextEdit } from '../core/types';
-import { eachRung, type Rule, type RuleContext } from './types';
+import type { TextEdit } from '../core/types';
+import { eachRung, type Rule } from './types';
 import { fmt, rungLabel, rungRange, sign } from './shared';
 import { rungRegion, sortRegion } from './sortRegion';
-
-/** The edit that sorts a rung (rules/sortRegion.ts), for the code action, the lens and the sort command. */
-export function sortRungEdit(ctx: Pick<RuleContext, 'analysis' | 'lines' | 'text'>, r: RungAnalysis, dir: 1 | -1): TextEdit | null {
-  return sortRegion(rungRegion(ctx, r), r, dir);
-}
 
 export const unsortedRung: Rule = {
   id: 'unsorted-rung',

@@ -32,8 +32,8 @@ export interface ModelHeader {
   params: Record<string, unknown>;
   checksum: string;
   graphones: string[];
-  /** How many n-gram lines follow the header (files written by the training script state it). */
-  entries?: number;
+  /** How many n-gram lines follow the header. */
+  entries: number;
 }
 
 export interface G2pModel {
@@ -77,17 +77,6 @@ export function parseModels(bytes: Uint8Array): G2pModel[] {
   return models;
 }
 
-/** Where the model starting at `start` ends: at the next line that begins with '{', or the end. */
-function modelEnd(bytes: Uint8Array, start: number): number {
-  let end = start;
-  for (;;) {
-    end = bytes.indexOf(NEWLINE, end);
-    if (end < 0 || end + 1 >= bytes.length) return bytes.length;
-    end++;
-    if (bytes[end] === BRACE) return end;
-  }
-}
-
 function readHeader(bytes: Uint8Array, end: number): ModelHeader {
   const header = JSON.parse(new TextDecoder().decode(bytes.subarray(0, end))) as ModelHeader;
   if (header.format !== 2) throw new Error(`pronunciation model format ${header.format} is not supported`);
@@ -113,32 +102,21 @@ function readGraphones(header: ModelHeader): Pick<G2pModel, 'graphones' | 'byLet
   return { graphones, byLetters, maxLetters };
 }
 
-/** Parses one model's bytes; throws on a malformed file (the caller reports it once). */
-export function parseModel(bytes: Uint8Array): G2pModel {
-  const { model, end } = parseModelAt(bytes, 0);
-  if (end !== bytes.length) throw new Error('pronunciation model has lines past its entries');
-  return model;
-}
-
 /**
- * Parses the model whose header line starts at `start`, and says where it ends. A header that
- * states its number of entries (every file the training script writes) is read in one pass;
- * otherwise the entries are counted first.
+ * Parses the model whose header line starts at `start` (throws on a malformed file; the caller
+ * reports it once), and says where it ends. The header states the number of entries, so the
+ * arrays are allocated once and the entries read in one pass.
  */
 function parseModelAt(all: Uint8Array, start: number): { model: G2pModel; end: number } {
   const headerEnd = all.indexOf(NEWLINE, start);
   if (headerEnd < 0) throw new Error('pronunciation model has no header line');
   const header = readHeader(all.subarray(start, headerEnd), headerEnd - start);
-  const stated = header.entries;
-  if (stated !== undefined && !(Number.isInteger(stated) && stated >= 0)) throw new Error('pronunciation model: entries is not a count');
-  const limit = stated === undefined ? modelEnd(all, start) : all.length;
-  const bytes = all.subarray(start, limit);
+  const n = header.entries;
+  if (!(Number.isInteger(n) && n >= 0)) throw new Error('pronunciation model: entries is not a count');
+  const bytes = all.subarray(start);
   const firstBreak = headerEnd - start;
   const { graphones, byLetters, maxLetters } = readGraphones(header);
   const tokens = graphones.length;
-  let n = 0;
-  if (stated !== undefined) n = stated;
-  else for (let q = firstBreak + 1; q < bytes.length; q++) if (bytes[q] === NEWLINE) n++;
   const tok = new Uint16Array(n);
   const logp = new Int16Array(n);
   const bow = new Int16Array(n);
