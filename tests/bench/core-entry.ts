@@ -12,6 +12,7 @@ export { DECOMPRESS_CHUNK } from '../../server/src/data/pronounceModel';
 export { estimateCandidates } from '../../server/src/core/g2p/estimator';
 export { decode } from '../../server/src/core/g2p/decode';
 export { letterToSound } from '../../server/src/core/lts/letterToSound';
+export { estimatePronunciation } from '../../server/src/core/lts/estimate';
 export { score as scorePronunciations } from './pronounceEval';
 export { PSEUDOWORDS } from './pseudowords';
 // The language server's edit path without the protocol (tests/bench/editPath.mjs).

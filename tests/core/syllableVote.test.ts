@@ -47,6 +47,18 @@ describe('syllableVote', () => {
     expect(syllableVote(list, 1)).toBe(1);
   });
 
+  it('never chooses no vowels while some proposal has one (8 of 135,155 CMU entries have none)', () => {
+    // The count the CMU Pronouncing Dictionary (npm cmu-pronouncing-dictionary@3.0.0) gives
+    // "shed": SH EH1 D. 0 vowels hold mass 1 + 10^-0.5 = 1.32 against 1 vowel's 10^-1 = 0.1
+    // (computed), yet the best proposal with a vowel is chosen.
+    const list = [p('SH T', -1), p('SH D', -1.5), p('SH EH1 D', -2)];
+    expect(syllableVote(list, 1)).toBe(2);
+    // Among the counts left, mass still decides: 2 vowels 10^-0.1 = 0.79 against 1 vowel 10^-1.
+    expect(syllableVote([...list, p('SH EH1 D IY0', -1.1)], 1)).toBe(3);
+    // When no proposal has a vowel ("hmm" = HH M in the dictionary), the first stays.
+    expect(syllableVote([p('HH M', -1), p('M', -2)], 1)).toBe(0);
+  });
+
   it('returns -1 for an empty list', () => {
     expect(syllableVote([], 3)).toBe(-1);
   });

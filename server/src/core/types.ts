@@ -301,7 +301,8 @@ export interface WordData {
   /**
    * Up to `k` estimated pronunciations of a lower-case spelling from the trained estimator
    * (core/g2p), best first; undefined when no model is available (the letter-to-sound rules
-   * are used instead).
+   * are used instead). `prior`, a reading built by morphology, is weighed with the estimator's
+   * own (core/g2p/estimator.ts).
    */
-  estimate?(word: string, k: number): Candidate[] | undefined;
+  estimate?(word: string, k: number, prior?: readonly string[]): Candidate[] | undefined;
 }

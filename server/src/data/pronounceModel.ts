@@ -40,7 +40,7 @@ export function loadEstimator(dataDir: string): Estimator | Error {
 }
 
 /** Up to `k` estimated pronunciations of a lower-case spelling; undefined without a model. */
-export function estimateWith(dataDir: string, word: string, k: number): Candidate[] | undefined {
+export function estimateWith(dataDir: string, word: string, k: number, prior?: readonly string[]): Candidate[] | undefined {
   const estimator = loadEstimator(dataDir);
-  return estimator instanceof Error ? undefined : estimateCandidates(estimator, word, k);
+  return estimator instanceof Error ? undefined : estimateCandidates(estimator, word, k, prior);
 }

@@ -20,8 +20,8 @@ export class WordTable implements WordData {
     this.offsets = offsets;
   }
 
-  estimate(word: string, k: number): Candidate[] | undefined {
-    return this.modelDir === null ? undefined : estimateWith(this.modelDir, word, k);
+  estimate(word: string, k: number, prior?: readonly string[]): Candidate[] | undefined {
+    return this.modelDir === null ? undefined : estimateWith(this.modelDir, word, k, prior);
   }
 
   /** Number of distinct words in the table. */

@@ -27,7 +27,11 @@ export function vowelCount(phones: readonly string[]): number {
 
 /**
  * Index of the proposal to put first: the best-ranked one (lowest index) among those whose vowel
- * count has the largest posterior mass. Posteriors are 10^(log10 / temperature), normalised over
+ * count has the largest posterior mass. A count of no vowels takes part only when every proposal
+ * has none: of the 135,155 entries of the CMU Pronouncing Dictionary (npm
+ * cmu-pronouncing-dictionary@3.0.0) only 8 interjections ("hmm", "shh") have no vowel, while the
+ * models read some spellings as consonants alone ("shed" as SH T, "bp" as B P); on the
+ * development words this raised syllables exact from 97.28 % to 97.36 %. Posteriors are 10^(log10 / temperature), normalised over
  * the list: a temperature above 1 flattens the scores of the models, which are over-confident
  * as n-gram scores are (chosen on the development words). `proposals` is in ranked order; -1 when
  * it is empty. Ties in mass keep the count of the first proposal.
@@ -40,7 +44,9 @@ export function syllableVote(proposals: readonly Scored[], temperature: number):
     const n = vowelCount(p.phones);
     mass.set(n, (mass.get(n) ?? 0) + 10 ** ((p.log10 - top) / temperature));
   }
+  if (mass.size > 1) mass.delete(0);
   let winner = vowelCount(proposals[0].phones);
+  if (!mass.has(winner)) winner = mass.keys().next().value!;
   for (const [n, m] of mass) if (m > mass.get(winner)!) winner = n;
   return proposals.findIndex((p) => vowelCount(p.phones) === winner);
 }

@@ -1,10 +1,11 @@
-// Pronunciations for words the dictionary does not list. Morphology comes first: most unknown
-// words in scripts are an inflection, a derivation or a compound of listed words, and building on
-// a listed stem is far more reliable than spelling rules. When no analysis works, the trained
-// estimator (a joint-sequence model, core/g2p) guesses from the letters; the NRL letter-to-sound
-// rules remain only for when no model is loaded, since the estimator beats them on every measure
-// on the held-out words (README, "Words not in the dictionary").
-
+// Pronunciations for words the dictionary does not list. Morphology comes first: many unknown
+// words in scripts are an inflection, a derivation or a compound of listed words. A plural or
+// possessive of a listed stem is taken as it is; any other analysis is one reading among the
+// trained estimator's (a joint-sequence model, core/g2p), since on words hidden from the lookup
+// the estimator read derivations and would-be compounds better than building on a stem did
+// (estimatePronunciation below). The NRL letter-to-sound rules remain only for when no model is
+// loaded, since the estimator beats them on every measure on the held-out words (README, "Words
+// not in the dictionary").
 import type { Candidate } from '../g2p/decode';
 import type { WordData } from '../types';
 import { letterToSound } from './letterToSound';
@@ -22,6 +23,11 @@ export interface Estimate {
 interface Analysis {
   phones: string[];
   how: string;
+  /**
+   * A listed stem with only plural or possessive endings ("cat" + -s, "boxes", "cat's"): taken as
+   * it is. Any other analysis is weighed against the estimator's own readings (below).
+   */
+  settled: boolean;
 }
 
 const SIBILANT_PHONES = new Set(['S', 'Z', 'SH', 'ZH', 'CH', 'JH']);
@@ -154,7 +160,7 @@ function secondary(phones: string[]): string[] {
 
 function resolveStem(word: string, data: WordData, depth: number): Analysis | undefined {
   const phones = stem(word, data);
-  if (phones !== undefined) return { phones, how: `'${word}'` };
+  if (phones !== undefined) return { phones, how: `'${word}'`, settled: true };
   // A stem that is itself analysed ("walker" in "walkers") keeps its own explanation.
   return depth > 0 ? analyzeWord(word, data, depth - 1) : undefined;
 }
@@ -169,7 +175,7 @@ function trySuffixes(word: string, data: WordData, depth: number): Analysis | un
       // top of a guessed analysis is too far from the evidence ("everyth" + e = "every" + "the").
       const found = resolveStem(spelling, data, spelling === base ? depth : 0);
       if (found !== undefined && (suffix.accepts === undefined || suffix.accepts(found.phones, spelling))) {
-        return { phones: suffix.build(found.phones), how: `${found.how} + ${suffix.label}` };
+        return { phones: suffix.build(found.phones), how: `${found.how} + ${suffix.label}`, settled: found.settled && suffix.build === plural };
       }
     }
   }
@@ -200,7 +206,7 @@ function tryCompound(word: string, data: WordData): Analysis | undefined {
     if (a === undefined) continue;
     const b = stem(second, data);
     if (b === undefined) continue;
-    const found = { phones: [...a, ...secondary(b)], how: `compound '${first}' + '${second}'` };
+    const found = { phones: [...a, ...secondary(b)], how: `compound '${first}' + '${second}'`, settled: false };
     if (!digraph) return found;
     fallback = found;
   }
@@ -218,20 +224,30 @@ export const ESTIMATOR_HOW = 'joint-sequence model';
 /**
  * Estimates the pronunciation of a lower-case word the dictionary does not list. Morphology on
  * listed stems is tried first (suffixes such as -s, -ed, -ing, -er, -ly, -ness, -ful, -less, then
- * compounds of two listed words); failing that, the trained estimator, or without a model the
- * NRL letter-to-sound rules. Phones are CMU
- * ARPAbet with stress digits; for an input with no letters, `phones` is empty.
+ * compounds of two listed words). A listed stem with plural or possessive endings is taken as it
+ * is. Any other analysis joins the trained estimator's proposals, weighted (g2p/estimator.ts
+ * PRIOR_BONUS), and is used when it comes first: with each development word hidden from the
+ * lookup, taking every analysis as it is gave phones exact 70.20 % and syllables exact 96.83 %,
+ * where the estimator alone gave 74.58 % and 97.36 % (most of the loss was compounds: "alessandra"
+ * is not "ales" + "sandra"). Plurals of listed stems were the analyses that beat the estimator
+ * (1,199 of 1,289 phones exact against 1,140). Without a model: morphology, then the NRL
+ * letter-to-sound rules. Phones are CMU ARPAbet with stress digits; for an input with no letters,
+ * `phones` is empty.
  */
 export function estimatePronunciation(word: string, data: WordData): Estimate {
   const spelling = word.toLowerCase().replace(/[^a-z']/g, '');
   const found = spelling.length >= 4 ? analyzeWord(spelling, data, 1) : undefined;
-  if (found !== undefined) {
-    const how = found.how.startsWith("'") ? `stem ${found.how}` : found.how;
-    return { phones: found.phones, source: 'morphology', how, alternatives: [] };
-  }
-  const candidates = spelling ? data.estimate?.(spelling, ALTERNATIVES) : undefined;
+  const candidates = spelling && !found?.settled ? data.estimate?.(spelling, ALTERNATIVES, found?.phones) : undefined;
+  const morphology = (alternatives: Candidate[]): Estimate => ({
+    phones: found!.phones,
+    source: 'morphology',
+    how: found!.how.startsWith("'") ? `stem ${found!.how}` : found!.how,
+    alternatives,
+  });
   if (candidates !== undefined && candidates.length > 0) {
+    if (found !== undefined && candidates[0].phones.join(' ') === found.phones.join(' ')) return morphology(candidates);
     return { phones: candidates[0].phones, source: 'estimate', how: ESTIMATOR_HOW, alternatives: candidates };
   }
+  if (found !== undefined) return morphology([]);
   return { phones: letterToSound(spelling), source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
 }
