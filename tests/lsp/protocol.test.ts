@@ -271,6 +271,22 @@ describe('estimated pronunciations are marked wherever numbers show', () => {
     // Written as an override, the word is no longer estimated.
     expect(analyze({ text: after, data: words }).items[0].estimatedWords).toBe(0);
   });
+
+  it('a reading built from listed stems that came first says so, with the weight it was given', async () => {
+    // "unkindnesses" is unlisted; 'unkind' + -ness + -es is weighed with the estimator's readings
+    // (core/lts/estimate.ts) and comes first.
+    const t2 = '== Words\nNo more unkindnesses.\n';
+    const u2 = fileUri(join(dir, 'stems.rungs'));
+    await c.open(u2, t2);
+    await c.diagnosticsFor(u2, 1);
+    const est = estimatePronunciation('unkindnesses', words);
+    expect(est.source).toBe('morphology');
+    const hover = hoverText(await hoverAt(1, 10, u2));
+    expect(hover).toContain("stem 'unkind' + -ness + -es");
+    expect(hover).toContain('the first is built from listed stems, its score weighted ×10');
+    expect(hover).toContain(`| 1 | \`${est.phones.join(' ')}\``);
+    expect(hover).not.toContain("Estimator's alternatives");
+  });
 });
 
 describe('code actions', () => {

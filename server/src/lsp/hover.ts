@@ -39,10 +39,15 @@ function sourceText(w: WordAnalysis, how: string): string {
   return isEstimated(w) ? `${ESTIMATED_MARK} estimated pronunciation (${how}): check it, or add a pronunciation override` : how;
 }
 
-/** The estimator's ranked candidates with their shares; a quick fix writes any of them as @say. */
-function estimatorAlternatives(word: string, alternatives: Candidate[]): string {
+/**
+ * The estimator's ranked candidates with their shares; a quick fix writes any of them as @say.
+ * When morphology's reading came first (`fromStems`), its score includes the weight it was given.
+ */
+function estimatorAlternatives(word: string, alternatives: Candidate[], fromStems: boolean): string {
   const rows = alternatives.map((c, i) => `| ${i + 1} | \`${c.phones.join(' ')}\` /${toIpa(c.phones)}/ | ${Math.round(100 * c.share)} % | ${c.log10.toFixed(2)} |`);
-  const head = `Estimator's alternatives for ${md(word)} (share among them; log10 probability); a quick fix writes one as \`@say\`:`;
+  const head = fromStems
+    ? `Readings of ${md(word)}: the first is built from listed stems, its score weighted ×10 against the estimator's own (share among them; log10 probability); a quick fix writes one as \`@say\`:`
+    : `Estimator's alternatives for ${md(word)} (share among them; log10 probability); a quick fix writes one as \`@say\`:`;
   return [head, '', '| # | phones | share | log10 p |', '|---:|---|---:|---:|', ...rows].join('\n');
 }
 
@@ -64,7 +69,7 @@ export function wordHoverText(s: Snapshot, w: WordAnalysis, variantMark: number 
   }
   if (score.alternatives.length > 1) {
     lines.push('');
-    lines.push(estimatorAlternatives(w.spoken, score.alternatives));
+    lines.push(estimatorAlternatives(w.spoken, score.alternatives, score.source === 'morphology'));
   }
   if (w.variants.length > 1 || (w.variants.length === 1 && w.source !== 'dictionary')) {
     lines.push('');
