@@ -39,7 +39,8 @@ export const pronounceCommand: Command = {
     'Usage: rungs pronounce WORD... [--estimate]',
     '',
     '  Looks each word up as a script would: the CMU Pronouncing Dictionary, then morphology on a',
-    '  dictionary stem, then the trained estimator (with its ranked alternatives and their shares).',
+    '  dictionary stem (a plural or possessive as it is; any other reading weighed with the',
+    "  estimator's), then the trained estimator (with its ranked alternatives and their shares).",
     '  --estimate  skip the dictionary and morphology: the estimator answers alone',
   ].join('\n'),
   run(io: CliIO, argv: string[]): number {
