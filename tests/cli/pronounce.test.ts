@@ -31,6 +31,20 @@ describe('rungs pronounce', () => {
     expect(alternatives[0]).toMatch(new RegExp(`^  1\\. ${est.phones.join(' ')} +\\d+ %   log10 p -\\d+\\.\\d\\d$`));
   });
 
+  it('says why an alternative with a higher share ranks lower (not one main stress)', async () => {
+    const est = estimatePronunciation('wintermoss', words);
+    const r = await run(['pronounce', 'wintermoss']);
+    const rows = r.out.trimEnd().split('\n').slice(1);
+    expect(rows).toHaveLength(est.alternatives.length);
+    est.alternatives.forEach((c, i) => {
+      const n = c.phones.filter((p) => p.endsWith('1')).length;
+      if (n === 1) expect(rows[i]).toMatch(/log10 p -\d+\.\d\d$/);
+      else expect(rows[i]).toContain(n === 0 ? '(no main stress: ranked after readings with one)' : `(${n} main stresses: ranked after readings with one)`);
+    });
+    // The case that needs the note: a two-stress reading holds most of the share yet ranks last.
+    expect(rows.some((row) => row.includes('2 main stresses'))).toBe(true);
+  });
+
   it('with --estimate skips the dictionary even for a listed word', async () => {
     const r = await run(['pronounce', '--estimate', 'cat']);
     expect(r.out.split('\n')[0]).toMatch(/^cat\t[A-Z0-9 ]+\t.*≈ estimated: estimate \(joint-sequence model\)$/);

@@ -9,7 +9,7 @@ import { brotliDecompressSync } from 'node:zlib';
 import { dictionary } from 'cmu-pronouncing-dictionary';
 import { describe, expect, it } from 'vitest';
 import { decode } from '../../server/src/core/g2p/decode';
-import { estimateCandidates, PRIOR_BONUS } from '../../server/src/core/g2p/estimator';
+import { estimateCandidates, PRIOR_BONUS, rankNote } from '../../server/src/core/g2p/estimator';
 import { parseModels } from '../../server/src/core/g2p/model';
 import { estimatePronunciation } from '../../server/src/core/lts/estimate';
 import { letterToSound } from '../../server/src/core/lts/letterToSound';
@@ -124,6 +124,12 @@ describe('decoding', () => {
     expect(c?.log10).toBeCloseTo(forced + PRIOR_BONUS, 9);
     // A reading the models cannot spell at all is left out, never given a score.
     expect(estimateCandidates(estimator, 'wintermoss', 5, ['ZH']).some((x) => x.phones.join(' ') === 'ZH')).toBe(false);
+  });
+
+  it('notes readings without exactly one main stress, which rank after those with one', () => {
+    expect(rankNote('K AE1 T'.split(' '))).toBe('');
+    expect(rankNote('W IH1 N T ER0 M AO1 S'.split(' '))).toBe('2 main stresses: ranked after readings with one');
+    expect(rankNote('K AE0 T'.split(' '))).toBe('no main stress: ranked after readings with one');
   });
 
   it('gives the same first answer whether one or five are asked for', () => {

@@ -1,6 +1,7 @@
 // `rungs pronounce WORD... [--estimate]`: each word's pronunciation and where it came from. With
 // --estimate the dictionary (and morphology on its stems) is skipped and the trained estimator
 // answers alone, so anyone can compare its guesses with the dictionary's entries.
+import { rankNote } from '../core/g2p/estimator';
 import { ALTERNATIVES, ESTIMATOR_HOW } from '../core/lts/estimate';
 import { letterToSound } from '../core/lts/letterToSound';
 import { toIpa } from '../core/phones';
@@ -28,7 +29,10 @@ export function formatPronunciation(word: string, p: Pronunciation): string {
   const n = countSyllables(p.phones);
   const source = p.source === 'dictionary' || p.source === 'override' ? p.how : `≈ estimated: ${p.source} (${p.how})`;
   const lines = [`${word}\t${p.phones.join(' ')}\t/${toIpa(p.phones)}/\t${n} syllable${n === 1 ? '' : 's'}\t${source}`];
-  p.alternatives.forEach((c, i) => lines.push(`  ${i + 1}. ${c.phones.join(' ').padEnd(32)} ${percent(c.share).padStart(6)}   log10 p ${c.log10.toFixed(2)}`));
+  p.alternatives.forEach((c, i) => {
+    const note = rankNote(c.phones);
+    lines.push(`  ${i + 1}. ${c.phones.join(' ').padEnd(32)} ${percent(c.share).padStart(6)}   log10 p ${c.log10.toFixed(2)}${note ? `   (${note})` : ''}`);
+  });
   return `${lines.join('\n')}\n`;
 }
 

@@ -5,6 +5,7 @@ import { isEstimated } from '../core/pronounce';
 import { MarkupKind, type Hover } from 'vscode-languageserver/node';
 import { settingSpec } from '../core/settings';
 import type { Candidate } from '../core/g2p/decode';
+import { rankNote } from '../core/g2p/estimator';
 import { toIpa } from '../core/phones';
 import { LOW_FREQUENCY_ZIPF } from '../core/frequency';
 import type { ItemAnalysis, RungAnalysis, Setting, WcmParts, WordAnalysis } from '../core/types';
@@ -44,11 +45,11 @@ function sourceText(w: WordAnalysis, how: string): string {
  * When morphology's reading came first (`fromStems`), its score includes the weight it was given.
  */
 function estimatorAlternatives(word: string, alternatives: Candidate[], fromStems: boolean): string {
-  const rows = alternatives.map((c, i) => `| ${i + 1} | \`${c.phones.join(' ')}\` /${toIpa(c.phones)}/ | ${Math.round(100 * c.share)} % | ${c.log10.toFixed(2)} |`);
+  const rows = alternatives.map((c, i) => `| ${i + 1} | \`${c.phones.join(' ')}\` /${toIpa(c.phones)}/ | ${Math.round(100 * c.share)} % | ${c.log10.toFixed(2)} | ${rankNote(c.phones)} |`);
   const head = fromStems
     ? `Readings of ${md(word)}: the first is built from listed stems, its score weighted ×10 against the estimator's own (share among them; log10 probability); a quick fix writes one as \`@say\`:`
     : `Estimator's alternatives for ${md(word)} (share among them; log10 probability); a quick fix writes one as \`@say\`:`;
-  return [head, '', '| # | phones | share | log10 p |', '|---:|---|---:|---:|', ...rows].join('\n');
+  return [head, '', '| # | phones | share | log10 p | note |', '|---:|---|---:|---:|---|', ...rows].join('\n');
 }
 
 export function wordHoverText(s: Snapshot, w: WordAnalysis, variantMark: number | null): string {

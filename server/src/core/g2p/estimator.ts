@@ -40,6 +40,22 @@ export const MAX_ESTIMATED_LETTERS = 32;
 
 const reversed = <T>(xs: readonly T[]): T[] => [...xs].reverse();
 
+/** Primary stresses (vowels marked 1) in CMU phones: dictionary words nearly always have one. */
+export function mainStresses(phones: readonly string[]): number {
+  let n = 0;
+  for (const p of phones) if (p.endsWith('1')) n++;
+  return n;
+}
+
+/**
+ * Why an alternative ranks below ones with a higher share, for people reading the ranked list:
+ * proposals without exactly one main stress rank after those with one, whatever their score.
+ */
+export function rankNote(phones: readonly string[]): string {
+  const n = mainStresses(phones);
+  return n === 1 ? '' : n === 0 ? 'no main stress: ranked after readings with one' : `${n} main stresses: ranked after readings with one`;
+}
+
 /** log10 probability of one exact pronunciation under a model, -Infinity when it cannot spell it. */
 function scoreOf(m: G2pModel, word: string, phones: string[]): number {
   return decode(m, word, 1, BEAM, phones, true)[0]?.log10 ?? -Infinity;
@@ -85,7 +101,7 @@ export function estimateCandidates(e: Estimator, word: string, k: number, prior?
     if (key === priorKey) log10 += PRIOR_BONUS;
     if (log10 > -Infinity) scored.push({ phones, log10 });
   }
-  const wellFormed = (phones: string[]): number => (phones.filter((p) => p.endsWith('1')).length === 1 ? 1 : 0);
+  const wellFormed = (phones: string[]): number => (mainStresses(phones) === 1 ? 1 : 0);
   scored.sort((a, b) => wellFormed(b.phones) - wellFormed(a.phones) || b.log10 - a.log10);
   const chosen = syllableVote(scored, TEMPERATURE);
   if (chosen > 0) scored.unshift(...scored.splice(chosen, 1));
