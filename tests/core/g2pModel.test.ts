@@ -101,3 +101,48 @@ describe('the search', () => {
     expect(decode(m, 'ac', 5, 16)).toEqual([]);
   });
 });
+
+describe('the search with more hypotheses at a letter than its first table holds', () => {
+  // 600 graphones for 'a' (keys sorted, as the file requires), each a context with its own
+  // backoff weight, and no bigrams between them: after "aa" each second graphone is its own state,
+  // reached from all 600 first ones. The table behind a letter starts at 1,024 slots and is
+  // rebuilt past 512 members, so recombination has to survive the rebuild. The expected answer is
+  // worked out by brute force with `step` (itself checked by hand above).
+  const PH = ['AA', 'AE', 'AH', 'AO', 'AW', 'AY', 'EH', 'ER', 'EY', 'IH', 'IY', 'OW', 'OY', 'UH', 'UW', 'B', 'D', 'F', 'G', 'K', 'L', 'M', 'N', 'P', 'S', 'T', 'V', 'Z'];
+  const keys: string[] = [];
+  for (const a of PH) for (const b of PH) if (keys.length < 600) keys.push(`a}${a}${/[AEIOU]/.test(a[0]) ? '1' : ''}_${b}${/[AEIOU]/.test(b[0]) ? '0' : ''}`);
+  keys.sort((x, y) => (x < y ? -1 : x > y ? 1 : 0));
+  const n = keys.length;
+  const lines = ['0 0 -500 -10'];
+  for (let t = 1; t <= n; t++) lines.push(`0 ${t} ${-(100 + ((t * 37) % 400))} ${-((t * 13) % 200)}`);
+  // One bigram so the boundary is a context: <s> followed by the first graphone.
+  lines.push('1 1 -90');
+  const big = parseModels(new TextEncoder().encode(`${JSON.stringify({ format: 2, method: 'test', direction: 'forward', scale: 500, params: {}, checksum: '', graphones: keys, entries: lines.length })}\n${lines.join('\n')}\n`))[0];
+  const phonesOf = (t: number) => keys[t - 1].slice(2).split('_');
+  const cost = (state: number, t: number) => {
+    step(big, state, t);
+    return { ...stepResult };
+  };
+
+  it('keeps the best first graphone for each second one, in both kinds of search', () => {
+    const best = new Map<number, { score: number; t1: number }>();
+    for (let t1 = 1; t1 <= n; t1++) {
+      const a = cost(big.start, t1);
+      for (let t2 = 1; t2 <= n; t2++) {
+        const b = cost(a.state, t2);
+        const score = a.cost + b.cost + cost(b.state, 0).cost;
+        const hit = best.get(t2);
+        if (hit === undefined || score > hit.score) best.set(t2, { score, t1 });
+      }
+    }
+    const top = [...best].sort((x, y) => y[1].score - x[1].score || x[0] - y[0]).slice(0, 5);
+    const got = decode(big, 'aa', 5, 1000);
+    expect(got.map((c) => c.phones)).toEqual(top.map(([t2, { t1 }]) => [...phonesOf(t1), ...phonesOf(t2)]));
+    expect(got.map((c) => c.log10)).toEqual(top.map(([, { score }]) => score / 500));
+    // With a target (keys are then state and phones consumed), the best path to it is found.
+    const [t2, { t1, score }] = top[0];
+    const target = [...phonesOf(t1), ...phonesOf(t2)];
+    const forced = decode(big, 'aa', 1, 1000, target, true);
+    expect(forced.map((c) => [c.phones, c.log10])).toEqual([[target, score / 500]]);
+  });
+});

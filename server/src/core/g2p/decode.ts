@@ -88,8 +88,11 @@ class Bucket {
   size = 0;
   /** The best score among the members (-Infinity when empty). */
   best = -Infinity;
+  /** Whether keys are (state, phones consumed), as in a search with a target, or the state alone. */
+  private byTarget = false;
 
-  open(): void {
+  open(byTarget: boolean): void {
+    this.byTarget = byTarget;
     this.size = 0;
     this.best = -Infinity;
     if (++this.stamp === 0x7fffffff) {
@@ -138,7 +141,7 @@ class Bucket {
     this.stamp = 1;
     for (let k = 0; k < this.size; k++) {
       const h = this.members[k];
-      const key = keyOf.target ? hState[h] * 64 + hPos[h] : hState[h];
+      const key = this.byTarget ? hState[h] * 64 + hPos[h] : hState[h];
       let i = Math.imul(key, 0x9e3779b1) >>> this.shift;
       while (this.stamps[i] === this.stamp) i = (i + 1) & this.mask;
       this.stamps[i] = this.stamp;
@@ -148,8 +151,6 @@ class Bucket {
   }
 }
 
-/** Whether the running search recombines by (state, phones consumed) rather than by state. */
-const keyOf = { target: false };
 const buckets = [new Bucket(), new Bucket()];
 /** The hypotheses kept at a letter, best first. */
 let kept = new Int32Array(64);
@@ -201,20 +202,20 @@ export function decode(m: G2pModel, word: string, k = 5, beam = DEFAULT_BEAM, ta
   const n = word.length;
   if (n === 0) return [];
   used = 0;
-  keyOf.target = target !== undefined;
   const twoLetters = m.maxLetters > 1;
   // Scores are in the model's units (log10 x scale), so they are sums of integers.
   const prune = PRUNE * m.scale;
   expandWithin = EXPAND * m.scale;
   let current = buckets[0];
-  current.open();
-  current.offer(target === undefined ? m.start : m.start * 64, m.start, 0, 0, -1, 0);
-  buckets[1].open();
+  const byTarget = target !== undefined;
+  current.open(byTarget);
+  current.offer(byTarget ? m.start * 64 : m.start, m.start, 0, 0, -1, 0);
+  buckets[1].open(byTarget);
   for (let i = 0; i < n; i++) {
     current = buckets[i & 1];
     const count = current.size === 0 ? 0 : selectBeam(current, beam);
     // This bucket's table now serves the letter after next.
-    current.open();
+    current.open(byTarget);
     if (count === 0) continue;
     for (let len = 1; len <= 2 && i + len <= n; len++) {
       if (len === 2 && !twoLetters) break;
