@@ -8,9 +8,9 @@
 import { fc, test } from '@fast-check/vitest';
 import { expect } from 'vitest';
 import type { RungAnalysis } from '../../server/src/core/types';
-import { generalSpokenKey } from '../../server/src/rules/itemKey';
 import { repeatsOf } from '../../server/src/rules/repeats';
 import { analyzeText } from '../helpers/data';
+import { plainRepeats } from '../helpers/repeats';
 
 const ITEMS = ['Come in.', 'come in!', 'Sit down.', 'sit  down', 'Good morning.', 'Word ngwk.', 'word nuaab', '(Wave.)', 'Thank you.', '...'];
 const RUNGS = 4;
@@ -25,20 +25,7 @@ function rungsOf(contents: string[][]): RungAnalysis[] {
 }
 
 /** The plain pass: script order, first item of each general key, every later one a repeat of it. */
-function expected(rungs: readonly RungAnalysis[]): [number, number][] {
-  const first = new Map<string, number>();
-  const out: [number, number][] = [];
-  for (const r of rungs) {
-    for (const it of r.items) {
-      const key = generalSpokenKey(it.node.text);
-      if (!key) continue;
-      const at = first.get(key);
-      if (at === undefined) first.set(key, it.node.line);
-      else out.push([it.node.line, at]);
-    }
-  }
-  return out;
-}
+const expected = (rungs: readonly RungAnalysis[]): [number, number][] => plainRepeats(rungs.flatMap((r) => r.items));
 
 test.prop(
   [
