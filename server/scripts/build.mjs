@@ -1,7 +1,8 @@
 // Builds everything: the compact word tables and the esbuild bundles (CLI, language server,
 // VS Code client). `npm run build` runs this; tests and the demo run it first.
 import { build } from 'esbuild';
-import { copyFileSync, existsSync, mkdirSync, statSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, statSync, writeFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { buildWordData } from './build-data.mjs';
@@ -56,6 +57,8 @@ const entries = [
   { in: 'client/src/extension.ts', out: 'extension.js', external: ['vscode'] },
   // The benchmark calls the core in-process through this small bundle (not shipped).
   { in: 'tests/bench/core-entry.ts', out: 'bench-core.js' },
+  // The build's own step below: the model's binary image (not shipped).
+  { in: 'server/src/data/pronounceModel.ts', out: 'tools/pronounce-model.js' },
 ];
 await Promise.all(
   entries
@@ -70,3 +73,9 @@ await Promise.all(
       }),
     ),
 );
+
+// The model's binary image beside it (core/g2p/modelImage.ts): a process then reads the estimator
+// in tens of milliseconds instead of decompressing and parsing the text model. Written again only
+// when the model file changed.
+const { writeImageBeside } = createRequire(import.meta.url)(join(dist, 'tools', 'pronounce-model.js'));
+if (writeImageBeside(dataDir, (p, b) => writeFileSync(p, b)) === 'written') console.log('pronunciation model image written');

@@ -8,7 +8,8 @@ export { ESPEAK, findOnPath } from '../../server/src/speech/espeak';
 export { makePace } from '../../server/src/core/pace';
 // The pronunciation estimator and its comparison (tests/bench/pronounce.mjs).
 export { parseModels, modelBytes } from '../../server/src/core/g2p/model';
-export { DECOMPRESS_CHUNK } from '../../server/src/data/pronounceModel';
+export { DECOMPRESS_CHUNK, IMAGE_FILE } from '../../server/src/data/pronounceModel';
+export { readModelImage } from '../../server/src/core/g2p/modelImage';
 export { estimateCandidates } from '../../server/src/core/g2p/estimator';
 export { decode } from '../../server/src/core/g2p/decode';
 export { letterToSound } from '../../server/src/core/lts/letterToSound';

@@ -1,15 +1,20 @@
-// Node-side loading of the pronunciation estimator's models (dist/data/pronounce-model.txt.br,
-// copied there by the build from server/data/). It is read on the first estimate a process
-// needs, never at start-up: most scripts have no unknown words, and reading the model costs a
-// few hundred milliseconds.
+// Node-side loading of the pronunciation estimator's models. The build copies the committed model
+// (server/data/pronounce-model.txt.br) into dist/data and writes its binary image beside it
+// (core/g2p/modelImage.ts). Either is read on the first estimate a process needs, never at
+// start-up: most scripts have no unknown words. The image is read in tens of milliseconds; the
+// text model costs a decompression and a parse (a few hundred), so it is the fallback, used when
+// the image is missing, damaged or was made from another model file.
+import { createHash } from 'node:crypto';
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { brotliDecompressSync } from 'node:zlib';
 import type { Candidate } from '../core/g2p/decode';
 import { estimateCandidates, type Estimator } from '../core/g2p/estimator';
-import { parseModels } from '../core/g2p/model';
+import { parseModels, type G2pModel } from '../core/g2p/model';
+import { readModelImage, writeModelImage } from '../core/g2p/modelImage';
 
 export const MODEL_FILE = 'pronounce-model.txt.br';
+export const IMAGE_FILE = 'pronounce-model.bin';
 /**
  * Output chunk of the decompression, larger than the decompressed model (about 17 MB). With the
  * default 16 kB chunks the text is built from a thousand small blocks and then copied into one,
@@ -19,20 +24,79 @@ export const MODEL_FILE = 'pronounce-model.txt.br';
  */
 export const DECOMPRESS_CHUNK = 32 * 1024 * 1024;
 
+/** What an image records as its source: the SHA-256 and size of the model file it was made from. */
+export function sourceDigest(modelFileBytes: Uint8Array): string {
+  return `sha256:${createHash('sha256').update(modelFileBytes).digest('hex')} bytes:${modelFileBytes.length}`;
+}
+
+/** The models of a text model file (brotli-compressed). */
+export function readModelFile(bytes: Uint8Array): G2pModel[] {
+  return atLeastOne(parseModels(brotliDecompressSync(bytes, { chunkSize: DECOMPRESS_CHUNK })));
+}
+
+function atLeastOne(models: G2pModel[]): G2pModel[] {
+  if (!models.length) throw new Error('holds no model');
+  return models;
+}
+
+/**
+ * The image of the model file in `dataDir`, written beside it unless one made from the same file
+ * is there already (the build calls this). Says what it did.
+ */
+export function writeImageBeside(dataDir: string, write: (path: string, bytes: Uint8Array) => void): 'written' | 'current' | 'no model' {
+  const file = join(dataDir, MODEL_FILE);
+  if (!existsSync(file)) return 'no model';
+  const bytes = readFileSync(file);
+  const source = sourceDigest(bytes);
+  const image = join(dataDir, IMAGE_FILE);
+  if (existsSync(image)) {
+    try {
+      if (readModelImage(readFileSync(image)).source === source) return 'current';
+    } catch {
+      // A damaged or older image is written again.
+    }
+  }
+  write(image, writeModelImage(readModelFile(bytes), source));
+  return 'written';
+}
+
+/**
+ * The models in `dataDir`: from the image when it reads, checks and (with the model file beside
+ * it) was made from that file; from the model file otherwise. Throws when neither can be read.
+ */
+export function readModels(dataDir: string): G2pModel[] {
+  const file = join(dataDir, MODEL_FILE);
+  const image = join(dataDir, IMAGE_FILE);
+  const text = existsSync(file) ? readFileSync(file) : undefined;
+  let imageError: string | undefined;
+  if (existsSync(image)) {
+    try {
+      const read = readModelImage(readFileSync(image));
+      if (text === undefined || read.source === sourceDigest(text)) return atLeastOne(read.models);
+      imageError = `${image} was made from another model file`;
+    } catch (err) {
+      imageError = `${image}: ${err instanceof Error ? err.message : String(err)}`;
+    }
+  }
+  if (text === undefined) throw new Error(imageError ?? `${file} not found: run \`npm run build\``);
+  try {
+    return readModelFile(text);
+  } catch (err) {
+    throw new Error(`${file}: ${err instanceof Error ? err.message : String(err)}${imageError ? `; ${imageError}` : ''}`);
+  }
+}
+
 const loaded = new Map<string, Estimator | Error>();
 
 /** The estimator in `dataDir`, read once per process; an Error when missing or unreadable. */
 export function loadEstimator(dataDir: string): Estimator | Error {
   let hit = loaded.get(dataDir);
   if (hit === undefined) {
-    const file = join(dataDir, MODEL_FILE);
     try {
-      if (existsSync(file)) {
-        const [forward, reverse] = parseModels(brotliDecompressSync(readFileSync(file), { chunkSize: DECOMPRESS_CHUNK }));
-        hit = { forward, reverse: reverse ?? null };
-      } else hit = new Error(`${file} not found: run \`npm run build\``);
+      const [forward, reverse] = readModels(dataDir);
+      hit = { forward, reverse: reverse ?? null };
     } catch (err) {
-      hit = new Error(`${file}: ${err instanceof Error ? err.message : String(err)}`);
+      hit = err instanceof Error ? err : new Error(String(err));
     }
     loaded.set(dataDir, hit);
   }

@@ -78,13 +78,22 @@ export function parseModels(bytes: Uint8Array): G2pModel[] {
 }
 
 function readHeader(bytes: Uint8Array, end: number): ModelHeader {
-  const header = JSON.parse(new TextDecoder().decode(bytes.subarray(0, end))) as ModelHeader;
+  return checkHeader(JSON.parse(new TextDecoder().decode(bytes.subarray(0, end))) as ModelHeader);
+}
+
+/** A model header as read, or an error naming what is wrong with it. */
+export function checkHeader(header: ModelHeader): ModelHeader {
+  if (typeof header !== 'object' || header === null) throw new Error('pronunciation model header is not an object');
   if (header.format !== 2) throw new Error(`pronunciation model format ${header.format} is not supported`);
   if (!(header.scale > 0)) throw new Error('pronunciation model has no scale');
+  if (!Array.isArray(header.graphones) || !header.graphones.every((g) => typeof g === 'string' && g.includes('}'))) {
+    throw new Error('pronunciation model header: graphones is not a list of letters}phones');
+  }
   return header;
 }
 
-function readGraphones(header: ModelHeader): Pick<G2pModel, 'graphones' | 'byLetters' | 'maxLetters'> {
+/** The graphone list of a checked header, and the token range of each letter string. */
+export function readGraphones(header: ModelHeader): Pick<G2pModel, 'graphones' | 'byLetters' | 'maxLetters'> {
   const graphones: (Graphone | null)[] = [null];
   const byLetters = new Map<string, { lo: number; hi: number }>();
   let maxLetters = 1;
