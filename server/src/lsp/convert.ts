@@ -39,7 +39,6 @@ export function toLspDiagnostic(p: Problem, uri: string): Diagnostic {
     codeDescription: { href: ruleDocsUrl(p.rule) },
     source: DIAGNOSTIC_SOURCE,
     message: p.message,
-    data: { rule: p.rule, fixable: Boolean(p.fix) },
   };
   if (p.unnecessary) d.tags = [DiagnosticTag.Unnecessary];
   if (p.related?.length) {
