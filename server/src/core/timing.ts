@@ -131,6 +131,16 @@ function shift(words: PlannedWord[], by: number): PlannedWord[] {
 }
 
 /**
+ * Where the session stands after an item of `seconds` that starts at `start`: at its end in
+ * unison, after the client's response window in echo mode. planSession and the kept rung lengths
+ * both step with it, so the two sums are made of the same additions.
+ */
+function afterItem(start: number, seconds: number, timing: TimingOptions, mode: DeliveryMode): number {
+  const end = start + seconds;
+  return mode === 'echo' ? end + seconds * timing.echoWindow : end;
+}
+
+/**
  * The session plan of an analysed script: every rung with items (or the one asked for), each item
  * at its rung's first pace (or the pace asked for), items separated by the gap, and in echo mode a
  * response window after each model. This is the function other outputs (cue tracks, audio, the
@@ -152,13 +162,9 @@ export function planSession(analysis: Analysis, request: PlanRequest = {}): Sess
       if (k > 0) at += timing.gap;
       const { words, seconds } = planItemWords(it, pace, timing);
       const start = at;
-      at += seconds;
-      const end = at;
-      let response: PlannedItem['response'] = null;
-      if (mode === 'echo') {
-        response = { start: end, end: end + seconds * timing.echoWindow };
-        at = response.end;
-      }
+      const end = start + seconds;
+      at = afterItem(start, seconds, timing, mode);
+      const response: PlannedItem['response'] = mode === 'echo' ? { start: end, end: at } : null;
       const planned: PlannedItem = { line: it.node.line, id: it.node.id, text: it.node.text, textStart: it.node.textStart, rung: r.index, pace, start, end, response, words: shift(words, start) };
       rung.items.push(planned);
       items.push(planned);
@@ -200,14 +206,12 @@ function rungSeconds(analysis: Analysis, r: RungAnalysis, pace: Pace, mode: Deli
   const key = `${mode}|${paceKey}`;
   let seconds = m.get(key);
   if (seconds === undefined) {
-    // planSession's sum for one rung (the same additions in the same order, so the same number;
-    // tests/core/timing.test.ts holds the two equal), with each item's length kept with its words.
+    // planSession's sum for one rung, stepped by the same afterItem, so the same number
+    // (tests/core/timing.test.ts holds the two equal), with each item's length kept with its words.
     let at = 0;
     r.items.forEach((it, k) => {
       if (k > 0) at += timing.gap;
-      const s = itemSeconds(it, pace, timing, paceKey);
-      at += s;
-      if (mode === 'echo') at = at + s * timing.echoWindow;
+      at = afterItem(at, itemSeconds(it, pace, timing, paceKey), timing, mode);
     });
     m.set(key, (seconds = at));
   }
