@@ -49,29 +49,38 @@ function plainSpokenKey(text: string): string | null {
   return end < 0 ? null : text.slice(0, end).toLowerCase();
 }
 
+/** Per ASCII code: the character the key keeps for it (lower case), or 0 when it is left out. */
+const KEY_CHAR = new Uint8Array(128).map((_, c) => (kept(c) ? (c >= 0x41 && c <= 0x5a ? c + 0x20 : c) : 0));
+
 /**
  * A small number equal keys share (FNV-1a over the key's characters), or -1 for an empty key.
- * For a plain item it is found without building the key, so a script of 10,000 different items
+ * For ASCII text it is found without building the key, so a script of 10,000 different items
  * builds no key at all; items whose numbers meet are compared by their keys.
  */
 export function keyHash(text: string): number {
-  // One pass over a plain item: the key's characters are its kept characters, lower-cased, with
-  // the single space of each gap between them (the same checks as plainKeyEnd).
+  // One pass over ASCII text: the key's characters are its kept characters, lower-cased, with one
+  // space for each run of other characters between two of them (what the general key makes of
+  // ASCII: every other character is neither a letter nor a digit, and the ends are trimmed).
   let h = 0x811c9dc5;
-  let end = 0;
+  let started = false;
+  let gap = false;
   const n = text.length;
   for (let i = 0; i < n; i++) {
     const c = text.charCodeAt(i);
     if (c >= 0x80) return generalKeyHash(text);
-    if (!kept(c)) continue;
-    if (i !== end) {
-      if (end === 0 || i !== end + 1 || text.charCodeAt(end) !== 0x20) return generalKeyHash(text);
-      h = Math.imul(h ^ 0x20, 0x01000193);
+    const k = KEY_CHAR[c];
+    if (k === 0) {
+      gap = started;
+      continue;
     }
-    h = Math.imul(h ^ (c >= 0x41 && c <= 0x5a ? c + 0x20 : c), 0x01000193);
-    end = i + 1;
+    if (gap) {
+      h = Math.imul(h ^ 0x20, 0x01000193);
+      gap = false;
+    }
+    h = Math.imul(h ^ k, 0x01000193);
+    started = true;
   }
-  return end === 0 ? -1 : h & 0x3fffffff;
+  return started ? h & 0x3fffffff : -1;
 }
 
 function generalKeyHash(text: string): number {
