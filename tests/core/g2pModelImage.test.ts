@@ -51,32 +51,37 @@ describe('the model image', () => {
 
   describe('refuses damage with the reason', () => {
     const good = () => writeModelImage(small.slice(0, 1), 's');
-    // Where each array of the one model starts: after the padded JSON.
-    const arrayAt = (bytes: Uint8Array, k: number) => {
-      let at = (16 + new DataView(bytes.buffer).getUint32(12, true) + 7) & ~7;
-      const sizes = [2, 2, 2, 4, 4, 4].map((b, i) => (b * (i === 5 ? 8 : 7) + 7) & ~7);
-      for (let i = 0; i < k; i++) at += sizes[i];
-      return at;
-    };
     const damaged = (f: (b: Uint8Array, v: DataView) => void) => {
       const b = good();
       f(b, new DataView(b.buffer));
       return () => readModelImage(b);
     };
-    it('not an image, another version, cut short, too long', () => {
+    const arraysAt = (b: Uint8Array) => (16 + new DataView(b.buffer).getUint32(12, true) + 7) & ~7;
+    it('not an image, another version, a header that is not JSON', () => {
       expect(() => readModelImage(text())).toThrow(/not a pronunciation model image/);
       expect(damaged((_, v) => v.setUint32(8, IMAGE_VERSION + 1, true))).toThrow(`version ${IMAGE_VERSION + 1} is not supported`);
-      expect(() => readModelImage(good().subarray(0, good().length - 8))).toThrow(/cut short \(forward firstChild\)/);
-      expect(() => readModelImage(new Uint8Array([...good(), 0, 0, 0, 0, 0, 0, 0, 0]))).toThrow(/8 bytes past its last model/);
       expect(damaged((b) => (b[17] = 0x7b))).toThrow(/header is not JSON/);
     });
-    it('an index the decoder would follow out of the model', () => {
-      // Entry 4 (<s> a}AH0): its token past the graphones, its backoff pointing at itself (a
+    it('any changed, missing or added byte after the header (its check)', () => {
+      const check = /damaged \(its check does not match\)/;
+      // One bit of one log probability: every index stays valid, only the check can tell.
+      expect(damaged((b) => (b[arraysAt(b) + 7 * 2 + 1] ^= 1))).toThrow(check);
+      expect(() => readModelImage(good().subarray(0, good().length - 8))).toThrow(check);
+      expect(() => readModelImage(new Uint8Array([...good(), 0, 0, 0, 0, 0, 0, 0, 0]))).toThrow(check);
+    });
+    it('an index the decoder would follow out of the model, even with a matching check', () => {
+      // Written whole by writeModelImage (so the check matches) from a model with one bad entry:
+      // entry 4 (<s> a}AH0) with its token past the graphones, its backoff pointing at itself (a
       // chain that never ends), its state past the entries; successor runs that fall back.
-      expect(damaged((b, v) => v.setUint16(arrayAt(b, 0) + 4 * 2, 9, true))).toThrow(/token out of range at entry 4/);
-      expect(damaged((b, v) => v.setInt32(arrayAt(b, 3) + 4 * 4, 4, true))).toThrow(/backoff out of order at entry 4/);
-      expect(damaged((b, v) => v.setInt32(arrayAt(b, 4) + 4 * 4, 7, true))).toThrow(/state out of range at entry 4/);
-      expect(damaged((b, v) => v.setInt32(arrayAt(b, 5) + 2 * 4, 0, true))).toThrow(/successor runs out of order at entry 1/);
+      const bad = (f: (m: G2pModel) => void) => {
+        const m = { ...small[0], ...Object.fromEntries(ARRAYS.map((a) => [a, small[0][a].slice()])) } as G2pModel;
+        f(m);
+        return () => readModelImage(writeModelImage([m], 's'));
+      };
+      expect(bad((m) => (m.tok[4] = 9))).toThrow(/token out of range at entry 4/);
+      expect(bad((m) => (m.backoff[4] = 4))).toThrow(/backoff out of order at entry 4/);
+      expect(bad((m) => (m.next[4] = 7))).toThrow(/state out of range at entry 4/);
+      expect(bad((m) => (m.firstChild[2] = 0))).toThrow(/successor runs out of order at entry 1/);
     });
   });
 });

@@ -9,11 +9,13 @@
 //   0   "RUNGSG2P" (8 bytes)
 //   8   u32 image version (IMAGE_VERSION)
 //   12  u32 byte length L of the JSON that follows
-//   16  JSON { source, models: [header, ...] } (UTF-8), padded with spaces to a multiple of 8
+//   16  JSON { source, check, models: [header, ...] } (UTF-8), padded with spaces to a multiple of 8
 //   ... per model, each array padded to a multiple of 8 bytes: tok (u16 x n), logp (i16 x n),
 //       bow (i16 x n), backoff (i32 x n), next (i32 x n), firstChild (i32 x n + 1), where n is
 //       the header's `entries`.
-// Every index in the arrays is checked on reading, so a damaged image is refused, never decoded.
+// `check` is a 32-bit hash of everything after the JSON (8 hex digits), so a changed byte anywhere
+// in the arrays is found on reading; and every index in the arrays is checked, so a damaged image
+// is refused, never decoded.
 import { checkHeader, readGraphones, type G2pModel, type ModelHeader } from './model';
 
 const MAGIC = 'RUNGSG2P';
@@ -39,20 +41,28 @@ const ARRAYS: { name: ArrayName; bytes: number; length: (n: number) => number }[
 
 const littleEndian = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
 
+/**
+ * A hash of 32-bit words (FNV-1a's step on whole words): each step is a bijection of the state, so
+ * changing any one word changes the result.
+ */
+function wordsHash(bytes: Uint8Array): string {
+  const words = new Int32Array(bytes.buffer, bytes.byteOffset, bytes.byteLength >> 2);
+  let h = 0x811c9dc5;
+  for (let i = 0; i < words.length; i++) h = Math.imul(h ^ words[i], 0x01000193);
+  return (h >>> 0).toString(16).padStart(8, '0');
+}
+
+const headerJson = (source: string, check: string, models: readonly G2pModel[]) => new TextEncoder().encode(JSON.stringify({ source, check, models: models.map((m) => m.header) }));
+
 /** The image of `models`, recording `source` (what they were read from). */
 export function writeModelImage(models: readonly G2pModel[], source: string): Uint8Array {
   if (!littleEndian) throw new Error('model images are written on little-endian machines only');
-  const json = new TextEncoder().encode(JSON.stringify({ source, models: models.map((m) => m.header) }));
+  // The check has a fixed width, so the header's length is known before the arrays are hashed.
+  const json = headerJson(source, '00000000', models);
   const head = pad8(16 + json.length);
   let size = head;
   for (const m of models) for (const a of ARRAYS) size += pad8(a.bytes * a.length(m.tok.length));
   const out = new Uint8Array(size);
-  out.set(new TextEncoder().encode(MAGIC), 0);
-  const view = new DataView(out.buffer);
-  view.setUint32(8, IMAGE_VERSION, true);
-  view.setUint32(12, json.length, true);
-  out.set(json, 16);
-  out.fill(0x20, 16 + json.length, head);
   let at = head;
   for (const m of models) {
     if (m.header.entries !== m.tok.length) throw new Error('model header entries differ from its arrays');
@@ -62,6 +72,12 @@ export function writeModelImage(models: readonly G2pModel[], source: string): Ui
       at += pad8(arr.byteLength);
     }
   }
+  out.set(new TextEncoder().encode(MAGIC), 0);
+  const view = new DataView(out.buffer);
+  view.setUint32(8, IMAGE_VERSION, true);
+  view.setUint32(12, json.length, true);
+  out.set(headerJson(source, wordsHash(out.subarray(head)), models), 16);
+  out.fill(0x20, 16 + json.length, head);
   return out;
 }
 
@@ -76,7 +92,7 @@ export function readModelImage(input: Uint8Array): ModelImage {
   if (version !== IMAGE_VERSION) throw new Error(`pronunciation model image version ${version} is not supported (this build reads ${IMAGE_VERSION})`);
   const jsonLength = view.getUint32(12, true);
   if (16 + jsonLength > bytes.length) throw new Error('pronunciation model image is cut short (header)');
-  let meta: { source?: unknown; models?: unknown };
+  let meta: { source?: unknown; check?: unknown; models?: unknown };
   try {
     meta = JSON.parse(new TextDecoder().decode(bytes.subarray(16, 16 + jsonLength))) as typeof meta;
   } catch {
@@ -86,6 +102,7 @@ export function readModelImage(input: Uint8Array): ModelImage {
     throw new Error('pronunciation model image header lacks source or models');
   }
   let at = pad8(16 + jsonLength);
+  if (at > bytes.length || meta.check !== wordsHash(bytes.subarray(at))) throw new Error('pronunciation model image is damaged (its check does not match)');
   const models = (meta.models as ModelHeader[]).map((h) => {
     const header = checkHeader(h);
     const n = header.entries;
