@@ -52,6 +52,26 @@ describe('rungs pronounce', () => {
     expect(r.out.split('\n')[0]).toContain('\tK AE1 T\t');
   });
 
+  it('looks a word up as a script does: accents folded (the dictionary spells "cafe")', async () => {
+    // CMU: cafe K AH0 F EY1 (and K AE0 F EY1), jose HH OW0 Z EY1, naive N AY0 IY1 V.
+    for (const [raw, plain] of [['Café', 'cafe'], ['José', 'jose'], ['naïve', 'naive']]) {
+      const accented = (await run(['pronounce', raw])).out;
+      const bare = (await run(['pronounce', plain])).out;
+      expect(accented).toBe(bare.replace(`${plain}\t`, `${raw} (as ${plain})\t`));
+      expect(accented).toContain('CMU Pronouncing Dictionary');
+    }
+    expect((await run(['pronounce', 'café'])).out).toMatch(/\t2 syllables\t/);
+    // The estimator reads the folded spelling too.
+    expect((await run(['pronounce', '--estimate', 'Zoë'])).out.split('\n')[0]).toMatch(/^Zoë \(as zoe\)\t/);
+  });
+
+  it('estimates nothing for a word with no letter', async () => {
+    for (const flags of [[], ['--estimate']]) {
+      expect((await run(['pronounce', ...flags, "'"])).out).toBe("'\t(no estimate: no letter-to-sound rule applies)\n");
+    }
+    expect(estimatePronunciation("''", words).phones).toEqual([]);
+  });
+
   it('exits 2 without words, and says when no estimate exists', async () => {
     const none = await run(['pronounce']);
     expect(none.code).toBe(2);

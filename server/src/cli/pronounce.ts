@@ -2,8 +2,9 @@
 // --estimate the dictionary (and morphology on its stems) is skipped and the trained estimator
 // answers alone, so anyone can compare its guesses with the dictionary's entries.
 import { rankNote } from '../core/g2p/estimator';
-import { ALTERNATIVES, ESTIMATOR_HOW } from '../core/lts/estimate';
+import { ALTERNATIVES, ESTIMATOR_HOW, hasLetter } from '../core/lts/estimate';
 import { letterToSound } from '../core/lts/letterToSound';
+import { lookupForm } from '../core/tokenize';
 import { toIpa } from '../core/phones';
 import { countSyllables, Pronouncer, type Pronunciation } from '../core/pronounce';
 import { DEFAULT_WCM_OPTIONS } from '../core/wcm';
@@ -15,12 +16,13 @@ import type { Command } from './main';
 const percent = (share: number): string => `${(100 * share).toFixed(share >= 0.1 ? 0 : 1)} %`;
 
 function estimateOnly(word: string, data: ReturnType<typeof loadWordTable>): Pronunciation {
-  const candidates = data.estimate(word, ALTERNATIVES);
+  // A word without a letter has nothing to spell out (the model would read a lone "'" as 's).
+  const candidates = hasLetter(word) ? data.estimate(word, ALTERNATIVES) : undefined;
   const base = { variant: 0, variants: [], variantError: null };
   if (candidates !== undefined && candidates.length > 0) {
     return { ...base, phones: candidates[0].phones, source: 'estimate', how: ESTIMATOR_HOW, alternatives: candidates };
   }
-  return { ...base, phones: letterToSound(word), source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
+  return { ...base, phones: hasLetter(word) ? letterToSound(word) : [], source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
 }
 
 /** One block per word: phones, IPA, syllables, source, and the estimator's alternatives. */
@@ -53,9 +55,11 @@ export const pronounceCommand: Command = {
     const data = loadWordTable();
     const pronouncer = new Pronouncer(data, [], DEFAULT_WCM_OPTIONS);
     for (const raw of args.positionals) {
-      const word = raw.toLowerCase();
+      // The form a script looks a word up by (lower case, and "café" as the dictionary spells it,
+      // "cafe"), shown beside the word when it differs from it by more than case.
+      const word = lookupForm(raw);
       const p = args.flags.has('estimate') ? estimateOnly(word, data) : pronouncer.pronounce(word, null);
-      io.stdout(formatPronunciation(word, p));
+      io.stdout(formatPronunciation(word === raw.toLowerCase() ? word : `${raw} (as ${word})`, p));
     }
     return EXIT_OK;
   },

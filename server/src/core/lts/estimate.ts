@@ -234,8 +234,13 @@ export const ESTIMATOR_HOW = 'joint-sequence model';
  * letter-to-sound rules. Phones are CMU ARPAbet with stress digits; for an input with no letters,
  * `phones` is empty.
  */
+/** True when a spelling has a letter to read (a lone apostrophe has none). */
+export const hasLetter = (word: string): boolean => /\p{L}/u.test(word);
+
 export function estimatePronunciation(word: string, data: WordData): Estimate {
-  const spelling = word.toLowerCase().replace(/[^a-z']/g, '');
+  const kept = word.toLowerCase().replace(/[^a-z']/g, '');
+  // Apostrophes alone are no word: nothing is estimated (the model would read "'" as 's).
+  const spelling = /[a-z]/.test(kept) ? kept : '';
   const found = spelling.length >= 4 ? analyzeWord(spelling, data, 1) : undefined;
   const candidates = spelling && !found?.settled ? data.estimate?.(spelling, ALTERNATIVES, found?.phones) : undefined;
   const morphology = (alternatives: Candidate[]): Estimate => ({
