@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { composite, difficultyComponents } from '../../server/src/core/difficulty';
 import { makePace, parsePaces, timeAt, READING_NORM_WPS } from '../../server/src/core/pace';
 import { analyzeText } from '../helpers/data';
-import { renderFindings } from '../../server/src/rules/index';
+import { lint, renderFindings } from '../../server/src/rules/index';
 
 describe('projected durations', () => {
   it('word pacing vs syllable pacing (computed from cmu-pronouncing-dictionary@3.0.0)', () => {
@@ -96,6 +96,16 @@ describe('script format', () => {
     const bad = renderFindings(a.findings).find((p) => p.rule === 'unknown-phone')!;
     // "@say Zed = Z EH1 DX": DX starts at column 17 (0-based).
     expect(bad).toMatchObject({ line: 2, character: 17, endCharacter: 19 });
+  });
+
+  it('an override of an accented word applies wherever it is spoken, accented or not', () => {
+    // Items look "José" up as "jose" (the dictionary's spelling, HH OW0 Z EY1 in CMU); the @say
+    // line's word is keyed the same way, written precomposed or with a combining accent.
+    for (const say of ['José', 'JOSE\u0301', "Jose"]) {
+      const a = analyzeText(`@say ${say} = HH OW0 S EY1\nJosé came.\nJOSÉ left.\nJose stayed.\n`);
+      for (const it of a.items) expect(it.words[0]).toMatchObject({ spoken: 'jose', source: 'override', phones: ['HH', 'OW0', 'S', 'EY1'] });
+      expect(lint(a, '').filter((p) => p.rule === 'unused-override')).toEqual([]);
+    }
   });
 
   it('a name spelt out by an override and unseen in SUBTLEX-US is left out of the rarity figures', () => {

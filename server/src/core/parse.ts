@@ -6,6 +6,7 @@ import { RUNG_KEYS } from './settings';
 import type { CommentLine, ItemNode, Override, ParsedScript, RungNode, Setting } from './types';
 import { validatePhones } from './phones';
 import { pushAll } from './arrays';
+import { lookupForm } from './tokenize';
 
 export const COMMENT = '//';
 export const RUNG_MARK = '==';
@@ -73,7 +74,9 @@ export function parseOverride(
     findings.push(finding(on(line, bodyStart, bodyStart + Math.max(1, body.length)), { kind: 'override-without-phones' }));
     return null;
   }
-  const word = m[1].toLowerCase().replace(/[’‘ʼ]/g, "'");
+  // Keyed by the form items are looked up by (lower case, ASCII apostrophes, a Latin-script word
+  // without its accents), so `@say José = ...` applies to "José" in an item.
+  const word = lookupForm(m[1]);
   const rest = m[2].trim();
   const restStart = bodyStart + body.indexOf(rest, m[1].length);
   if (/^\d+$/.test(rest)) {

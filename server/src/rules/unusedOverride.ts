@@ -32,13 +32,14 @@ export const unusedOverride: Rule = {
     for (const it of ctx.analysis.items) for (const w of it.words) spoken.add(w.spoken);
     for (const o of ctx.analysis.script.overrides) {
       if (spoken.has(o.word)) continue;
-      // The word as written on the @say line (overrides are stored in lower case).
-      const written = (ctx.lines[o.line] ?? '').slice(o.character, o.character + o.word.length) || o.word;
+      // The word as written on the @say line (overrides are stored in their lookup form: lower
+      // case, no accents): what stands before the "=" or the first space.
+      const written = /^\S+?(?=\s*=|\s|$)/.exec((ctx.lines[o.line] ?? '').slice(o.character))?.[0] || o.word;
       report({
         line: o.line,
         character: o.character,
         endLine: o.line,
-        endCharacter: o.character + o.word.length,
+        endCharacter: o.character + written.length,
         message: `"${excerpt(written)}" is never spoken as a word in any item, so this @say line is not used${whyNever(o.word)}`,
         unnecessary: true,
       });
