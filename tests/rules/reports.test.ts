@@ -24,6 +24,16 @@ describe('estimated-word', () => {
     expect(p.fix).toMatchObject({ batch: false, edits: [{ line: 0, character: 0, newText: `@say Teodric = ${estimate.phones.join(' ')}\n` }] });
   });
 
+  it('writes an accented name as the script does, and the @say line it offers then applies', () => {
+    const text = '== One\nAnaïs came home.\n';
+    const [p] = only(text, 'estimated-word');
+    const phones = estimatePronunciation('anais', words).phones.join(' ');
+    expect(p.fix!.edits[0].newText).toBe(`@say Anaïs = ${phones}\n`);
+    // Applied, the line is an override of the word (nothing estimated, nothing unused).
+    const fixed = `${p.fix!.edits[0].newText}${text}`;
+    expect(lintText(fixed).filter((q) => q.rule === 'estimated-word' || q.rule === 'unused-override')).toEqual([]);
+  });
+
   it('says plainly when no letter-to-sound rule applies, with no fix', () => {
     const ps = only('== One\nΚαλημέρα Irene.\n', 'estimated-word');
     expect(ps.map((p) => [p.character, p.endCharacter, p.message, p.fix])).toEqual([

@@ -1,5 +1,6 @@
 // estimated-word: a word with no dictionary entry and no override, pronounced by estimate.
 import { isEstimated } from '../core/pronounce';
+import { lookupForm } from '../core/tokenize';
 import type { TextEdit } from '../core/types';
 import { eachRung, type Rule, type RuleContext } from './types';
 import { excerpt } from '../core/excerpt';
@@ -46,7 +47,9 @@ export const estimatedWord: Rule = {
       for (const w of it.words) {
         if (!isEstimated(w)) continue;
         const phones = w.phones.join(' ');
-        const word = w.surface.toLowerCase() === w.spoken ? w.surface : w.spoken;
+        // The word as the script writes it when a @say line of it matches (its lookup form is the
+        // spoken word: "Anaïs"), else the spoken word (one part of "Jean-Luc", "doctor" for "Dr.").
+        const word = lookupForm(w.surface) === w.spoken ? w.surface : w.spoken;
         const at = { line: it.node.line, character: w.start, endLine: it.node.line, endCharacter: w.end };
         if (!phones) {
           report({ ...at, message: `no English letter-to-sound rule applies to "${excerpt(word)}"; add a pronunciation with @say ${excerpt(word)} = PHONES` });
