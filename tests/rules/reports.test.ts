@@ -88,6 +88,12 @@ describe('unused-override', () => {
     expect(only('@say Zoe\u0308 = Z OW1 IY0\n== One\nNobody came.\n', 'unused-override').map((p) => [p.character, p.endCharacter])).toEqual([[5, 9]]);
   });
 
+  it('says why a number never matches: it is spoken as words', () => {
+    expect(only('@say 3 = TH R IY1\n@say three = TH R IY1\n== One\nWe have 3 cats.\n', 'unused-override').map((p) => p.message)).toEqual([
+      '"3" is never spoken as a word in any item, so this @say line is not used: items are looked up word by word, and digits are spoken as words ("3" is "three")',
+    ]);
+  });
+
   it('is silent once every override is spoken', () => {
     expect(only('@say law = L AO1\n@say read = 2\n== One\nMy mother-in-law will read it.\n', 'unused-override')).toEqual([]);
   });

@@ -7,6 +7,7 @@ function whyNever(word: string): string {
   const reasons: string[] = [];
   if (/[-‐‑]/.test(word)) reasons.push('a hyphenated word is looked up as its parts');
   if (word.includes('.')) reasons.push('a full stop is never part of a spoken word (abbreviations are expanded)');
+  if (/\d/.test(word)) reasons.push('digits are spoken as words ("3" is "three")');
   return reasons.length ? `: items are looked up word by word, and ${reasons.join(', and ')}` : '';
 }
 
@@ -21,7 +22,7 @@ export const unusedOverride: Rule = {
     'and numbers are spelt out (`Dr.` is spoken "doctor", `3` is "three"). A `@say` line in the',
     'script whose word never occurs as a spoken word of any item has no effect, and the words it',
     'was meant for keep their dictionary or estimated pronunciation. The rule reports the word on',
-    'its `@say` line and, for a hyphen or a full stop, says why it cannot match. Write the',
+    'its `@say` line and, for a hyphen, a full stop or a digit, says why it cannot match. Write the',
     'override for the spoken word (`@say law = ...`, `@say doctor = ...`), or delete it if the',
     'item it was for is gone. Workspace lexicon files are shared by many scripts and not checked.',
   ].join(' '),
