@@ -221,6 +221,9 @@ function analyzeWord(word: string, data: WordData, depth: number): Analysis | un
 export const ALTERNATIVES = 5;
 export const ESTIMATOR_HOW = 'joint-sequence model';
 
+/** True when a spelling has a letter to read (a lone apostrophe has none). */
+export const hasLetter = (word: string): boolean => /\p{L}/u.test(word);
+
 /**
  * Estimates the pronunciation of a lower-case word the dictionary does not list. Morphology on
  * listed stems is tried first (suffixes such as -s, -ed, -ing, -er, -ly, -ness, -ful, -less, then
@@ -234,9 +237,6 @@ export const ESTIMATOR_HOW = 'joint-sequence model';
  * letter-to-sound rules. Phones are CMU ARPAbet with stress digits; for an input with no letters,
  * `phones` is empty.
  */
-/** True when a spelling has a letter to read (a lone apostrophe has none). */
-export const hasLetter = (word: string): boolean => /\p{L}/u.test(word);
-
 export function estimatePronunciation(word: string, data: WordData): Estimate {
   const kept = word.toLowerCase().replace(/[^a-z']/g, '');
   // Apostrophes alone are no word: nothing is estimated (the model would read "'" as 's).
