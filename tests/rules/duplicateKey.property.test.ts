@@ -1,6 +1,7 @@
-// Properties of duplicate-item's quick paths, each against the rule's general definition (lower
-// case, typographic apostrophes as "'", every run of characters other than letters, digits,
-// ' ( ) as one space, trimmed), so any difference is a fault of a quick path:
+// Properties of duplicate-item's quick paths, each against the rule's general definition (no
+// accents on Latin letters, lower case, typographic apostrophes as "'", every run of characters
+// other than letters, digits, ' ( ) as one space, trimmed), so any difference is a fault of a
+// quick path:
 // - the plain-item key equals the general key on arbitrary text;
 // - the key number is FNV-1a of the general key (32-bit offset basis 2166136261, prime 16777619,
 //   the published FNV parameters, from memory), cut to 30 bits, and -1 exactly for an empty key;
@@ -36,8 +37,9 @@ test.prop([anyText], { numRuns: 3000 })('the key number is FNV-1a of the general
   expect(keyHash(text)).toBe(key === '' ? -1 : fnv30(key));
 });
 
-// Items drawn from a few sentences written with different case and punctuation, so repeats are common.
-const ITEMS = ['Come in.', 'come in!', 'COME IN', 'Come in, please.', 'Sit down.', 'sit  down', 'Good morning.', "Don't go.", 'don\u2019t go', '(Wave.)'];
+// Items drawn from a few sentences written with different case, punctuation and accents, so
+// repeats are common.
+const ITEMS = ['Come in.', 'come in!', 'COME IN', 'Come in, please.', 'Sit down.', 'sit  down', 'Good morning.', "Don't go.", 'don\u2019t go', '(Wave.)', 'Café au lait.', 'cafe au lait', 'CAFE\u0301 AU LAIT!', 'Καλημέρα.', 'καλημερα'];
 
 test.prop([fc.array(fc.constantFrom(...ITEMS), { minLength: 1, maxLength: 30 })], { numRuns: 300 })(
   'the rule reports the repeats a grouping by general key finds',

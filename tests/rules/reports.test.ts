@@ -15,6 +15,17 @@ describe('duplicate-item', () => {
   });
 });
 
+describe('duplicate-item keys', () => {
+  it('ignore the accents of Latin letters, as lookups do, and keep those of other scripts', () => {
+    // "Café" is spoken "cafe" (the dictionary's spelling); Greek accents mark stress and stay.
+    const text = '== One\nCafé au lait.\ncafe au lait\nCAFE\u0301 AU LAIT!\nΚαλημέρα.\nκαλημερα\n';
+    expect(only(text, 'duplicate-item').map((p) => [p.line, p.related![0].line])).toEqual([
+      [2, 1],
+      [3, 1],
+    ]);
+  });
+});
+
 describe('estimated-word', () => {
   it('offers the estimate as a quick fix only', () => {
     const [p] = only('== One\nTeodric is here.\n', 'estimated-word');

@@ -11,8 +11,9 @@ export const duplicateItem: Rule = {
   defaultSeverity: 'warning',
   category: 'item',
   docs: [
-    'Compares the spoken text of every item (before any `|` trailer), ignoring case, punctuation',
-    'and spacing, so "Come in." and "come in!" are the same item. Each repeat is reported with the',
+    'Compares the spoken text of every item (before any `|` trailer), ignoring case, punctuation,',
+    'spacing and the accents of Latin letters (as words are looked up), so "Come in." and "come in!"',
+    'are the same item, and so are "Café au lait." and "cafe au lait". Each repeat is reported with the',
     'line and rung of the first one. A repeated item counts twice in its rung\'s median and in',
     'matched-set checks. The repeat is marked unnecessary (shown faded in editors). The quick fix',
     'removes the repeated line (and only that line, with its note, id and sets); `rungs lint --fix`',

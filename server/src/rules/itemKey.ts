@@ -3,16 +3,23 @@
 import type { RungAnalysis } from '../core/types';
 
 /**
- * Two items are the same when their spoken words match, ignoring case, punctuation and spacing:
- * the key is the text in lower case with every run of other characters one space. The rule
+ * Two items are the same when their spoken words match, ignoring case, accents, punctuation and
+ * spacing: the key is the text without the accents of Latin letters (as words are looked up:
+ * "Café" is spoken "cafe"), in lower case, with every run of other characters one space. The rule
  * compares key numbers (keyHash) and builds keys only when two numbers meet.
  */
 export function spokenKey(text: string): string {
   return plainSpokenKey(text) ?? generalSpokenKey(text);
 }
 
+/** Combining marks on a Latin letter (after NFD): the accents the key leaves out. */
+const LATIN_ACCENTS = /(\p{Script=Latin})\p{M}+/gu;
+
 export function generalSpokenKey(text: string): string {
   return text
+    .normalize('NFD')
+    .replace(LATIN_ACCENTS, '$1')
+    .normalize('NFC')
     .toLowerCase()
     .replace(/[’‘ʼ]/g, "'")
     .replace(/[^\p{L}\p{N}'()]+/gu, ' ')
