@@ -65,9 +65,24 @@ describe('rungs pronounce', () => {
     expect((await run(['pronounce', '--estimate', 'Zoë'])).out.split('\n')[0]).toMatch(/^Zoë \(as zoe\)\t/);
   });
 
+  it('reads a word as a script item does: abbreviations, numbers, hyphens, variant marks', async () => {
+    // Dictionary phones: doctor D AA1 K T ER0; three TH R IY1; thirty TH ER1 D IY2; mother
+    // M AH1 DH ER0; law L AO1; read(2) R IY1 D (the second listed).
+    const lines = (await run(['pronounce', 'Dr.', '3:30', 'mother-in-law', 'read(2)'])).out.split('\n').filter((l) => l && !l.startsWith(' '));
+    expect(lines.map((l) => l.split('\t').slice(0, 2).join('\t'))).toEqual([
+      'Dr. (as doctor)\tD AA1 K T ER0',
+      '3:30 (as three)\tTH R IY1',
+      '3:30 (as thirty)\tTH ER1 D IY2',
+      'mother-in-law (as mother)\tM AH1 DH ER0',
+      'mother-in-law (as in)\tIH0 N',
+      'mother-in-law (as law)\tL AO1',
+      'read(2) (as read)\tR IY1 D',
+    ]);
+  });
+
   it('estimates nothing for a word with no letter', async () => {
     for (const flags of [[], ['--estimate']]) {
-      expect((await run(['pronounce', ...flags, "'"])).out).toBe("'\t(no estimate: no letter-to-sound rule applies)\n");
+      expect((await run(['pronounce', ...flags, "'"])).out).toBe("'\t(no words to say)\n");
     }
     expect(estimatePronunciation("''", words).phones).toEqual([]);
   });

@@ -4,7 +4,7 @@
 import { rankNote } from '../core/g2p/estimator';
 import { ALTERNATIVES, ESTIMATOR_HOW, hasLetter } from '../core/lts/estimate';
 import { letterToSound } from '../core/lts/letterToSound';
-import { lookupForm } from '../core/tokenize';
+import { tokenize } from '../core/tokenize';
 import { toIpa } from '../core/phones';
 import { countSyllables, Pronouncer, type Pronunciation } from '../core/pronounce';
 import { DEFAULT_WCM_OPTIONS } from '../core/wcm';
@@ -44,9 +44,11 @@ export const pronounceCommand: Command = {
   usage: [
     'Usage: rungs pronounce WORD... [--estimate]',
     '',
-    '  Looks each word up as a script would: the CMU Pronouncing Dictionary, then morphology on a',
-    '  dictionary stem (a plural or possessive as it is; any other reading weighed with the',
-    "  estimator's), then the trained estimator (with its ranked alternatives and their shares).",
+    '  Reads each word as a script item would (Dr. is "doctor", 3 is "three", café is "cafe";',
+    '  word(2) picks a listed pronunciation), then looks each spoken word up: the CMU Pronouncing',
+    '  Dictionary, then morphology on a dictionary stem (a plural or possessive as it is; any other',
+    "  reading weighed with the estimator's), then the trained estimator (with its ranked",
+    '  alternatives and their shares).',
     '  --estimate  skip the dictionary and morphology: the estimator answers alone',
   ].join('\n'),
   run(io: CliIO, argv: string[]): number {
@@ -55,11 +57,16 @@ export const pronounceCommand: Command = {
     const data = loadWordTable();
     const pronouncer = new Pronouncer(data, [], DEFAULT_WCM_OPTIONS);
     for (const raw of args.positionals) {
-      // The form a script looks a word up by (lower case, and "café" as the dictionary spells it,
-      // "cafe"), shown beside the word when it differs from it by more than case.
-      const word = lookupForm(raw);
-      const p = args.flags.has('estimate') ? estimateOnly(word, data) : pronouncer.pronounce(word, null);
-      io.stdout(formatPronunciation(word === raw.toLowerCase() ? word : `${raw} (as ${word})`, p));
+      // Read as an item of a script reads it: "Dr." is spoken "doctor", "3:30" "three thirty",
+      // "mother-in-law" as its parts, "café" as the dictionary spells it ("cafe"), "read(2)" with
+      // its second listed pronunciation. Each spoken word is shown beside the argument when it
+      // differs from it by more than case.
+      const spoken = tokenize(raw).flatMap((t) => t.words.map((word, i) => ({ word, variant: i === t.words.length - 1 ? t.variant : null })));
+      if (!spoken.length) io.stdout(`${raw}\t(no words to say)\n`);
+      for (const { word, variant } of spoken) {
+        const p = args.flags.has('estimate') ? estimateOnly(word, data) : pronouncer.pronounce(word, variant);
+        io.stdout(formatPronunciation(word === raw.toLowerCase() ? word : `${raw} (as ${word})`, p));
+      }
     }
     return EXIT_OK;
   },
