@@ -91,7 +91,7 @@ describe('unused-override', () => {
     ]);
   });
 
-  it('marks the word as written, accents and all (Zoe\u0308 is five characters, its key "zoe" three)', () => {
+  it('marks the word as written, accents and all (Zoe\u0308 is four UTF-16 units, its key "zoe" three)', () => {
     const text = '@say Zoe\u0308 = Z OW1 IY0\n@say Renée = R AH0 N EY1\n== One\nZoë came.\n';
     expect(only(text, 'unused-override').map((p) => [p.line, p.character, p.endCharacter, p.message])).toEqual([
       [1, 5, 10, '"Renée" is never spoken as a word in any item, so this @say line is not used'],

@@ -349,7 +349,7 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
     if (o.variant === null) continue;
     const listed = input.data.pronunciations(o.word)?.length ?? 0;
     if (o.variant < 1 || o.variant > listed) {
-      const at = { line: o.line, character: o.character, endLine: o.line, endCharacter: o.character + o.word.length };
+      const at = { line: o.line, character: o.character, endLine: o.line, endCharacter: o.character + o.length };
       findings.push(finding(at, { kind: 'variant-not-listed', word: o.word, listed, variant: o.variant }));
     }
   }

@@ -34,13 +34,13 @@ export const unusedOverride: Rule = {
     for (const o of ctx.analysis.script.overrides) {
       if (spoken.has(o.word)) continue;
       // The word as written on the @say line (overrides are stored in their lookup form: lower
-      // case, no accents): what stands before the "=" or the first space.
-      const written = /^\S+?(?=\s*=|\s|$)/.exec((ctx.lines[o.line] ?? '').slice(o.character))?.[0] || o.word;
+      // case, no accents).
+      const written = (ctx.lines[o.line] ?? '').slice(o.character, o.character + o.length) || o.word;
       report({
         line: o.line,
         character: o.character,
         endLine: o.line,
-        endCharacter: o.character + written.length,
+        endCharacter: o.character + o.length,
         message: `"${excerpt(written)}" is never spoken as a word in any item, so this @say line is not used${whyNever(o.word)}`,
         unnecessary: true,
       });
