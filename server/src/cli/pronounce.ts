@@ -47,8 +47,8 @@ export const pronounceCommand: Command = {
     '  Reads each word as a script item would (Dr. is "doctor", 3 is "three", café is "cafe";',
     '  word(2) picks a listed pronunciation), then looks each spoken word up: the CMU Pronouncing',
     '  Dictionary, then morphology on a dictionary stem (a plural or possessive as it is; any other',
-    "  reading weighed with the estimator's), then the trained estimator (with its ranked",
-    '  alternatives and their shares).',
+    "  reading weighed with the estimator's), an initialism with no vowel letter (NHS) letter by",
+    '  letter, then the trained estimator (with its ranked alternatives and their shares).',
     '  --estimate  skip the dictionary and morphology: the estimator answers alone',
   ].join('\n'),
   run(io: CliIO, argv: string[]): number {
