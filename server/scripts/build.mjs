@@ -1,7 +1,7 @@
 // Builds everything: the compact word tables and the esbuild bundles (CLI, language server,
 // VS Code client). `npm run build` runs this; tests and the demo run it first.
 import { build } from 'esbuild';
-import { copyFileSync, existsSync, mkdirSync, renameSync, statSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, statSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -77,12 +77,6 @@ await Promise.all(
 // The model's binary image beside it (core/g2p/modelImage.ts): a process then reads the estimator
 // in tens of milliseconds instead of decompressing and parsing the text model. Written again only
 // when the model file changed.
+// It replaces an older image atomically (node/atomicWrite.ts).
 const { writeImageBeside } = createRequire(import.meta.url)(join(dist, 'tools', 'pronounce-model.js'));
-// Written beside and renamed into place, so a process reading the model meanwhile (a lint during
-// a rebuild) sees the old image or the new one, never half of one.
-const replace = (p, b) => {
-  const temp = `${p}.${process.pid}.tmp`;
-  writeFileSync(temp, b);
-  renameSync(temp, p);
-};
-if (writeImageBeside(dataDir, replace) === 'written') console.log('pronunciation model image written');
+if (writeImageBeside(dataDir) === 'written') console.log('pronunciation model image written');

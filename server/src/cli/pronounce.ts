@@ -2,7 +2,7 @@
 // --estimate the dictionary (and morphology on its stems) is skipped and the trained estimator
 // answers alone, so anyone can compare its guesses with the dictionary's entries.
 import { rankNote } from '../core/g2p/estimator';
-import { ALTERNATIVES, ESTIMATOR_HOW, hasLetter } from '../core/lts/estimate';
+import { ALTERNATIVES, ESTIMATOR_HOW } from '../core/lts/estimate';
 import { letterToSound } from '../core/lts/letterToSound';
 import { tokenize } from '../core/tokenize';
 import { toIpa } from '../core/phones';
@@ -16,13 +16,12 @@ import type { Command } from './main';
 const percent = (share: number): string => `${(100 * share).toFixed(share >= 0.1 ? 0 : 1)} %`;
 
 function estimateOnly(word: string, data: ReturnType<typeof loadWordTable>): Pronunciation {
-  // A word without a letter has nothing to spell out (the model would read a lone "'" as 's).
-  const candidates = hasLetter(word) ? data.estimate(word, ALTERNATIVES) : undefined;
+  const candidates = data.estimate(word, ALTERNATIVES);
   const base = { variant: 0, variants: [], variantError: null };
   if (candidates !== undefined && candidates.length > 0) {
     return { ...base, phones: candidates[0].phones, source: 'estimate', how: ESTIMATOR_HOW, alternatives: candidates };
   }
-  return { ...base, phones: hasLetter(word) ? letterToSound(word) : [], source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
+  return { ...base, phones: letterToSound(word), source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
 }
 
 /** One block per word: phones, IPA, syllables, source, and the estimator's alternatives. */

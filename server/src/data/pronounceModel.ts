@@ -12,6 +12,7 @@ import type { Candidate } from '../core/g2p/decode';
 import { estimateCandidates, type Estimator } from '../core/g2p/estimator';
 import { parseModels, type G2pModel } from '../core/g2p/model';
 import { readModelImage, writeModelImage } from '../core/g2p/modelImage';
+import { writeFileAtomic } from '../node/atomicWrite';
 
 export const MODEL_FILE = 'pronounce-model.txt.br';
 export const IMAGE_FILE = 'pronounce-model.bin';
@@ -41,9 +42,11 @@ function atLeastOne(models: G2pModel[]): G2pModel[] {
 
 /**
  * The image of the model file in `dataDir`, written beside it unless one made from the same file
- * is there already (the build calls this). Says what it did.
+ * is there already (the build calls this). Written atomically by default, so a process reading
+ * the model meanwhile (a lint during a rebuild) sees the old image or the new one, never half.
+ * Says what it did.
  */
-export function writeImageBeside(dataDir: string, write: (path: string, bytes: Uint8Array) => void): 'written' | 'current' | 'no model' {
+export function writeImageBeside(dataDir: string, write: (path: string, bytes: Uint8Array) => void = writeFileAtomic): 'written' | 'current' | 'no model' {
   const file = join(dataDir, MODEL_FILE);
   if (!existsSync(file)) return 'no model';
   const bytes = readFileSync(file);

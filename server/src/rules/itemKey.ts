@@ -1,5 +1,6 @@
 // The key duplicate-item compares items by, and a quick path for the usual plain item. Kept apart
 // from the rule so the rule file stays its metadata and check.
+import { lookupForm } from '../core/tokenize';
 import type { RungAnalysis } from '../core/types';
 
 /**
@@ -12,16 +13,14 @@ export function spokenKey(text: string): string {
   return plainSpokenKey(text) ?? generalSpokenKey(text);
 }
 
-/** Combining marks on a Latin letter (after NFD): the accents the key leaves out. */
-const LATIN_ACCENTS = /(\p{Script=Latin})\p{M}+/gu;
+/** A run of letters (with their marks and apostrophes): one word as far as lookups go. */
+const LETTER_RUN = /[\p{L}\p{M}'\u2018\u2019\u02bc\u2032]+/gu;
 
 export function generalSpokenKey(text: string): string {
+  // Each run of letters in its lookup form (core/tokenize.ts: lower case, ASCII apostrophes, a
+  // Latin-script word without its accents), so the key ignores what word lookups ignore.
   return text
-    .normalize('NFD')
-    .replace(LATIN_ACCENTS, '$1')
-    .normalize('NFC')
-    .toLowerCase()
-    .replace(/[’‘ʼ]/g, "'")
+    .replace(LETTER_RUN, lookupForm)
     .replace(/[^\p{L}\p{N}'()]+/gu, ' ')
     .trim();
 }

@@ -30,14 +30,17 @@ export interface ModelImage {
 const pad8 = (n: number): number => (n + 7) & ~7;
 
 type ArrayName = 'tok' | 'logp' | 'bow' | 'backoff' | 'next' | 'firstChild';
-const ARRAYS: { name: ArrayName; bytes: number; length: (n: number) => number }[] = [
-  { name: 'tok', bytes: 2, length: (n) => n },
-  { name: 'logp', bytes: 2, length: (n) => n },
-  { name: 'bow', bytes: 2, length: (n) => n },
-  { name: 'backoff', bytes: 4, length: (n) => n },
-  { name: 'next', bytes: 4, length: (n) => n },
-  { name: 'firstChild', bytes: 4, length: (n) => n + 1 },
+type Typed = Uint16Array | Int16Array | Int32Array;
+/** Each array of a model in file order, its type, and how many more entries than n it has. */
+const ARRAYS: { name: ArrayName; type: { new (buffer: ArrayBufferLike, offset: number, length: number): Typed; BYTES_PER_ELEMENT: number }; extra: number }[] = [
+  { name: 'tok', type: Uint16Array, extra: 0 },
+  { name: 'logp', type: Int16Array, extra: 0 },
+  { name: 'bow', type: Int16Array, extra: 0 },
+  { name: 'backoff', type: Int32Array, extra: 0 },
+  { name: 'next', type: Int32Array, extra: 0 },
+  { name: 'firstChild', type: Int32Array, extra: 1 },
 ];
+const arrayBytes = (a: (typeof ARRAYS)[number], n: number): number => a.type.BYTES_PER_ELEMENT * (n + a.extra);
 
 const littleEndian = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
 
@@ -61,7 +64,7 @@ export function writeModelImage(models: readonly G2pModel[], source: string): Ui
   const json = headerJson(source, '00000000', models);
   const head = pad8(16 + json.length);
   let size = head;
-  for (const m of models) for (const a of ARRAYS) size += pad8(a.bytes * a.length(m.tok.length));
+  for (const m of models) for (const a of ARRAYS) size += pad8(arrayBytes(a, m.tok.length));
   const out = new Uint8Array(size);
   let at = head;
   for (const m of models) {
@@ -107,13 +110,12 @@ export function readModelImage(input: Uint8Array): ModelImage {
     const header = checkHeader(h);
     const n = header.entries;
     if (!(Number.isInteger(n) && n >= 0)) throw new Error('pronunciation model image: entries is not a count');
-    const arrays = {} as Record<ArrayName, Uint16Array | Int16Array | Int32Array>;
+    const arrays = {} as Record<ArrayName, Typed>;
     for (const a of ARRAYS) {
-      const length = a.length(n);
-      if (at + a.bytes * length > bytes.length) throw new Error(`pronunciation model image is cut short (${header.direction} ${a.name})`);
-      const offset = bytes.byteOffset + at;
-      arrays[a.name] = a.name === 'tok' ? new Uint16Array(bytes.buffer, offset, length) : a.bytes === 2 ? new Int16Array(bytes.buffer, offset, length) : new Int32Array(bytes.buffer, offset, length);
-      at += pad8(a.bytes * length);
+      const size = arrayBytes(a, n);
+      if (at + size > bytes.length) throw new Error(`pronunciation model image is cut short (${header.direction} ${a.name})`);
+      arrays[a.name] = new a.type(bytes.buffer, bytes.byteOffset + at, n + a.extra);
+      at += pad8(size);
     }
     const { graphones, byLetters, maxLetters } = readGraphones(header);
     const m: G2pModel = {

@@ -31,9 +31,9 @@ export function vowelCount(phones: readonly string[]): number {
  * has none: of the 135,155 entries of the CMU Pronouncing Dictionary (npm
  * cmu-pronouncing-dictionary@3.0.0) only 8 interjections ("hmm", "shh") have no vowel, while the
  * models read some spellings as consonants alone ("shed" as SH T, "bp" as B P); on the
- * development words this raised syllables exact from 97.28 % to 97.36 %. Posteriors are 10^(log10 / temperature), normalised over
- * the list: a temperature above 1 flattens the scores of the models, which are over-confident
- * as n-gram scores are (chosen on the development words). `proposals` is in ranked order; -1 when
+ * development words this raised syllables exact from 97.28 % to 97.36 %. Posteriors are
+ * 10^(log10 / temperature), normalised over the list: a temperature above 1 flattens the scores
+ * of the models, which are over-confident as n-gram scores are (chosen on the development words). `proposals` is in ranked order; -1 when
  * it is empty. Ties in mass keep the count of the first proposal.
  */
 export function syllableVote(proposals: readonly Scored[], temperature: number): number {

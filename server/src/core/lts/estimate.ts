@@ -237,10 +237,10 @@ export const SPELLED_HOW = 'said letter by letter';
 /**
  * An unlisted spelling of two to eight letters with no vowel letter (a, e, i, o, u, y), such as
  * "nhs" or "gp", is an initialism said letter by letter, with a final 's as Z (the longest the
- * dictionary lists has five letters; a longer run is no initialism and goes on as before). That is how the
- * dictionary reads most of the words of this shape it lists: outside the held-out tenth, 102 of
- * 139 phones exact and 112 syllables exact; in the held-out tenth 11 and 14 of 15, where the
- * estimator got 3 and 3 (so it is not asked for these).
+ * dictionary lists has five letters; a longer run is no initialism and goes on as before). That
+ * is how the dictionary reads most of the words of this shape it lists: outside the held-out
+ * tenth, 102 of 139 phones exact and 112 syllables exact; in the held-out tenth 11 and 14 of 15,
+ * where the estimator got 3 and 3 (so it is not asked for these).
  */
 export function spelledOut(spelling: string): string[] | undefined {
   const m = /^([b-df-hj-np-tv-xz]{2,8})('s)?$/.exec(spelling);
@@ -248,9 +248,6 @@ export function spelledOut(spelling: string): string[] | undefined {
   const phones = [...m[1]].flatMap((c) => LETTER_NAMES[c]);
   return m[2] ? [...phones, 'Z'] : phones;
 }
-
-/** True when a spelling has a letter to read (a lone apostrophe has none). */
-export const hasLetter = (word: string): boolean => /\p{L}/u.test(word);
 
 /**
  * Estimates the pronunciation of a lower-case word the dictionary does not list. Morphology on
