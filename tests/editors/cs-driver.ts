@@ -282,9 +282,18 @@ export async function runWorkbench(o: DriverOptions): Promise<DriverReport> {
     // 4. A click on a point moves the editor to its item; the status bar shows that item.
     const point = frame.locator('svg.ladder circle.item').first();
     const line = Number(await point.getAttribute('data-line'));
-    await point.click();
     const selection = page.locator('.statusbar-item', { hasText: `Ln ${line + 1},` }).first();
-    await selection.waitFor({ timeout: 15_000 });
+    // On a busy machine the first click can land while the webview is still taking focus and be
+    // swallowed; click again (up to three times) rather than fail on a lost click.
+    for (let attempt = 1; ; attempt++) {
+      await point.click();
+      try {
+        await selection.waitFor({ timeout: attempt < 3 ? 8_000 : 15_000 });
+        break;
+      } catch (err) {
+        if (attempt >= 3) throw err;
+      }
+    }
     const jumpedToLine = (await selection.innerText()).trim();
     const itemStatus = page.locator('.statusbar-item', { hasText: ' s @ ' }).first();
     await itemStatus.waitFor({ timeout: 15_000 });
