@@ -88,7 +88,8 @@ async function timed(fn) {
  * delete a character inside an item, seeded) each wait for that version's diagnostics before the
  * next, so every figure is the full cost of one keystroke as the editor sees it. Then `reads`
  * rounds of read requests on the last version, and `afterEdits` more edits, each followed by one
- * code lens and one inlay hint request on the new version.
+ * code lens and one inlay hint request on the new version, and as many again, each followed by
+ * a request that needs no work (the round trip's own cost, the baseline for the two).
  */
 export async function measureLsp(root, dir, text, { edits = 40, reads = 60, afterEdits = 20, seed = 7 } = {}) {
   const c = new Client(root);
@@ -140,6 +141,15 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, afte
     const range = { start: { line: Math.max(0, line - 25), character: 0 }, end: { line: line + 25, character: 0 } };
     inlayAfterEditMs.push(await timed(() => c.conn.sendRequest('textDocument/inlayHint', { textDocument: td, range })));
   }
+  // The baseline for those two: the same edits, each followed by a request the server answers
+  // with no work at all (code lens of a document that is not open). What it takes is the round
+  // trip itself right after a publish: both processes' event loops, message coding and collectors.
+  const emptyAfterEditMs = [];
+  const notOpen = { uri: `${uri}.not-open` };
+  for (let i = 0; i < afterEdits; i++) {
+    await edit(edits + afterEdits + i);
+    emptyAfterEditMs.push(await timed(() => c.conn.sendRequest('textDocument/codeLens', { textDocument: notOpen })));
+  }
   await c.close();
   const stat = (xs) => ({ p50: percentile(xs, 50), p95: percentile(xs, 95) });
   return {
@@ -150,7 +160,7 @@ export async function measureLsp(root, dir, text, { edits = 40, reads = 60, afte
     inlay: stat(inlayMs),
     codeLens: stat(lensMs),
     completion: stat(completionMs),
-    afterEdit: { codeLens: stat(lensAfterEditMs), inlay: stat(inlayAfterEditMs) },
+    afterEdit: { codeLens: stat(lensAfterEditMs), inlay: stat(inlayAfterEditMs), empty: stat(emptyAfterEditMs) },
     rssMb: Math.max(rss, rssAfterOpen),
   };
 }

@@ -18,7 +18,7 @@ for (const n of sizes.length ? sizes : [200, 1000, 10000]) {
   const r = await measureLsp(root, dir, generateScript(n), { edits: Number(process.env.BENCH_EDITS ?? 40), reads: Number(process.env.BENCH_READS ?? 60) });
   results[n] = r;
   console.log(
-    `${String(n).padStart(6)} items  open ${f1(r.openMs)}  edit p50/p95 ${f1(r.edit.p50)} / ${f1(r.edit.p95)} (server CPU ${f1(r.edit.cpuMs)} per edit)  hover ${f1(r.hover.p95)}  inlay ${f1(r.inlay.p95)}  lens ${f1(r.codeLens.p95)}  compl ${f1(r.completion.p95)} ms; after an edit: lens ${f1(r.afterEdit.codeLens.p95)}  inlay ${f1(r.afterEdit.inlay.p95)} ms  RSS ${f1(r.rssMb)} MB`,
+    `${String(n).padStart(6)} items  open ${f1(r.openMs)}  edit p50/p95 ${f1(r.edit.p50)} / ${f1(r.edit.p95)} (server CPU ${f1(r.edit.cpuMs)} per edit)  hover ${f1(r.hover.p95)}  inlay ${f1(r.inlay.p95)}  lens ${f1(r.codeLens.p95)}  compl ${f1(r.completion.p95)} ms; after an edit: lens ${f1(r.afterEdit.codeLens.p95)}  inlay ${f1(r.afterEdit.inlay.p95)}  no-work request ${f1(r.afterEdit.empty.p95)} ms  RSS ${f1(r.rssMb)} MB`,
   );
 }
 if (results[200] && results[10000]) console.log(`edit p95 10,000 / 200: ${(results[10000].edit.p95 / results[200].edit.p95).toFixed(2)}x`);
