@@ -109,3 +109,30 @@ describe('unused-override', () => {
     expect(only('@say law = L AO1\n@say read = 2\n== One\nMy mother-in-law will read it.\n', 'unused-override')).toEqual([]);
   });
 });
+
+describe('bad-variant', () => {
+  // Listed counts from the CMU Pronouncing Dictionary (npm cmu-pronouncing-dictionary@3.0.0).
+  const listed = (w: string) => words.pronunciations(w)?.length ?? 0;
+
+  it('names the word as written, not its lookup form, in items and on @say lines', () => {
+    expect(listed('read')).toBe(2);
+    const cafe = listed('cafe');
+    expect(cafe).toBeGreaterThan(0);
+    const text = `@say READ = 5\n== One\nRead(3) it.\nA Café(${cafe + 1}) and a well-read(4) book.\n`;
+    const s = (n: number) => (n === 1 ? '' : 's');
+    expect(only(text, 'bad-variant').map((p) => [p.line, p.character, p.endCharacter, p.message])).toEqual([
+      [0, 5, 9, '"READ" has 2 listed pronunciations, not 5; the first is used'],
+      [2, 0, 7, '"Read" has 2 listed pronunciations, not 3; the first is used'],
+      [3, 2, 9, `"Café" has ${cafe} listed pronunciation${s(cafe)}, not ${cafe + 1}; the first is used`],
+      // A mark after a hyphenated token chooses for its last word.
+      [3, 16, 28, '"read" has 2 listed pronunciations, not 4; the first is used'],
+    ]);
+  });
+
+  it('says an unlisted word is estimated, not that a first listed one is used', () => {
+    expect(listed('zorblatt')).toBe(0);
+    expect(only('== One\nZorblatt(2) came.\n', 'bad-variant').map((p) => p.message)).toEqual([
+      '"Zorblatt" is not in the dictionary, so there is no listed pronunciation 2 to choose; it is estimated',
+    ]);
+  });
+});

@@ -17,7 +17,7 @@ const percent = (share: number): string => `${(100 * share).toFixed(share >= 0.1
 
 function estimateOnly(word: string, data: ReturnType<typeof loadWordTable>): Pronunciation {
   const candidates = data.estimate(word, ALTERNATIVES);
-  const base = { variant: 0, variants: [], variantError: null };
+  const base = { variant: 0, variants: [], variantMissed: false };
   if (candidates !== undefined && candidates.length > 0) {
     return { ...base, phones: candidates[0].phones, source: 'estimate', how: ESTIMATOR_HOW, alternatives: candidates };
   }

@@ -185,8 +185,11 @@ function tokenScores(node: ItemNode, pronouncer: Pronouncer, placed: PlacedWords
       // "well-read(2)" picks the second "read", not a second "well".
       const variant = wi === last ? t.variant : null;
       const s = pronouncer.score(spoken, variant);
-      if (s.variantError && variant !== null) {
-        findings.push(finding({ line: node.line, character: t.start, endLine: node.line, endCharacter: t.end }, { kind: 'variant-mark-not-listed', explanation: s.variantError }));
+      if (s.variantMissed && variant !== null) {
+        // The word as written: the token without its mark, or the marked word of several.
+        const word = last > 0 ? spoken : t.surface.replace(/\(\d+\)$/, '');
+        const at = { line: node.line, character: t.start, endLine: node.line, endCharacter: t.end };
+        findings.push(finding(at, { kind: 'variant-not-listed', word, listed: s.variants.length, variant }));
       }
       words[w++] = placed.get(t.surface, t.start, t.end, spoken, s);
       totals.add(s);
@@ -349,8 +352,8 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
     if (o.variant === null) continue;
     const listed = input.data.pronunciations(o.word)?.length ?? 0;
     if (o.variant < 1 || o.variant > listed) {
-      const at = { line: o.line, character: o.character, endLine: o.line, endCharacter: o.character + o.length };
-      findings.push(finding(at, { kind: 'variant-not-listed', word: o.word, listed, variant: o.variant }));
+      const at = { line: o.line, character: o.character, endLine: o.line, endCharacter: o.character + o.written.length };
+      findings.push(finding(at, { kind: 'variant-not-listed', word: o.written, listed, variant: o.variant }));
     }
   }
 

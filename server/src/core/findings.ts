@@ -24,10 +24,11 @@ export type Finding = Range &
     | { kind: 'note-without-sentence' }
     | { kind: 'override-without-phones' }
     | { kind: 'phone-not-arpabet'; phone: string; reason: string }
-    /** `@say word = N` with no Nth listed pronunciation (`listed` 0: the word is not listed). */
+    /**
+     * `@say word = N` or a `word(N)` mark in an item with no Nth listed pronunciation (`listed` 0:
+     * the word is not listed); `word` as written.
+     */
     | { kind: 'variant-not-listed'; word: string; listed: number; variant: number }
-    /** A `word(N)` mark in an item that picks no listed pronunciation. */
-    | { kind: 'variant-mark-not-listed'; explanation: string }
     | { kind: 'config-syntax'; explanation: string }
     | { kind: 'config-not-object' }
     | { kind: 'config-unreadable'; code: string }

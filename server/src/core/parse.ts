@@ -80,7 +80,7 @@ export function parseOverride(
   const rest = m[2].trim();
   const restStart = bodyStart + body.indexOf(rest, m[1].length);
   if (/^\d+$/.test(rest)) {
-    return { word, length: m[1].length, phones: [], variant: Number(rest), origin, line, character: bodyStart };
+    return { word, written: m[1], phones: [], variant: Number(rest), origin, line, character: bodyStart };
   }
   const phones = rest.split(/\s+/);
   const bad = validatePhones(phones);
@@ -89,7 +89,7 @@ export function parseOverride(
     findings.push(finding(on(line, at, at + b.phone.length), { kind: 'phone-not-arpabet', phone: b.phone, reason: b.reason }));
   }
   if (bad.length) return null;
-  return { word, length: m[1].length, phones: phones.map((p) => p.toUpperCase()), variant: null, origin, line, character: bodyStart };
+  return { word, written: m[1], phones: phones.map((p) => p.toUpperCase()), variant: null, origin, line, character: bodyStart };
 }
 
 function offsetOfNth(text: string, n: number): number {

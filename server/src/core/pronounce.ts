@@ -18,8 +18,11 @@ export interface Pronunciation {
   variants: string[][];
   /** How an estimate was made, or which override applied, in words. */
   how: string;
-  /** Set when a requested variant does not exist; the first listed one was used instead. */
-  variantError: string | null;
+  /**
+   * True when a requested variant is not listed (see `variants`): the first listed pronunciation,
+   * or the estimate for a word the dictionary does not hold, was used instead.
+   */
+  variantMissed: boolean;
   /** The estimator's ranked candidates with scores, when it made the estimate; else empty. */
   alternatives: Candidate[];
 }
@@ -96,25 +99,19 @@ export class Pronouncer {
     const o = this.overrides.get(spoken);
     let wanted = variant;
     if (o && o.phones.length && wanted === null) {
-      return { phones: o.phones, source: 'override', variant: 0, variants, how: `override (${o.origin})`, variantError: null, alternatives: [] };
+      return { phones: o.phones, source: 'override', variant: 0, variants, how: `override (${o.origin})`, variantMissed: false, alternatives: [] };
     }
     if (o && o.variant !== null && wanted === null) wanted = o.variant;
     if (variants.length) {
-      let variantError: string | null = null;
-      let index = 1;
-      if (wanted !== null) {
-        if (wanted >= 1 && wanted <= variants.length) index = wanted;
-        else {
-          variantError = `"${spoken}" has ${variants.length} listed pronunciation${variants.length === 1 ? '' : 's'}, not ${wanted}`;
-        }
-      }
+      const variantMissed = wanted !== null && !(wanted >= 1 && wanted <= variants.length);
+      const index = wanted !== null && !variantMissed ? wanted : 1;
       return {
         phones: variants[index - 1],
         source: 'dictionary',
         variant: index,
         variants,
         how: index > 1 ? `listed pronunciation ${index} of ${variants.length}` : 'CMU Pronouncing Dictionary',
-        variantError,
+        variantMissed,
         alternatives: [],
       };
     }
@@ -126,7 +123,7 @@ export class Pronouncer {
       variants: [],
       how: est.how,
       alternatives: est.alternatives,
-      variantError: wanted !== null ? `"${spoken}" is not in the dictionary, so it has no listed pronunciation ${wanted}` : null,
+      variantMissed: wanted !== null,
     };
   }
 }

@@ -126,8 +126,8 @@ export type SetScope = 'script' | 'rung';
 export interface Override {
   /** The word's lookup form (lower case, no accents on Latin letters), as items are looked up. */
   word: string;
-  /** How long the word is as written on its line (UTF-16 units), for ranges on it. */
-  length: number;
+  /** The word as written on its line (for messages, and ranges: its UTF-16 length). */
+  written: string;
   /** ARPAbet phones with stress digits on vowels; empty when `variant` chooses a listed one. */
   phones: string[];
   /** 1-based index into the dictionary's listed pronunciations, when choosing rather than spelling. */

@@ -200,14 +200,14 @@ export function hover(s: Snapshot, line: number, character: number): Hover | nul
   const onSetLine = setSettingHover(s, line, character);
   if (onSetLine) return onSetLine;
   const override = s.analysis.script.overrides.find(
-    (o) => o.line === line && character >= o.character && character <= o.character + o.length,
+    (o) => o.line === line && character >= o.character && character <= o.character + o.written.length,
   );
   if (override) {
     const score = s.analysis.pronouncer.pronouncer.score(override.word, null);
     const w: WordAnalysis = {
       surface: override.word,
       start: override.character,
-      end: override.character + override.length,
+      end: override.character + override.written.length,
       spoken: override.word,
       ...score,
     };

@@ -17,13 +17,10 @@ export const badVariant = findingRule(
       'The hover on a word lists its pronunciations with their numbers.',
     ].join(' '),
   },
-  ['variant-not-listed', 'variant-mark-not-listed'],
-  (f) => {
-    if (f.kind === 'variant-mark-not-listed') return { message: `${f.explanation}; the first is used` };
-    return {
-      message: f.listed
-        ? `"${f.word}" has ${f.listed} listed pronunciation${f.listed === 1 ? '' : 's'}, not ${f.variant}; the first is used`
-        : `"${f.word}" is not in the dictionary, so there is no listed pronunciation ${f.variant} to choose`,
-    };
-  },
+  ['variant-not-listed'],
+  (f) => ({
+    message: f.listed
+      ? `"${f.word}" has ${f.listed} listed pronunciation${f.listed === 1 ? '' : 's'}, not ${f.variant}; the first is used`
+      : `"${f.word}" is not in the dictionary, so there is no listed pronunciation ${f.variant} to choose; it is estimated`,
+  }),
 );

@@ -33,15 +33,13 @@ export const unusedOverride: Rule = {
     for (const it of ctx.analysis.items) for (const w of it.words) spoken.add(w.spoken);
     for (const o of ctx.analysis.script.overrides) {
       if (spoken.has(o.word)) continue;
-      // The word as written on the @say line (overrides are stored in their lookup form: lower
-      // case, no accents).
-      const written = (ctx.lines[o.line] ?? '').slice(o.character, o.character + o.length) || o.word;
       report({
         line: o.line,
         character: o.character,
         endLine: o.line,
-        endCharacter: o.character + o.length,
-        message: `"${excerpt(written)}" is never spoken as a word in any item, so this @say line is not used${whyNever(o.word)}`,
+        endCharacter: o.character + o.written.length,
+        // The word as written on the @say line (the key is its lookup form: lower case, no accents).
+        message: `"${excerpt(o.written)}" is never spoken as a word in any item, so this @say line is not used${whyNever(o.word)}`,
         unnecessary: true,
       });
     }
