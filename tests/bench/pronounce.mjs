@@ -52,7 +52,8 @@ export function pronounceReport(modelFile = join(root, 'dist', 'data', 'pronounc
   const forwardUs = perWord((w) => core.decode(forward, w, 5, 16));
 
   // What Rungs shows for a word it does not list: each word is hidden from the lookup (its stems
-  // and the other words stay), so morphology on listed stems runs first, then the estimator.
+  // and the other words stay), so morphology on listed stems runs first, then initialisms letter
+  // by letter, then the estimator.
   const table = core.loadWordTable(join(root, 'dist', 'data'));
   let hidden = '';
   const unlisted = {
@@ -61,7 +62,7 @@ export function pronounceReport(modelFile = join(root, 'dist', 'data', 'pronounc
     estimate: (w, k, prior) => core.estimateCandidates(estimator, w, k, prior),
   };
   const systems = [
-    ['Rungs for an unlisted word (morphology on listed stems, then the estimator)', (w) => ((hidden = w), { phones: core.estimatePronunciation(w, unlisted).phones })],
+    ['Rungs for an unlisted word (morphology on listed stems, initialisms letter by letter, then the estimator)', (w) => ((hidden = w), { phones: core.estimatePronunciation(w, unlisted).phones })],
     ['joint-sequence estimator (both directions)', (w) => ({ phones: top.get(w) ?? core.estimateCandidates(estimator, w, 1)[0]?.phones ?? [] })],
     ['  its left-to-right model alone', (w) => ({ phones: core.decode(forward, w, 1)[0]?.phones ?? [] })],
     ['NRL letter-to-sound rules', (w) => ({ phones: core.letterToSound(w) })],
