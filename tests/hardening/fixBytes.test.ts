@@ -42,7 +42,8 @@ describe('rungs lint --fix on a real file', () => {
     writeFileSync(join(dir, 'a.rungs'), before);
     chmodSync(join(dir, 'a.rungs'), 0o640);
     const r = await fix(nodeFs, 'a.rungs');
-    expect(r.err).toBe('');
+    // The first byte that is not UTF-8 is told where it stands (line 3 after a CR-only break).
+    expect(r.err).toBe('rungs lint: a.rungs:3:9: byte 0xFF is not UTF-8 (read as U+FFFD, so a word there may be misread); save the file as UTF-8\n');
     const after = readFileSync(join(dir, 'a.rungs'));
     // The only fix: "@pacse" becomes "@paces" (unknown-key, nearest key).
     expect(after).toEqual(Buffer.concat([Buffer.from('@paces'), before.subarray(6)]));

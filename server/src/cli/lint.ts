@@ -120,6 +120,7 @@ export const lintCommand: Command = {
         io.stderr(`${clear}rungs lint: ${name}:1:1: ${read.cut}\n`);
         code = EXIT_USAGE;
       }
+      if (read.notUtf8) io.stderr(`${clear}rungs lint: ${name}:${read.notUtf8.line}:${read.notUtf8.column}: ${read.notUtf8.message}\n`);
       const input = { text: read.text, path: read.path, fs: configFs, data, cache: { pronouncer: lastPronouncer } };
       let checked = fix || dryRun ? checkAndFix(input) : checkScript(input);
       lastPronouncer = checked.cache.pronouncer;

@@ -7,6 +7,7 @@ import { loadWordTable } from '../data/wordTable';
 import { expandPaths } from './files';
 import { EXIT_OK, EXIT_USAGE, type CliIO } from './io';
 import { readScript } from './readScript';
+import type { FixSource } from './writeFixes';
 
 export interface LoadedScript {
   file: string;
@@ -14,14 +15,20 @@ export interface LoadedScript {
   text: string;
   analysis: Analysis;
   problems: Problem[];
+  /** The bytes as read, kept when the command may write the file back (writeFixed). */
+  source?: FixSource;
 }
 
-/** Every script named on the command line, analysed and linted; `scope` overrides @set-scope. */
+/**
+ * Every script named on the command line, analysed and linted; `scope` overrides @set-scope;
+ * `forWriting` keeps each file's bytes for writing it back.
+ */
 export function loadScripts(
   io: CliIO,
   positionals: string[],
   command: string,
   scope?: SetScope,
+  forWriting = false,
 ): { scripts: LoadedScript[]; code: number } {
   const { files, missing } = expandPaths(positionals, io.cwd, io.fs);
   let code = EXIT_OK;
@@ -37,7 +44,7 @@ export function loadScripts(
   const scripts: LoadedScript[] = [];
   for (const file of files) {
     const shown = file === '-' ? '<stdin>' : relative(io.cwd, file) || basename(file);
-    const read = readScript(io, file, shown, command);
+    const read = readScript(io, file, shown, command, forWriting);
     if ('error' in read) {
       io.stderr(`${read.error}\n`);
       code = EXIT_USAGE;
@@ -47,6 +54,7 @@ export function loadScripts(
       io.stderr(`rungs ${command}: ${shown}:1:1: ${read.cut}\n`);
       code = EXIT_USAGE;
     }
+    if (read.notUtf8) io.stderr(`rungs ${command}: ${shown}:${read.notUtf8.line}:${read.notUtf8.column}: ${read.notUtf8.message}\n`);
     const checked = checkScript({
       text: read.text,
       path: read.path,
@@ -54,7 +62,7 @@ export function loadScripts(
       data,
       ...(scope ? { adjust: (o) => ({ ...o, setScope: scope }) } : {}),
     });
-    scripts.push({ file, shown, text: read.text, analysis: checked.analysis, problems: checked.problems });
+    scripts.push({ file, shown, text: read.text, analysis: checked.analysis, problems: checked.problems, source: read.source });
   }
   return { scripts, code };
 }

@@ -7,9 +7,10 @@ import type { SetScope } from '../core/types';
 import { SET_RULE_IDS } from '../rules/setRules';
 import { parseArgs } from './args';
 import { formatBalance, formatSetsCsv, formatSetsJson, formatSetsTable, type BalancedFile, type SetsFile } from './formatSets';
-import { UsageError, type CliIO } from './io';
+import { EXIT_USAGE, UsageError, type CliIO } from './io';
 import { loadScripts, type LoadedScript } from './scripts';
 import type { Command } from './main';
+import { writeFixed } from './writeFixes';
 
 const USAGE = [
   'Usage: rungs sets FILE|FOLDER|- ... [--by script|rung] [--format table|csv|json]',
@@ -45,7 +46,7 @@ export const setsCommand: Command = {
     if (!args.positionals.length) throw new UsageError('give at least one script file or folder');
     const format = (args.flags.get('format') as string | undefined) ?? 'table';
     const by = args.flags.get('by') as SetScope | undefined;
-    const { scripts, code } = loadScripts(io, args.positionals, 'sets', by);
+    const { scripts, code } = loadScripts(io, args.positionals, 'sets', by, balance && args.flags.has('fix'));
     if (balance) return balanceScripts(io, scripts, { seed: seedText === undefined ? 1 : Number(seedText), fix: args.flags.has('fix'), format }, code);
     const out: SetsFile[] = scripts.map((s) => ({
       file: s.shown,
@@ -66,8 +67,13 @@ function balanceScripts(io: CliIO, scripts: LoadedScript[], o: { seed: number; f
     let written = false;
     if (o.fix && result.edits.length) {
       const fixed = applyFixes(s.text, [{ title: 'Balance sets', edits: result.edits }]);
-      io.fs.writeFile(s.file, fixed.text);
-      written = true;
+      // As `rungs lint --fix` writes: in the file's own encoding, every other byte kept, and not
+      // over a file that changed since it was read.
+      const failed = s.source ? writeFixed(io.fs, s.file, s.source, fixed.text) : 'the file was not read for writing';
+      if (failed) {
+        io.stderr(`rungs sets: ${s.shown}:1:1: ${failed}\n`);
+        code = EXIT_USAGE;
+      } else written = true;
     }
     out.push({ file: s.shown, result, written, ms });
   }

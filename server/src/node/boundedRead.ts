@@ -3,6 +3,7 @@
 // Shared by the CLI and the language server.
 import { formatBytes, MAX_SCRIPT_BYTES } from '../core/limits';
 import { closeSync, constants, fstatSync, openSync, readSync, realpathSync, statSync } from 'node:fs';
+import { decodeText, encodingOf, refuseNul, withoutBom } from '../core/textEncoding';
 
 /** Largest script, config or lexicon file read, in bytes (README "Limits"): the analysis's bound. */
 export const MAX_FILE_BYTES = MAX_SCRIPT_BYTES;
@@ -55,9 +56,21 @@ export function readBytesBounded(path: string, limit = MAX_FILE_BYTES): Buffer {
   }
 }
 
-/** A regular file's text (UTF-8), bounded as readBytesBounded. */
+/**
+ * Text from a file's bytes: UTF-8 (a byte that is not UTF-8 read as U+FFFD), or UTF-16 after its
+ * byte-order mark; without the mark. Text with a NUL in it is refused with where it stands
+ * (core/textEncoding.ts).
+ */
+export function textOfBytes(bytes: Buffer): string {
+  const encoding = encodingOf(bytes);
+  const text = withoutBom(encoding === 'utf-8' ? bytes.toString('utf8') : decodeText(bytes, encoding, false));
+  refuseNul(text);
+  return text;
+}
+
+/** A regular file's text (textOfBytes), bounded as readBytesBounded. */
 export function readTextBounded(path: string, limit = MAX_FILE_BYTES): string {
-  return readBytesBounded(path, limit).toString('utf8');
+  return textOfBytes(readBytesBounded(path, limit));
 }
 
 /** True for a regular file (following links); false for folders, pipes, devices and missing paths. */
@@ -99,7 +112,7 @@ export function readStdinBounded(limit = MAX_FILE_BYTES): string {
     total += n;
     if (total > limit) throw new ReadRefused(`larger than ${formatBytes(limit)}`);
   }
-  return Buffer.concat(chunks, total).toString('utf8');
+  return textOfBytes(Buffer.concat(chunks, total));
 }
 
 /**
@@ -117,8 +130,19 @@ export function readTextPrefix(path: string, limit = MAX_FILE_BYTES): string {
       if (got === 0) break;
       n += got;
     }
-    const lastBreak = Math.max(buf.lastIndexOf(0x0a, n - 1), buf.lastIndexOf(0x0d, n - 1));
-    return buf.subarray(0, lastBreak + 1).toString('utf8');
+    const encoding = encodingOf(buf.subarray(0, n));
+    let text: string;
+    if (encoding === 'utf-8') {
+      const lastBreak = Math.max(buf.lastIndexOf(0x0a, n - 1), buf.lastIndexOf(0x0d, n - 1));
+      text = buf.subarray(0, lastBreak + 1).toString('utf8');
+    } else {
+      // UTF-16: whole code units, then whole lines of the text.
+      const units = decodeText(buf.subarray(0, n - (n % 2)), encoding, false);
+      text = units.slice(0, Math.max(units.lastIndexOf('\n'), units.lastIndexOf('\r')) + 1);
+    }
+    text = withoutBom(text);
+    refuseNul(text);
+    return text;
   } finally {
     closeSync(fd);
   }
