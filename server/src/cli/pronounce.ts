@@ -2,7 +2,8 @@
 // --estimate the dictionary (and morphology on its stems) is skipped and the trained estimator
 // answers alone, so anyone can compare its guesses with the dictionary's entries.
 import { rankNote } from '../core/g2p/estimator';
-import { ALTERNATIVES, ESTIMATOR_HOW } from '../core/lts/estimate';
+import { ALTERNATIVES, ESTIMATOR_HOW, HIATUS_HOW } from '../core/lts/estimate';
+import { hiatusOf } from '../core/hiatus';
 import { letterToSound } from '../core/lts/letterToSound';
 import { tokenize } from '../core/tokenize';
 import { toIpa } from '../core/phones';
@@ -16,12 +17,15 @@ import type { Command } from './main';
 const percent = (share: number): string => `${(100 * share).toFixed(share >= 0.1 ? 0 : 1)} %`;
 
 function estimateOnly(word: string, data: ReturnType<typeof loadWordTable>): Pronunciation {
-  const candidates = data.estimate(word, ALTERNATIVES);
+  // A diaeresis between two vowels (core/hiatus.ts): estimated with the vowels apart.
+  const hiatus = hiatusOf(word);
+  const spelling = hiatus?.plain ?? word;
+  const candidates = data.estimate(spelling, ALTERNATIVES, undefined, hiatus?.at);
   const base = { variant: 0, variants: [], variantMissed: false };
   if (candidates !== undefined && candidates.length > 0) {
-    return { ...base, phones: candidates[0].phones, source: 'estimate', how: ESTIMATOR_HOW, alternatives: candidates };
+    return { ...base, phones: candidates[0].phones, source: 'estimate', how: hiatus ? HIATUS_HOW : ESTIMATOR_HOW, alternatives: candidates };
   }
-  return { ...base, phones: letterToSound(word), source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
+  return { ...base, phones: letterToSound(spelling), source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
 }
 
 /** One block per word: phones, IPA, syllables, source, and the estimator's alternatives. */

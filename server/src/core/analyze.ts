@@ -350,7 +350,7 @@ export function analyze(input: AnalyzeInput): AnalyzeOutput {
     input.reuse && input.reuse.key === key ? input.reuse.pronouncer : new Pronouncer(input.data, overrides, options.wcm);
   for (const o of script.overrides) {
     if (o.variant === null) continue;
-    const listed = input.data.pronunciations(o.word)?.length ?? 0;
+    const listed = pronouncer.listed(o.word).length;
     if (o.variant < 1 || o.variant > listed) {
       const at = { line: o.line, character: o.character, endLine: o.line, endCharacter: o.character + o.written.length };
       findings.push(finding(at, { kind: 'variant-not-listed', word: o.written, listed, variant: o.variant }));

@@ -4,6 +4,7 @@
 // when no model is loaded). Whatever did not come from the dictionary or an override is marked,
 // so every display can say it is an estimate.
 import type { Candidate } from './g2p/decode';
+import { hiatusOf, plainSpelling } from './hiatus';
 import { estimatePronunciation } from './lts/estimate';
 import { lg10wf, zipf } from './frequency';
 import { isVowel, parsePhones } from './phones';
@@ -49,8 +50,9 @@ export class Pronouncer {
     for (const o of overrides) this.overrides.set(o.word, o);
   }
 
+  /** The override of a spoken word; one written without the diaeresis ("@say Anais") also applies to "Anaïs". */
   override(word: string): Override | undefined {
-    return this.overrides.get(word);
+    return this.overrides.get(word) ?? this.overrides.get(plainSpelling(word));
   }
 
   /** Scores a lower-case spoken word, optionally choosing a listed variant (1-based). */
@@ -66,7 +68,11 @@ export class Pronouncer {
 
   private compute(spoken: string, variant: number | null): WordScore {
     const p = this.pronounce(spoken, variant);
-    const count = this.frequencyCount(spoken);
+    // A word with a diaeresis between two vowels is counted by its plain spelling when it is that
+    // listed word ("naïve" is "naive"), not when it was told apart from it ("Gaël" is not "Gael",
+    // G EY1 L: unseen).
+    const plain = plainSpelling(spoken);
+    const count = plain === spoken || this.listed(spoken).length > 0 ? this.frequencyCount(plain) : 0;
     return {
       ...p,
       syllables: countSyllables(p.phones),
@@ -93,10 +99,24 @@ export class Pronouncer {
     return parts.length && Number.isFinite(min) ? min : 0;
   }
 
+  /**
+   * The dictionary's pronunciations of a spoken word. A word with vowels marked to be said apart
+   * ("Thaïs", core/hiatus.ts) is looked up by its plain spelling and keeps only the listed
+   * pronunciations that say them apart (numbered among themselves): "thais" is listed as T AY1 Z,
+   * one syllable, so "Thaïs" is estimated instead. Without a model to align them, all are kept.
+   */
+  listed(spoken: string): string[][] {
+    const hiatus = hiatusOf(spoken);
+    const listed = this.data.pronunciations(hiatus?.plain ?? spoken);
+    if (!listed) return [];
+    const variants = listed.map(parsePhones);
+    if (hiatus === null || !this.data.keepsHiatus) return variants;
+    return variants.filter((phones) => this.data.keepsHiatus!(hiatus.plain, phones, hiatus.at) !== false);
+  }
+
   pronounce(spoken: string, variant: number | null): Pronunciation {
-    const listed = this.data.pronunciations(spoken);
-    const variants = listed ? listed.map(parsePhones) : [];
-    const o = this.overrides.get(spoken);
+    const variants = this.listed(spoken);
+    const o = this.override(spoken);
     let wanted = variant;
     if (o && o.phones.length && wanted === null) {
       return { phones: o.phones, source: 'override', variant: 0, variants, how: `override (${o.origin})`, variantMissed: false, alternatives: [] };

@@ -6,6 +6,7 @@
 import { ABBREVIATIONS, CURRENCIES, LEADING_ELISIONS, type Abbreviation, type Currency } from './abbreviations';
 import { BARE, isAsciiLetter, MAX_BARE_LENGTH, plainWord } from './plainWords';
 import { amountWords, cardinal, DIGIT_WORDS, isYear, moneyWords, ordinal, pluralise, yearWords } from './numberWords';
+import { keepHiatusMarks } from './hiatus';
 
 export interface Token {
   /** The written token as in the text, e.g. "Dr.", "3:30", "don't", "record(2)". */
@@ -131,9 +132,10 @@ function letterRunEnd(text: string, j: number): number {
 }
 
 /**
- * The dictionary form of a written word: ASCII apostrophes, lower case, and for Latin-script words
- * no diacritics (the dictionary spells "cafe", "naive"). Other scripts keep their marks, which
- * carry vowels there, and are only composed (NFC) and lower-cased.
+ * The lookup form of a written word: ASCII apostrophes, lower case, and for Latin-script words
+ * no diacritics (the dictionary spells "cafe", "jose") except a diaeresis that splits two vowels
+ * ("thaïs", "naïve": core/hiatus.ts; dictionary lookups use the plain spelling). Other scripts
+ * keep their marks, which carry vowels there, and are only composed (NFC) and lower-cased.
  */
 export function lookupForm(raw: string): string {
   // Most words are plain ASCII and many already lower case: return those without allocating.
@@ -148,7 +150,9 @@ export function lookupForm(raw: string): string {
 
 function unicodeLookupForm(raw: string): string {
   const w = raw.replace(CURLY_APOSTROPHES, "'").replace(SOFT_HYPHEN, '').normalize('NFD');
-  return (NON_LATIN_LETTER.test(w) ? w : w.replace(MARKS, '')).normalize('NFC').toLowerCase();
+  if (NON_LATIN_LETTER.test(w)) return w.normalize('NFC').toLowerCase();
+  // A diaeresis that splits two vowels stays (core/hiatus.ts): "Thaïs" is not "thais".
+  return (w.includes('\u0308') ? keepHiatusMarks(w) : w.replace(MARKS, '')).normalize('NFC').toLowerCase();
 }
 
 function push(

@@ -307,5 +307,10 @@ export interface WordData {
    * are used instead). `prior`, a reading built by morphology, is weighed with the estimator's
    * own (core/g2p/estimator.ts).
    */
-  estimate?(word: string, k: number, prior?: readonly string[]): Candidate[] | undefined;
+  estimate?(word: string, k: number, prior?: readonly string[], hiatus?: readonly number[]): Candidate[] | undefined;
+  /**
+   * Whether a pronunciation of a lower-case spelling says the vowels at each hiatus apart
+   * (core/hiatus.ts), by the estimator's alignment; undefined when no model is available.
+   */
+  keepsHiatus?(word: string, phones: string[], hiatus: readonly number[]): boolean | undefined;
 }

@@ -9,7 +9,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { brotliDecompressSync } from 'node:zlib';
 import type { Candidate } from '../core/g2p/decode';
-import { estimateCandidates, type Estimator } from '../core/g2p/estimator';
+import { estimateCandidates, keepsHiatus, type Estimator } from '../core/g2p/estimator';
 import { parseModels, type G2pModel } from '../core/g2p/model';
 import { readModelImage, writeModelImage } from '../core/g2p/modelImage';
 import { writeFileAtomic } from '../node/atomicWrite';
@@ -107,7 +107,13 @@ export function loadEstimator(dataDir: string): Estimator | Error {
 }
 
 /** Up to `k` estimated pronunciations of a lower-case spelling; undefined without a model. */
-export function estimateWith(dataDir: string, word: string, k: number, prior?: readonly string[]): Candidate[] | undefined {
+export function estimateWith(dataDir: string, word: string, k: number, prior?: readonly string[], hiatus?: readonly number[]): Candidate[] | undefined {
   const estimator = loadEstimator(dataDir);
-  return estimator instanceof Error ? undefined : estimateCandidates(estimator, word, k, prior);
+  return estimator instanceof Error ? undefined : estimateCandidates(estimator, word, k, prior, hiatus);
+}
+
+/** Whether a pronunciation says the vowels at each hiatus apart; undefined without a model. */
+export function keepsHiatusWith(dataDir: string, word: string, phones: string[], hiatus: readonly number[]): boolean | undefined {
+  const estimator = loadEstimator(dataDir);
+  return estimator instanceof Error ? undefined : keepsHiatus(estimator, word, phones, hiatus);
 }

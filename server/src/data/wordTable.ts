@@ -5,7 +5,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import type { Candidate } from '../core/g2p/decode';
 import type { WordData } from '../core/types';
-import { estimateWith } from './pronounceModel';
+import { estimateWith, keepsHiatusWith } from './pronounceModel';
 
 export class WordTable implements WordData {
   private readonly text: string;
@@ -20,8 +20,12 @@ export class WordTable implements WordData {
     this.offsets = offsets;
   }
 
-  estimate(word: string, k: number, prior?: readonly string[]): Candidate[] | undefined {
-    return this.modelDir === null ? undefined : estimateWith(this.modelDir, word, k, prior);
+  estimate(word: string, k: number, prior?: readonly string[], hiatus?: readonly number[]): Candidate[] | undefined {
+    return this.modelDir === null ? undefined : estimateWith(this.modelDir, word, k, prior, hiatus);
+  }
+
+  keepsHiatus(word: string, phones: string[], hiatus: readonly number[]): boolean | undefined {
+    return this.modelDir === null ? undefined : keepsHiatusWith(this.modelDir, word, phones, hiatus);
   }
 
   /** Number of distinct words in the table. */

@@ -12,7 +12,7 @@ export const duplicateItem: Rule = {
   category: 'item',
   docs: [
     'Compares the spoken text of every item (before any `|` trailer), ignoring case, punctuation,',
-    'spacing and the accents of Latin letters (as words are looked up), so "Come in." and "come in!"',
+    'spacing and the accents of Latin letters (a diaeresis too), so "Come in." and "come in!"',
     'are the same item, and so are "Café au lait." and "cafe au lait". Each repeat is reported with the',
     'line and rung of the first one. A repeated item counts twice in its rung\'s median and in',
     'matched-set checks. The repeat is marked unnecessary (shown faded in editors). The quick fix',

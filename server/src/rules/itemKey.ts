@@ -1,12 +1,13 @@
 // The key duplicate-item compares items by, and a quick path for the usual plain item. Kept apart
 // from the rule so the rule file stays its metadata and check.
+import { plainSpelling } from '../core/hiatus';
 import { lookupForm } from '../core/tokenize';
 import type { RungAnalysis } from '../core/types';
 
 /**
  * Two items are the same when their spoken words match, ignoring case, accents, punctuation and
- * spacing: the key is the text without the accents of Latin letters (as words are looked up:
- * "Café" is spoken "cafe"), in lower case, with every run of other characters one space. The rule
+ * spacing: the key is the text without the accents of Latin letters ("Café" is spoken "cafe",
+ * and "Zoë" is keyed "zoe" though looked up with its diaeresis), in lower case, with every run of other characters one space. The rule
  * compares key numbers (keyHash) and builds keys only when two numbers meet.
  */
 export function spokenKey(text: string): string {
@@ -18,9 +19,10 @@ const LETTER_RUN = /[\p{L}\p{M}'\u2018\u2019\u02bc\u2032]+/gu;
 
 export function generalSpokenKey(text: string): string {
   // Each run of letters in its lookup form (core/tokenize.ts: lower case, ASCII apostrophes, a
-  // Latin-script word without its accents), so the key ignores what word lookups ignore.
+  // Latin-script word without its accents) with its plain spelling (no diaeresis either: "Zoë
+  // came" repeats "Zoe came"), so the key ignores the accents of Latin letters.
   return text
-    .replace(LETTER_RUN, lookupForm)
+    .replace(LETTER_RUN, (run) => plainSpelling(lookupForm(run)))
     .replace(/[^\p{L}\p{N}'()]+/gu, ' ')
     .trim();
 }

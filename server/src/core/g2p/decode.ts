@@ -184,6 +184,21 @@ function phonesOf(m: G2pModel, h: number): string {
   return parts.reverse().join(' ');
 }
 
+/** Per model, the vowel phones (those with a stress digit) of each graphone, for `hiatus`. */
+const vowelCounts = new WeakMap<G2pModel, Uint8Array>();
+
+function vowelsOf(m: G2pModel): Uint8Array {
+  let counts = vowelCounts.get(m);
+  if (counts === undefined) {
+    counts = new Uint8Array(m.graphones.length);
+    m.graphones.forEach((g, t) => {
+      for (const p of g?.phones ?? []) if (/\d$/.test(p)) counts![t]++;
+    });
+    vowelCounts.set(m, counts);
+  }
+  return counts;
+}
+
 /** Whether graphone `t` spells target[pos...] (once stress is removed, unless `exact`). */
 function fits(m: G2pModel, t: number, target: string[], pos: number, exact: boolean): boolean {
   const bare = exact ? m.graphones[t]!.phones : m.graphones[t]!.bare;
@@ -196,11 +211,21 @@ function fits(m: G2pModel, t: number, target: string[], pos: number, exact: bool
  * Up to `k` pronunciations of a lower-case spelling, best first. Empty when the model has no
  * graphone for some letter (a letter outside a-z and the apostrophe, for example). With a
  * `target` (phones without stress digits), only pronunciations that are the target once stress
- * is removed are searched: that is how stress is put on a given phone sequence.
+ * is removed are searched: that is how stress is put on a given phone sequence. With `hiatus`
+ * (indices of the letters before which two vowels are said apart, core/hiatus.ts), the two
+ * letters say two vowels: a graphone reading both of them says two, or the graphones either side
+ * of the point each say one.
  */
-export function decode(m: G2pModel, word: string, k = 5, beam = DEFAULT_BEAM, target?: string[], exact = false): Candidate[] {
+export function decode(m: G2pModel, word: string, k = 5, beam = DEFAULT_BEAM, target?: string[], exact = false, hiatus?: readonly number[]): Candidate[] {
   const n = word.length;
   if (n === 0) return [];
+  // marks[b] = 1: a hiatus lies between letters b - 1 and b.
+  let marks: Uint8Array | null = null;
+  if (hiatus?.length) {
+    marks = new Uint8Array(n + 1);
+    for (const b of hiatus) if (b > 0 && b < n) marks[b] = 1;
+  }
+  const vowels = marks === null ? null : vowelsOf(m);
   used = 0;
   const twoLetters = m.maxLetters > 1;
   // Scores are in the model's units (log10 x scale), so they are sums of integers.
@@ -219,6 +244,13 @@ export function decode(m: G2pModel, word: string, k = 5, beam = DEFAULT_BEAM, ta
     if (count === 0) continue;
     for (let len = 1; len <= 2 && i + len <= n; len++) {
       if (len === 2 && !twoLetters) break;
+      // Vowels the graphone must say: two when it reads both letters of a hiatus, one when it
+      // ends or starts at one.
+      let needVowels = 0;
+      if (marks !== null) {
+        if (len === 2 && marks[i + 1]) needVowels = 2;
+        else if (marks[i] === 1 || marks[i + len] === 1) needVowels = 1;
+      }
       const range = m.byLetters.get(len === 1 ? word[i] : word.slice(i, i + 2));
       if (range === undefined) continue;
       const { lo, hi } = range;
@@ -230,6 +262,7 @@ export function decode(m: G2pModel, word: string, k = 5, beam = DEFAULT_BEAM, ta
         expand(m, hState[h], lo, hi);
         const { cost, state: after } = expansion;
         for (let t = lo; t < hi; t++) {
+          if (needVowels > 0 && vowels![t] < needVowels) continue;
           const score = base + cost[t - lo];
           // Far below the best so far at this letter: it could not enter the beam.
           if (score < bucket.best - prune) continue;

@@ -56,10 +56,31 @@ export function rankNote(phones: readonly string[]): string {
   return n === 1 ? '' : n === 0 ? 'no main stress: ranked after readings with one' : `${n} main stresses: ranked after readings with one`;
 }
 
-/** log10 probability of one exact pronunciation under a model, -Infinity when it cannot spell it. */
-function scoreOf(m: G2pModel, word: string, phones: string[]): number {
-  return decode(m, word, 1, BEAM, phones, true)[0]?.log10 ?? -Infinity;
+/**
+ * log10 probability of one exact pronunciation under a model, -Infinity when it cannot spell it
+ * (with `hiatus`, saying the vowels at each hiatus apart: decode.ts).
+ */
+function scoreOf(m: G2pModel, word: string, phones: string[], hiatus?: readonly number[]): number {
+  return decode(m, word, 1, BEAM, phones, true, hiatus)[0]?.log10 ?? -Infinity;
 }
+
+/** A hiatus point (before letter b) as seen by the right-to-left model, which reads `word` reversed. */
+const mirrored = (hiatus: readonly number[] | undefined, n: number): number[] | undefined => hiatus?.map((b) => n - b);
+
+/**
+ * Whether a pronunciation says the vowels at each hiatus of a spelling apart (core/hiatus.ts):
+ * some alignment of it with the spelling under the left-to-right model gives the two letters two
+ * vowels, or (when the model has no graphone for the alignment the pronunciation needs, as for
+ * the dictionary's "israel" IH1 Z R IY0 AH0 L) it has at least as many vowels as the best
+ * reading with the vowels apart.
+ */
+export function keepsHiatus(e: Estimator, word: string, phones: string[], hiatus: readonly number[]): boolean {
+  if (scoreOf(e.forward, word, phones, hiatus) > -Infinity) return true;
+  const apart = estimateCandidates(e, word, 1, undefined, hiatus)[0];
+  return apart !== undefined && vowelCount(phones) >= vowelCount(apart.phones);
+}
+
+const vowelCount = (phones: readonly string[]): number => phones.filter((p) => /\d$/.test(p)).length;
 
 /**
  * Weight of a reading built by morphology on dictionary stems (`prior` below), as a log10 bonus
@@ -76,19 +97,21 @@ export const PRIOR_BONUS = 1;
 /**
  * Up to `k` ranked pronunciations of a lower-case spelling (empty when the letters are unknown).
  * `prior`, a reading built by morphology, joins the proposals, scored by the models like the
- * others and weighted by PRIOR_BONUS.
+ * others and weighted by PRIOR_BONUS. With `hiatus`, every reading says the vowels at each
+ * hiatus apart (core/hiatus.ts).
  */
-export function estimateCandidates(e: Estimator, word: string, k: number, prior?: readonly string[]): Candidate[] {
+export function estimateCandidates(e: Estimator, word: string, k: number, prior?: readonly string[], hiatus?: readonly number[]): Candidate[] {
   if (word.length > MAX_ESTIMATED_LETTERS) return [];
-  if (e.reverse === null && prior === undefined) return decode(e.forward, word, k, BEAM);
+  if (e.reverse === null && prior === undefined) return decode(e.forward, word, k, BEAM, undefined, false, hiatus);
   const { forward, reverse } = e;
   const drow = reversed([...word]).join('');
+  const wolg = mirrored(hiatus, word.length);
   const proposals = new Map<string, string[]>();
   // One more from the left-to-right model, whatever `k`, so the first answer does not depend on
   // how many alternatives the caller shows (a hover shows five).
-  for (const c of decode(forward, word, Math.max(k, PROPOSALS + 1), BEAM)) proposals.set(c.phones.join(' '), c.phones);
+  for (const c of decode(forward, word, Math.max(k, PROPOSALS + 1), BEAM, undefined, false, hiatus)) proposals.set(c.phones.join(' '), c.phones);
   if (reverse !== null) {
-    for (const c of decode(reverse, drow, PROPOSALS, BEAM)) {
+    for (const c of decode(reverse, drow, PROPOSALS, BEAM, undefined, false, wolg)) {
       const phones = reversed(c.phones);
       proposals.set(phones.join(' '), phones);
     }
@@ -97,7 +120,7 @@ export function estimateCandidates(e: Estimator, word: string, k: number, prior?
   if (prior !== undefined) proposals.set(priorKey!, [...prior]);
   const scored: { phones: string[]; log10: number }[] = [];
   for (const [key, phones] of proposals) {
-    let log10 = scoreOf(forward, word, phones) + (reverse === null ? 0 : scoreOf(reverse, drow, reversed(phones)));
+    let log10 = scoreOf(forward, word, phones, hiatus) + (reverse === null ? 0 : scoreOf(reverse, drow, reversed(phones), wolg));
     if (key === priorKey) log10 += PRIOR_BONUS;
     if (log10 > -Infinity) scored.push({ phones, log10 });
   }

@@ -9,6 +9,7 @@
 import type { Candidate } from '../g2p/decode';
 import type { WordData } from '../types';
 import { letterToSound } from './letterToSound';
+import { hiatusOf } from '../hiatus';
 
 export interface Estimate {
   /** CMU ARPAbet phones, stress digits on vowels. */
@@ -220,6 +221,8 @@ function analyzeWord(word: string, data: WordData, depth: number): Analysis | un
 /** How many ranked candidates the estimator returns (shown in hovers, offered as quick fixes). */
 export const ALTERNATIVES = 5;
 export const ESTIMATOR_HOW = 'joint-sequence model';
+/** How an estimate of a word with a diaeresis between two vowels was made (core/hiatus.ts). */
+export const HIATUS_HOW = 'joint-sequence model, the vowels at the diaeresis said apart';
 
 /**
  * The names of the consonant letters as the CMU Pronouncing Dictionary lists the letters (its
@@ -263,9 +266,18 @@ export function spelledOut(spelling: string): string[] | undefined {
  * `phones` is empty.
  */
 export function estimatePronunciation(word: string, data: WordData): Estimate {
-  const kept = word.toLowerCase().replace(/[^a-z']/g, '');
+  const lower = word.toLowerCase();
+  const hiatus = hiatusOf(lower);
+  const kept = (hiatus?.plain ?? lower).replace(/[^a-z']/g, '');
   // Apostrophes alone are no word: nothing is estimated (the model would read "'" as 's).
   const spelling = /[a-z]/.test(kept) ? kept : '';
+  // Vowels marked to be said apart (core/hiatus.ts): the estimator reads the word with them
+  // apart; no stem or compound of listed words is looked for.
+  if (hiatus !== null && kept.length === hiatus.plain.length) {
+    const apart = data.estimate?.(spelling, ALTERNATIVES, undefined, hiatus.at);
+    if (apart !== undefined && apart.length > 0) return { phones: apart[0].phones, source: 'estimate', how: HIATUS_HOW, alternatives: apart };
+    return { phones: letterToSound(spelling), source: 'estimate', how: 'letter-to-sound rules', alternatives: [] };
+  }
   const found = spelling.length >= 4 ? analyzeWord(spelling, data, 1) : undefined;
   const letters = found === undefined ? spelledOut(spelling) : undefined;
   if (letters) return { phones: letters, source: 'estimate', how: SPELLED_HOW, alternatives: [] };
